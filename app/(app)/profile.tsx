@@ -1,0 +1,42 @@
+import { useRouter } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+
+import { PasswordForm, ProfileForm } from '@/components/profile/ProfileForms';
+import { Badge, Button, Card, Screen, Text } from '@/components/ui';
+import { useChangePasswordMutation, useSessionQuery, useSignOutMutation, useUpdateProfileMutation } from '@/lib/api/session';
+import { ROLE_LABELS } from '@/lib/roles';
+import { space } from '@/lib/theme';
+
+export default function ProfileScreen() {
+  const router = useRouter();
+  const { data: session } = useSessionQuery();
+  const update = useUpdateProfileMutation();
+  const changePassword = useChangePasswordMutation();
+  const signOut = useSignOutMutation();
+  if (!session) return null;
+  return (
+    <Screen title="Profile" subtitle={session.user.email} maxWidth={720}>
+      <Card title="You" aside={<Badge label={ROLE_LABELS[session.user.role]} tone="info" />}>
+        <ProfileForm name={session.user.name} error={update.error} saved={update.isSuccess} onSubmit={(values) => update.mutateAsync(values)} />
+      </Card>
+      <Card title="Password">
+        <PasswordForm error={changePassword.error} saved={changePassword.isSuccess} onSubmit={(values) => changePassword.mutateAsync(values)} />
+      </Card>
+      <Card title="Session">
+        <View style={styles.row}>
+          <Text variant="muted">Signed in to {session.organisation.name}.</Text>
+          <Button
+            label="Sign out"
+            variant="secondary"
+            busy={signOut.isPending}
+            onPress={() => signOut.mutate(undefined, { onSuccess: () => router.replace('/sign-in') })}
+          />
+        </View>
+      </Card>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: space.md },
+});

@@ -1,0 +1,56 @@
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+
+import { InvitationsTable } from '@/components/team/InvitationsTable';
+import { InviteForm } from '@/components/team/InviteForm';
+import { MembersTable } from '@/components/team/MembersTable';
+import { Banner, Card, Loading, Screen } from '@/components/ui';
+import { useSessionQuery } from '@/lib/api/session';
+import { useInviteMutation, useTeamQuery } from '@/lib/api/team';
+import { canManageTeam } from '@/lib/roles';
+import { breakpoints, space } from '@/lib/theme';
+
+export default function TeamScreen() {
+  const { data: session } = useSessionQuery();
+  const owner = canManageTeam(session?.user.role);
+  const team = useTeamQuery(owner);
+  const invite = useInviteMutation();
+  const { width } = useWindowDimensions();
+  if (!session) return null;
+  if (!owner) {
+    return (
+      <Screen title="Team">
+        <Banner tone="caution" title="Owners only">
+          Only an owner of the brewery can see and manage the team. Ask an owner if your role needs to change.
+        </Banner>
+      </Screen>
+    );
+  }
+  return (
+    <Screen title="Team" subtitle={`Who works at ${session.organisation.name}, and what each person may do.`}>
+      {team.isError ? <Banner tone="danger">{team.error.message}</Banner> : null}
+      <View style={[styles.columns, width >= breakpoints.wide + 240 && styles.columnsWide]}>
+        <View style={styles.main}>
+          <Card title="Members" aside={team.data ? `${team.data.members.length}` : undefined}>
+            {team.data ? <MembersTable members={team.data.members} currentUserId={session.user.id} /> : <Loading />}
+          </Card>
+          <Card title="Open invitations">{team.data ? <InvitationsTable invitations={team.data.invitations} /> : <Loading />}</Card>
+        </View>
+        <Card title="Invite someone" style={styles.side}>
+          {invite.isSuccess ? (
+            <Banner tone="success">
+              {`Invitation sent to ${invite.data.email}. The link works once and expires in 7 days.`}
+            </Banner>
+          ) : null}
+          <InviteForm error={invite.error} onSubmit={(values) => invite.mutateAsync(values)} />
+        </Card>
+      </View>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  columns: { gap: space.lg },
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  main: { flex: 2, gap: space.lg },
+  side: { flex: 1, minWidth: 320 },
+});

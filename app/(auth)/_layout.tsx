@@ -1,0 +1,18 @@
+import { Redirect, Slot, usePathname } from 'expo-router';
+
+import { AuthFrame } from '@/components/auth/AuthFrame';
+import { Loading } from '@/components/ui';
+import { useSessionQuery } from '@/lib/api/session';
+
+/** Pages for signed-out people. Someone already signed in who opens sign-in or sign-up goes home. */
+export default function SignedOutLayout() {
+  const session = useSessionQuery();
+  const pathname = usePathname();
+  if (session.isPending) return <Loading />;
+  if (session.data && (pathname === '/sign-in' || pathname === '/sign-up')) return <Redirect href="/" />;
+  return (
+    <AuthFrame>
+      <Slot />
+    </AuthFrame>
+  );
+}

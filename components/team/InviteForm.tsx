@@ -1,0 +1,39 @@
+import { Formik } from 'formik';
+import { StyleSheet, View } from 'react-native';
+
+import { inviteSchema, type InviteInput } from '@/lib/schemas/team';
+import { space } from '@/lib/theme';
+
+import { Button, FormField, FormStatus, Select, submitTo } from '../ui';
+import { roleOptions } from './role-options';
+
+interface Props {
+  onSubmit: (values: InviteInput) => Promise<unknown>;
+  error: unknown;
+}
+
+const initialValues: InviteInput = { email: '', role: 'developer' };
+
+export function InviteForm({ onSubmit, error }: Props) {
+  return (
+    <Formik<InviteInput>
+      initialValues={initialValues}
+      validationSchema={inviteSchema}
+      onSubmit={submitTo(onSubmit, { schema: inviteSchema, afterSuccess: (helpers) => helpers.resetForm() })}
+    >
+      {({ handleSubmit, isSubmitting, values, setFieldValue, errors, touched }) => (
+        <View style={styles.form}>
+          <FormStatus error={error} />
+          <FormField name="email" label="E-mail of the person to invite" inputMode="email" autoCapitalize="none" autoComplete="off" />
+          <Select label="Role" value={values.role} options={roleOptions} onChange={(role) => setFieldValue('role', role)} error={touched.role ? errors.role : undefined} />
+          <Button label="Send invitation" busy={isSubmitting} onPress={() => handleSubmit()} style={styles.submit} />
+        </View>
+      )}
+    </Formik>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  submit: { alignSelf: 'flex-start' },
+});

@@ -1,0 +1,26 @@
+import Svg, { Circle, Path } from 'react-native-svg';
+
+export type IconName = 'home' | 'team' | 'mail' | 'person' | 'signOut';
+
+/** Line icons drawn for Fizzwright on a 24-unit grid; decorative, so hidden from screen readers. */
+const paths: Record<IconName, { d: string[]; circles?: [number, number, number][] }> = {
+  home: { d: ['M4 11l8-7 8 7', 'M6 10v10h12V10', 'M10 20v-5h4v5'] },
+  team: { d: ['M3 20c0-3 3-5 6-5s6 2 6 5', 'M15 15c3 0 6 2 6 5'], circles: [[9, 9, 3.2], [16.5, 9.5, 2.6]] },
+  mail: { d: ['M3 6h18v12H3z', 'M3 7l9 6 9-6'] },
+  person: { d: ['M5 20c0-4 3-6 7-6s7 2 7 6'], circles: [[12, 8, 3.6]] },
+  signOut: { d: ['M14 4H5v16h9', 'M10 12h10', 'M17 8l4 4-4 4'] },
+};
+
+export function Icon({ name, color, size = 24 }: { name: IconName; color: string; size?: number }) {
+  const { d, circles = [] } = paths[name];
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none" accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
+      {d.map((path) => (
+        <Path key={path} d={path} stroke={color} strokeWidth={1.9} strokeLinecap="round" strokeLinejoin="round" />
+      ))}
+      {circles.map(([cx, cy, r]) => (
+        <Circle key={`${cx}-${cy}`} cx={cx} cy={cy} r={r} stroke={color} strokeWidth={1.9} />
+      ))}
+    </Svg>
+  );
+}

@@ -1,0 +1,17 @@
+import { Link, type Href } from 'expo-router';
+import { StyleSheet } from 'react-native';
+
+import { colors, fonts } from '@/lib/theme';
+
+/** An inline link to a page of the app; a real anchor on the web. */
+export function TextLink({ href, children }: { href: Href; children: string }) {
+  return (
+    <Link href={href} style={styles.link}>
+      {children}
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
+});

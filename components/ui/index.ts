@@ -1,0 +1,18 @@
+export { Badge, type Tone } from './Badge';
+export { Banner } from './Banner';
+export { Button } from './Button';
+export { Card } from './Card';
+export { EmptyState } from './EmptyState';
+export { FormField } from './FormField';
+export { FormStatus } from './FormStatus';
+export { submitTo } from './forms';
+export { Icon, type IconName } from './Icon';
+export { Logo, LogoMark } from './Logo';
+export { NumberField } from './NumberField';
+export { Screen } from './Screen';
+export { Select, type SelectOption } from './Select';
+export { Table, type Column } from './Table';
+export { Text } from './Text';
+export { TextField } from './TextField';
+export { Loading } from './Loading';
+export { TextLink } from './TextLink';

@@ -1,0 +1,58 @@
+import { env } from '../env';
+import type { ErrorBody } from './types';
+
+/** An API failure, with the server's code, message and per-field messages. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+/**
+ * Calls the API. The session travels in an httpOnly cookie (`credentials: 'include'`), so scripts never hold it.
+ * Resolves with the parsed JSON (undefined for 204) or throws an ApiError.
+ */
+export async function apiRequest<T>(path: string, options: { method?: Method; body?: unknown; signal?: AbortSignal } = {}): Promise<T> {
+  const { method = 'GET', body, signal } = options;
+  let response: Response;
+  try {
+    response = await fetch(`${env.apiUrl}/api${path}`, {
+      method,
+      credentials: 'include',
+      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+      signal,
+    });
+  } catch (error) {
+    if ((error as Error).name === 'AbortError') throw error;
+    throw new ApiError(0, 'network', 'Cannot reach the Fizzwright server. Check your connection and try again.');
+  }
+  if (response.status === 204) return undefined as T;
+  const text = await response.text();
+  let parsed: unknown;
+  try {
+    parsed = text ? JSON.parse(text) : undefined;
+  } catch {
+    parsed = undefined;
+  }
+  if (!response.ok) {
+    const error = (parsed as ErrorBody | undefined)?.error;
+    throw new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.fields);
+  }
+  return parsed as T;
+}
+
+export const api = {
+  get: <T>(path: string, signal?: AbortSignal) => apiRequest<T>(path, { signal }),
+  post: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'POST', body: body ?? {} }),
+  patch: <T>(path: string, body: unknown) => apiRequest<T>(path, { method: 'PATCH', body }),
+  delete: <T>(path: string) => apiRequest<T>(path, { method: 'DELETE' }),
+};

@@ -1,0 +1,96 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import type { AcceptInvitationInput, ForgotPasswordInput, ResetPasswordInput, SignInInput, SignUpInput } from '../schemas/auth';
+import type { ChangePasswordInput, ProfileInput } from '../schemas/team';
+import { api, ApiError } from './client';
+import { staleTimes } from './query-client';
+import type { InvitationPreview, ServerInfo, Session } from './types';
+
+export const sessionKeys = {
+  current: ['session'] as const,
+  invitation: (token: string) => ['invitation', token] as const,
+  serverInfo: ['server-info'] as const,
+};
+
+/** The signed-in session, or null when nobody is signed in. */
+export function useSessionQuery() {
+  return useQuery({
+    queryKey: sessionKeys.current,
+    staleTime: staleTimes.session,
+    queryFn: async ({ signal }) => {
+      try {
+        return await api.get<Session>('/auth/session', signal);
+      } catch (error) {
+        if (error instanceof ApiError && error.status === 401) return null;
+        throw error;
+      }
+    },
+  });
+}
+
+/** Server facts the client needs (version, whether mail goes to the local outbox). */
+export function useServerInfoQuery() {
+  return useQuery({ queryKey: sessionKeys.serverInfo, staleTime: staleTimes.static, queryFn: ({ signal }) => api.get<ServerInfo>('/health', signal) });
+}
+
+/**
+ * Replaces who is signed in: drops everything cached for the previous person but keeps the session query
+ * itself (screens are subscribed to it), so they re-render with the new value at once.
+ */
+function useReplaceSession() {
+  const queryClient = useQueryClient();
+  return (session: Session | null) => {
+    queryClient.setQueryData(sessionKeys.current, session);
+    queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== sessionKeys.current[0] && query.queryKey[0] !== sessionKeys.serverInfo[0] });
+  };
+}
+
+export function useSignInMutation() {
+  const start = useReplaceSession();
+  return useMutation({ mutationFn: (input: SignInInput) => api.post<Session>('/auth/sign-in', input), onSuccess: start });
+}
+
+export function useSignUpMutation() {
+  const start = useReplaceSession();
+  return useMutation({ mutationFn: (input: SignUpInput) => api.post<Session>('/auth/sign-up', input), onSuccess: start });
+}
+
+export function useSignOutMutation() {
+  const replace = useReplaceSession();
+  return useMutation({ mutationFn: () => api.post<void>('/auth/sign-out'), onSuccess: () => replace(null) });
+}
+
+export function useForgotPasswordMutation() {
+  return useMutation({ mutationFn: (input: ForgotPasswordInput) => api.post<{ message: string }>('/auth/forgot-password', input) });
+}
+
+export function useResetPasswordMutation() {
+  const start = useReplaceSession();
+  return useMutation({ mutationFn: (input: ResetPasswordInput) => api.post<Session>('/auth/reset-password', input), onSuccess: start });
+}
+
+export function useInvitationQuery(token: string | undefined) {
+  return useQuery({
+    queryKey: sessionKeys.invitation(token ?? ''),
+    enabled: Boolean(token),
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<InvitationPreview>(`/auth/invitations/${encodeURIComponent(token ?? '')}`, signal),
+  });
+}
+
+export function useAcceptInvitationMutation() {
+  const start = useReplaceSession();
+  return useMutation({ mutationFn: (input: AcceptInvitationInput) => api.post<Session>('/auth/accept-invitation', input), onSuccess: start });
+}
+
+export function useUpdateProfileMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: ProfileInput) => api.patch<Session>('/profile', input),
+    onSuccess: (session) => queryClient.setQueryData(sessionKeys.current, session),
+  });
+}
+
+export function useChangePasswordMutation() {
+  return useMutation({ mutationFn: (input: ChangePasswordInput) => api.post<Session>('/profile/password', input) });
+}

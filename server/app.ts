@@ -1,0 +1,61 @@
+import cookieParser from 'cookie-parser';
+import cors from 'cors';
+import express, { Router, type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+
+import { config } from './config';
+import { logger } from './logger';
+import { apiNotFound, errorHandler, requireJsonBody } from './middleware/errors';
+import { authRouter } from './routes/auth';
+import { healthRouter } from './routes/health';
+import { outboxRouter } from './routes/outbox';
+import { profileRouter } from './routes/profile';
+import { teamRouter } from './routes/team';
+import { webApp } from './web';
+
+/** Every API route, mounted under /api. Each route's first handler is `allow(...)`, which says who may call it. */
+export function apiRouter(): Router {
+  const api = Router();
+  api.use('/health', healthRouter);
+  api.use('/auth', authRouter);
+  api.use('/team', teamRouter);
+  api.use('/profile', profileRouter);
+  api.use('/outbox', outboxRouter);
+  return api;
+}
+
+/** Builds the Express app (API under /api plus the exported web app) without listening. */
+export function createApp(): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      // The exported app loads its fonts and images from this origin; RN Web injects style rules at run time.
+      contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': null } },
+      strictTransportSecurity: config.appUrl.startsWith('https://'),
+    }),
+  );
+  if (config.env !== 'test') {
+    app.use(
+      pinoHttp({
+        logger,
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
+      }),
+    );
+  }
+
+  const api = Router();
+  if (config.env === 'development') api.use(cors({ origin: config.corsOrigins, credentials: true }));
+  api.use(requireJsonBody);
+  api.use(express.json({ limit: '200kb' }));
+  api.use(cookieParser());
+  api.use(apiRouter());
+  api.use(apiNotFound);
+  app.use('/api', api);
+  app.use(webApp(config.webDistDir));
+  app.use(errorHandler);
+  return app;
+}

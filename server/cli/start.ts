@@ -1,0 +1,10 @@
+import { main } from '../index';
+import { logger } from '../logger';
+import { buildWeb, webBuildIsStale } from './build-web';
+
+/** `npm start`: build the web app when it is missing or stale, then serve it with the API. */
+if (webBuildIsStale()) buildWeb();
+main().catch((error: unknown) => {
+  logger.fatal({ err: error }, 'Fizzwright could not start');
+  process.exit(1);
+});

@@ -1,0 +1,74 @@
+import fs from 'node:fs';
+import path from 'node:path';
+
+import { Sequelize, Transaction } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
+
+import { config } from './config';
+import { logger } from './logger';
+import { migrations } from './migrations';
+import { Invitation } from './models/invitation';
+import { Organisation } from './models/organisation';
+import { OutboxMessage } from './models/outbox-message';
+import { PasswordReset } from './models/password-reset';
+import { User } from './models/user';
+import { forgetCachedUser } from './services/sessions';
+
+export { Invitation, Organisation, OutboxMessage, PasswordReset, User };
+
+function createSequelize(databasePath: string): Sequelize {
+  if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
+  return new Sequelize({
+    dialect: 'sqlite',
+    storage: databasePath,
+    logging: false,
+    // One connection: SQLite serialises writes anyway, and a single handle keeps PRAGMAs in force.
+    pool: { max: 1, min: 1, idle: 60_000 },
+    transactionType: Transaction.TYPES.IMMEDIATE,
+  });
+}
+
+export const sequelize = createSequelize(config.databasePath);
+
+for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage]) model.initModel(sequelize);
+
+Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
+User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
+Organisation.hasMany(Invitation, { foreignKey: 'organisationId', as: 'invitations' });
+Invitation.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
+Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
+User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
+PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Organisation.hasMany(OutboxMessage, { foreignKey: 'organisationId', as: 'outboxMessages' });
+OutboxMessage.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+// Any change to a user row (role, active, password) must reach the sign-in check at once.
+User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));
+User.addHook('afterDestroy', (user: User) => forgetCachedUser(user.id));
+User.addHook('afterBulkUpdate', () => forgetCachedUser());
+
+/** Opens the database, sets SQLite's safety and concurrency settings, and applies pending migrations. */
+export async function prepareDatabase(): Promise<void> {
+  await sequelize.query('PRAGMA foreign_keys = ON');
+  await sequelize.query('PRAGMA journal_mode = WAL');
+  await sequelize.query('PRAGMA busy_timeout = 5000');
+  await sequelize.query('PRAGMA synchronous = NORMAL');
+  const umzug = new Umzug({
+    migrations,
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+  const applied = await umzug.up();
+  if (applied.length > 0) logger.info({ migrations: applied.map((m) => m.name) }, 'database migrated');
+}
+
+/** Answers whether the database responds; used by the health check. */
+export async function databaseIsUp(): Promise<boolean> {
+  try {
+    await sequelize.query('SELECT 1');
+    return true;
+  } catch {
+    return false;
+  }
+}

@@ -1,0 +1,32 @@
+import type { AddressInfo } from 'node:net';
+
+import { createApp } from './app';
+import { config } from './config';
+import { prepareDatabase } from './db';
+import { logger } from './logger';
+import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
+
+/** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
+export async function main(): Promise<number> {
+  await prepareDatabase();
+  if (config.seedDemo && (await seedDemoIfEmpty())) console.log(`\n${demoAccountsText()}\n`);
+  const app = createApp();
+  return new Promise((resolve) => {
+    const server = app.listen(config.port, config.host, () => {
+      const { port } = server.address() as AddressInfo;
+      if (!config.appUrlConfigured) config.appUrl = `http://localhost:${port}`;
+      console.log(`Fizzwright is listening on http://localhost:${port} (database ${config.databasePath})`);
+      resolve(port);
+    });
+    const stop = () => server.close(() => process.exit(0));
+    process.once('SIGINT', stop);
+    process.once('SIGTERM', stop);
+  });
+}
+
+if (require.main === module) {
+  main().catch((error: unknown) => {
+    logger.fatal({ err: error }, 'Fizzwright could not start');
+    process.exit(1);
+  });
+}

@@ -1,0 +1,44 @@
+import { ROLE_LABELS, type Role } from '../../lib/roles';
+import { config } from '../config';
+
+interface Rendered {
+  subject: string;
+  text: string;
+  html: string;
+}
+
+const escapeHtml = (value: string) =>
+  value.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
+
+function render(subject: string, paragraphs: string[], link: { url: string; label: string }, footer: string): Rendered {
+  const text = [...paragraphs, '', `${link.label}: ${link.url}`, '', footer, '', '— Fizzwright'].join('\n');
+  const html = [
+    '<div style="font-family:sans-serif;color:#1B2422;max-width:560px">',
+    ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
+    `<p><a href="${escapeHtml(link.url)}" style="background:#1E4A43;color:#fff;padding:10px 16px;border-radius:8px;text-decoration:none">${escapeHtml(link.label)}</a></p>`,
+    `<p style="color:#4E5A57;font-size:13px">${escapeHtml(footer)}</p>`,
+    '</div>',
+  ].join('\n');
+  return { subject, text, html };
+}
+
+export function invitationMail(input: { breweryName: string; inviterName: string | null; role: Role; token: string }): Rendered {
+  const url = `${config.appUrl}/accept-invitation?token=${encodeURIComponent(input.token)}`;
+  const who = input.inviterName ? `${input.inviterName} has invited you` : 'You have been invited';
+  return render(
+    `Join ${input.breweryName} on Fizzwright`,
+    [`${who} to join ${input.breweryName} on Fizzwright as ${ROLE_LABELS[input.role].toLowerCase()}.`, 'Choose your name and a password to get started.'],
+    { url, label: 'Accept the invitation' },
+    'This link works once and expires in 7 days. If you did not expect it, ignore this message.',
+  );
+}
+
+export function passwordResetMail(input: { name: string; token: string }): Rendered {
+  const url = `${config.appUrl}/reset-password?token=${encodeURIComponent(input.token)}`;
+  return render(
+    'Reset your Fizzwright password',
+    [`Hello ${input.name},`, 'Someone (we hope you) asked to reset the password of your Fizzwright account.'],
+    { url, label: 'Choose a new password' },
+    'This link works once and expires in 1 hour. If you did not ask for it, ignore this message: your password stays as it is.',
+  );
+}

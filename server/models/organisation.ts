@@ -1,0 +1,21 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+/** A brewery. Every record in Fizzwright belongs to exactly one. */
+export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Organisation.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        name: { type: DataTypes.STRING(80), allowNull: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'organisations', underscored: true },
+    );
+  }
+}

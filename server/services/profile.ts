@@ -1,0 +1,21 @@
+import type { Session } from '../../lib/api/types';
+import type { ChangePasswordInput, ProfileInput } from '../../lib/schemas/team';
+import { User } from '../db';
+import { badRequest } from '../errors';
+import { sessionFor } from './auth';
+import { checkPassword, hashPassword } from './passwords';
+
+export async function updateProfile(userId: number, input: ProfileInput): Promise<Session> {
+  await User.update({ name: input.name }, { where: { id: userId }, individualHooks: true });
+  return sessionFor(userId);
+}
+
+/** Changes the password after checking the current one; other sessions of the account end. */
+export async function changePassword(userId: number, input: ChangePasswordInput): Promise<User> {
+  const user = await User.findByPk(userId, { rejectOnEmpty: true });
+  if (!(await checkPassword(input.currentPassword, user.passwordHash))) {
+    throw badRequest('The current password is not right.', { currentPassword: 'This is not your current password.' });
+  }
+  await user.update({ passwordHash: await hashPassword(input.newPassword), tokenVersion: user.tokenVersion + 1 });
+  return user;
+}

@@ -1,0 +1,16 @@
+import type { Page } from '@playwright/test';
+
+export const PHONE = { width: 390, height: 844 };
+export const WIDE = { width: 1440, height: 900 };
+
+/** An address on the server global-setup started. */
+export const url = (path: string) => `${process.env.E2E_BASE_URL}${path}`;
+
+export const shot = (page: Page, name: string) => page.screenshot({ path: `${__dirname}/screenshots/${name}.png`, fullPage: true });
+
+export async function signIn(page: Page, email: string, password: string) {
+  await page.goto(url('/sign-in'));
+  await page.getByLabel('E-mail', { exact: true }).fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}

@@ -1,0 +1,31 @@
+import type { Express } from 'express';
+import request from 'supertest';
+
+import { startApp, stopApp } from './helpers';
+
+let app: Express;
+beforeAll(async () => {
+  app = await startApp();
+});
+afterAll(stopApp);
+
+describe('GET /api/health', () => {
+  it('answers ok with the database state and version, to anyone', async () => {
+    const res = await request(app).get('/api/health').expect(200);
+    expect(res.body).toMatchObject({ status: 'ok', db: 'ok', version: expect.stringMatching(/^\d+\.\d+\.\d+/), outbox: true });
+  });
+
+  it('sets the usual security headers', async () => {
+    const res = await request(app).get('/api/health');
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+    expect(res.headers['x-powered-by']).toBeUndefined();
+  });
+});
+
+describe('unknown API routes', () => {
+  it('answer 404 in the uniform error shape', async () => {
+    const res = await request(app).get('/api/no-such-thing').expect(404);
+    expect(res.body).toEqual({ error: { code: 'not_found', message: expect.any(String) } });
+  });
+});

@@ -1,0 +1,49 @@
+import type { Express } from 'express';
+import request from 'supertest';
+
+import type { Session } from '@/lib/api/types';
+import type { Role } from '@/lib/roles';
+import { createApp } from '@/server/app';
+import { OutboxMessage, prepareDatabase, sequelize } from '@/server/db';
+
+export type Agent = ReturnType<typeof request.agent>;
+
+/** A migrated database of this test file's own and the app on top of it. */
+export async function startApp(): Promise<Express> {
+  await prepareDatabase();
+  return createApp();
+}
+
+export async function stopApp(): Promise<void> {
+  await sequelize.close();
+}
+
+let counter = 0;
+export const uniqueEmail = (prefix = 'person') => `${prefix}-${++counter}-${Math.random().toString(36).slice(2, 7)}@brewery.test`;
+
+/** Signs up a new brewery and returns an agent carrying its owner's session cookie. */
+export async function signUpOwner(app: Express, overrides: Partial<{ breweryName: string; name: string; email: string; password: string }> = {}) {
+  const agent = request.agent(app);
+  const body = { breweryName: 'Test Ferments', name: 'Olwen Test', email: uniqueEmail('owner'), password: 'correct-horse-1', ...overrides };
+  const res = await agent.post('/api/auth/sign-up').send(body).expect(201);
+  return { agent, session: res.body as Session, email: body.email, password: body.password };
+}
+
+/** The one-time link in the newest outbox message to an address. */
+export async function linkFromOutbox(to: string): Promise<{ path: string; token: string }> {
+  const message = await OutboxMessage.findOne({ where: { to }, order: [['id', 'DESC']] });
+  if (!message) throw new Error(`no message to ${to}`);
+  const match = /https?:\/\/[^/\s]+(\/[^\s?]+)\?token=([^\s]+)/.exec(message.text);
+  if (!match) throw new Error(`no link in message to ${to}`);
+  return { path: match[1], token: decodeURIComponent(match[2]) };
+}
+
+/** Invites someone with a role, accepts the invitation, and returns an agent signed in as them. */
+export async function addMember(app: Express, owner: Agent, role: Role, name = `Member ${role}`) {
+  const email = uniqueEmail(role);
+  await owner.post('/api/team/invitations').send({ email, role }).expect(201);
+  const { token } = await linkFromOutbox(email);
+  const agent = request.agent(app);
+  const res = await agent.post('/api/auth/accept-invitation').send({ token, name, password: 'member-pass-1' }).expect(201);
+  return { agent, session: res.body as Session, email, password: 'member-pass-1' };
+}
