@@ -8,9 +8,12 @@ import { config } from './config';
 import { logger } from './logger';
 import { apiNotFound, errorHandler, requireJsonBody } from './middleware/errors';
 import { authRouter } from './routes/auth';
+import { benchRouter } from './routes/bench';
+import { bottleFormatsRouter } from './routes/bottle-formats';
+import { calculationsRouter } from './routes/calculations';
 import { healthRouter } from './routes/health';
 import { outboxRouter } from './routes/outbox';
-import { profileRouter } from './routes/profile';
+import { organisationRouter, profileRouter } from './routes/profile';
 import { teamRouter } from './routes/team';
 import { webApp } from './web';
 
@@ -21,7 +24,11 @@ export function apiRouter(): Router {
   api.use('/auth', authRouter);
   api.use('/team', teamRouter);
   api.use('/profile', profileRouter);
+  api.use('/organisation', organisationRouter);
   api.use('/outbox', outboxRouter);
+  api.use('/calculations', calculationsRouter);
+  api.use('/bottle-formats', bottleFormatsRouter);
+  if (config.benchRoutes) api.use('/bench', benchRouter);
   return api;
 }
 

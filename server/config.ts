@@ -23,6 +23,7 @@ const envSchema = yup.object({
   NUTRIENT_DATA_DIR: yup.string().default('../shared/data/usda-sr25'),
   LOG_LEVEL: yup.string().oneOf(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']),
   CORS_ORIGINS: yup.string().default('http://localhost:8081'),
+  BENCH_ROUTES: yup.boolean().default(false),
 });
 
 export interface Config {
@@ -48,6 +49,8 @@ export interface Config {
   logLevel: string;
   corsOrigins: string[];
   webDistDir: string;
+  /** Mounts /api/bench, the do-nothing reference endpoint `npm run bench` measures against. */
+  benchRoutes: boolean;
 }
 
 const DEV_SECRET = 'fizzwright-development-secret-not-for-production';
@@ -87,6 +90,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     logLevel: parsed.LOG_LEVEL ?? (nodeEnv === 'test' ? 'silent' : 'info'),
     corsOrigins: parsed.CORS_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean),
     webDistDir: path.resolve(ROOT_DIR, 'dist'),
+    benchRoutes: parsed.BENCH_ROUTES,
   };
 }
 

@@ -7,6 +7,7 @@ import { SequelizeStorage, Umzug } from 'umzug';
 import { config } from './config';
 import { logger } from './logger';
 import { migrations } from './migrations';
+import { BottleFormat } from './models/bottle-format';
 import { Invitation } from './models/invitation';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
@@ -14,7 +15,7 @@ import { PasswordReset } from './models/password-reset';
 import { User } from './models/user';
 import { forgetCachedUser } from './services/sessions';
 
-export { Invitation, Organisation, OutboxMessage, PasswordReset, User };
+export { BottleFormat, Invitation, Organisation, OutboxMessage, PasswordReset, User };
 
 function createSequelize(databasePath: string): Sequelize {
   if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
@@ -30,7 +31,7 @@ function createSequelize(databasePath: string): Sequelize {
 
 export const sequelize = createSequelize(config.databasePath);
 
-for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage]) model.initModel(sequelize);
+for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat]) model.initModel(sequelize);
 
 Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
 User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -41,6 +42,7 @@ User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
 PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Organisation.hasMany(OutboxMessage, { foreignKey: 'organisationId', as: 'outboxMessages' });
 OutboxMessage.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Organisation.hasMany(BottleFormat, { foreignKey: 'organisationId', as: 'bottleFormats' });
 
 // Any change to a user row (role, active, password) must reach the sign-in check at once.
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));

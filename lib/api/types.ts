@@ -1,4 +1,5 @@
 import type { Role } from '../roles';
+import type { UnitSystem } from '../units';
 
 /** The uniform error body every API error carries. */
 export interface ErrorBody {
@@ -8,6 +9,8 @@ export interface ErrorBody {
 export interface Organisation {
   id: number;
   name: string;
+  /** The brewery's line between non-alcoholic and alcoholic, % ABV. */
+  abvLimitPercent: number;
 }
 
 export interface SessionUser {
@@ -15,6 +18,7 @@ export interface SessionUser {
   name: string;
   email: string;
   role: Role;
+  unitSystem: UnitSystem;
 }
 
 export interface Session {

@@ -1,6 +1,8 @@
 import * as yup from 'yup';
 
 import { ROLES, type Role } from '../roles';
+import { UNIT_SYSTEMS, type UnitSystem } from '../units';
+import { numberField } from './numbers';
 import { email, password, personName } from './common';
 
 const role = () =>
@@ -20,6 +22,17 @@ export type ChangeRoleInput = yup.InferType<typeof changeRoleSchema>;
 
 export const profileSchema = yup.object({ name: personName() });
 export type ProfileInput = yup.InferType<typeof profileSchema>;
+
+export const preferencesSchema = yup.object({
+  unitSystem: yup.string().oneOf(UNIT_SYSTEMS, 'Choose metric or US units.').required('Choose metric or US units.') as yup.StringSchema<UnitSystem>,
+});
+export type PreferencesInput = yup.InferType<typeof preferencesSchema>;
+
+export const organisationSchema = yup.object({
+  name: yup.string().trim().min(2, 'Enter the brewery name (at least 2 characters).').max(80, 'Keep the brewery name under 80 characters.').required('Enter the brewery name.'),
+  abvLimitPercent: numberField('Alcohol limit', { positive: true, max: 5, unit: '% ABV' }).required('Enter the alcohol limit in % ABV.'),
+});
+export type OrganisationInput = yup.InferType<typeof organisationSchema>;
 
 export const changePasswordSchema = yup.object({
   currentPassword: yup.string().max(200, 'That password is too long.').required('Enter your current password.'),

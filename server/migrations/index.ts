@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 
 import * as accounts from './0001-accounts';
+import * as calculations from './0002-calculations';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -8,4 +9,7 @@ type Step = (params: { context: QueryInterface }) => Promise<void>;
  * Every migration, in order. Listed by hand rather than found by glob so that the same list works under
  * tsx, Jest and any bundler. Add a new file and append it here; never edit a migration that has shipped.
  */
-export const migrations: { name: string; up: Step; down: Step }[] = [{ name: '0001-accounts', ...accounts }];
+export const migrations: { name: string; up: Step; down: Step }[] = [
+  { name: '0001-accounts', ...accounts },
+  { name: '0002-calculations', ...calculations },
+];

@@ -4,6 +4,8 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {
   declare id: CreationOptional<number>;
   declare name: string;
+  /** The line between non-alcoholic and alcoholic drinks, % ABV (0.5 in the US; other countries differ). */
+  declare abvLimitPercent: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -12,6 +14,7 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
       {
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         name: { type: DataTypes.STRING(80), allowNull: false },
+        abvLimitPercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,6 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 import type { Role } from '../../lib/roles';
+import type { UnitSystem } from '../../lib/units';
 import type { Organisation } from './organisation';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -13,6 +14,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare active: CreationOptional<boolean>;
   /** Raised when a password changes: tokens signed with an older value stop working. */
   declare tokenVersion: CreationOptional<number>;
+  declare unitSystem: CreationOptional<UnitSystem>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -26,6 +28,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         passwordHash: { type: DataTypes.STRING(100), allowNull: false },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         tokenVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        unitSystem: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'metric' },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

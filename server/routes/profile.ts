@@ -1,16 +1,37 @@
 import { Router } from 'express';
 
-import { changePasswordSchema, profileSchema, type ChangePasswordInput, type ProfileInput } from '../../lib/schemas/team';
+import {
+  changePasswordSchema,
+  organisationSchema,
+  preferencesSchema,
+  profileSchema,
+  type ChangePasswordInput,
+  type OrganisationInput,
+  type PreferencesInput,
+  type ProfileInput,
+} from '../../lib/schemas/team';
 import { allow, authOf } from '../middleware/access';
 import { validate } from '../middleware/validate';
 import { sessionFor } from '../services/auth';
-import { changePassword, updateProfile } from '../services/profile';
+import { changePassword, updateOrganisation, updatePreferences, updateProfile } from '../services/profile';
 import { SESSION_COOKIE, sessionCookieOptions, signSessionToken } from '../services/sessions';
 
 export const profileRouter = Router();
 
 profileRouter.patch('/', allow('signed-in'), validate({ body: profileSchema }), async (_req, res) => {
   res.json(await updateProfile(authOf(res).userId, res.locals.body as ProfileInput));
+});
+
+profileRouter.patch('/preferences', allow('signed-in'), validate({ body: preferencesSchema }), async (_req, res) => {
+  res.json(await updatePreferences(authOf(res).userId, res.locals.body as PreferencesInput));
+});
+
+/** Mounted at /api/organisation: the brewery's settings. */
+export const organisationRouter = Router();
+
+organisationRouter.patch('/', allow(['owner']), validate({ body: organisationSchema }), async (_req, res) => {
+  const auth = authOf(res);
+  res.json(await updateOrganisation(auth.organisationId, auth.userId, res.locals.body as OrganisationInput));
 });
 
 profileRouter.post('/password', allow('signed-in'), validate({ body: changePasswordSchema }), async (_req, res) => {

@@ -1,5 +1,6 @@
 import { Organisation, sequelize, User } from '../db';
 import { logger } from '../logger';
+import { seedStarterFormats } from '../services/bottle-formats';
 import { hashPassword } from '../services/passwords';
 
 /**
@@ -19,6 +20,7 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
   const hashes = await Promise.all(DEMO_ACCOUNTS.map((account) => hashPassword(account.password)));
   await sequelize.transaction(async (transaction) => {
     const brewery = await Organisation.create({ name: DEMO_BREWERY }, { transaction });
+    await seedStarterFormats(brewery.id, transaction);
     for (const [i, account] of DEMO_ACCOUNTS.entries()) {
       await User.create(
         { organisationId: brewery.id, email: account.email, name: account.name, role: account.role, passwordHash: hashes[i] },

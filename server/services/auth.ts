@@ -6,6 +6,7 @@ import { Invitation, Organisation, PasswordReset, sequelize, User } from '../db'
 import { conflict, gone, HttpError, notFound } from '../errors';
 import { mailer } from '../mail/mailer';
 import { passwordResetMail } from '../mail/templates';
+import { seedStarterFormats } from './bottle-formats';
 import { checkPassword, decoyPasswordHash, hashPassword } from './passwords';
 import { invitationStatus, toSession } from './serialize';
 import { hashToken, HOUR_MS, newOneTimeToken } from './tokens';
@@ -24,10 +25,13 @@ export async function signUp(input: SignUpInput): Promise<{ user: User; session:
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
     const organisation = await Organisation.create({ name: input.breweryName }, { transaction });
+    await seedStarterFormats(organisation.id, transaction);
     const user = await User.create(
       { organisationId: organisation.id, email: input.email, name: input.name, role: 'owner', passwordHash },
       { transaction },
     );
+    await user.reload({ transaction });
+    await organisation.reload({ transaction });
     return { user, session: toSession(user, organisation) };
   });
 }
@@ -119,5 +123,5 @@ export async function acceptInvitation(input: AcceptInvitationInput): Promise<{ 
       { transaction },
     );
   });
-  return { user, session: toSession(user, invitation.organisation!) };
+  return { user, session: await sessionFor(user.id) };
 }

@@ -1,12 +1,23 @@
 import type { Session } from '../../lib/api/types';
-import type { ChangePasswordInput, ProfileInput } from '../../lib/schemas/team';
-import { User } from '../db';
+import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '../../lib/schemas/team';
+import { Organisation, User } from '../db';
 import { badRequest } from '../errors';
 import { sessionFor } from './auth';
 import { checkPassword, hashPassword } from './passwords';
 
 export async function updateProfile(userId: number, input: ProfileInput): Promise<Session> {
   await User.update({ name: input.name }, { where: { id: userId }, individualHooks: true });
+  return sessionFor(userId);
+}
+
+export async function updatePreferences(userId: number, input: PreferencesInput): Promise<Session> {
+  await User.update({ unitSystem: input.unitSystem }, { where: { id: userId }, individualHooks: true });
+  return sessionFor(userId);
+}
+
+/** The brewery's own settings (owners only): its name and its alcohol limit. */
+export async function updateOrganisation(organisationId: number, userId: number, input: OrganisationInput): Promise<Session> {
+  await Organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent }, { where: { id: organisationId } });
   return sessionFor(userId);
 }
 

@@ -10,8 +10,8 @@ export function toMember(user: User): Member {
 
 export function toSession(user: User, organisation: Organisation): Session {
   return {
-    user: { id: user.id, name: user.name, email: user.email, role: user.role },
-    organisation: { id: organisation.id, name: organisation.name },
+    user: { id: user.id, name: user.name, email: user.email, role: user.role, unitSystem: user.unitSystem },
+    organisation: { id: organisation.id, name: organisation.name, abvLimitPercent: organisation.abvLimitPercent },
   };
 }
 

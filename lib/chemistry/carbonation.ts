@@ -1,0 +1,293 @@
+import { CO2_G_PER_VOLUME, MOLAR_VOLUME_STP_L } from './constants';
+import { abvPercent, EXPECTED_YIELD, fermentationProducts, yieldFactor, type FermentableSugar, type YieldCase } from './fermentation';
+import { equilibriumAt, maxCo2MolForGauge, molToVolumes, volumesToMol, type Container, type Equilibrium } from './pressure';
+import { residualVolumesAfterOpen } from './solubility';
+import { SUGARS, type SugarType } from './sugars';
+
+export type FindingLevel = 'ok' | 'caution' | 'danger';
+
+export interface Finding {
+  level: FindingLevel;
+  code: string;
+  message: string;
+  /** The numbers behind the finding, with their units in the key names. */
+  values?: Record<string, number>;
+}
+
+/** Sugar that an ingredient brings into the liquid, already resolved from the ingredient library. */
+export interface IngredientSugar {
+  name: string;
+  /** Grams of sugars reaching the liquid (grams × sugars per gram × share reaching the liquid). */
+  sugarG: number;
+  /** Share of those sugars that yeast can ferment (0–1). */
+  fermentableShare: number;
+  /** Grams of fat the ingredient brings (for the rancidity caution). */
+  fatG: number;
+  /** True when the solids stay in the bottle. */
+  inBottle: boolean;
+}
+
+export interface CarbonationInput {
+  liquidMl: number;
+  headspaceMl: number;
+  sugars: { type: SugarType; grams: number }[];
+  ingredients: IngredientSugar[];
+  /** CO2 already dissolved at sealing, volumes; or, when absent, estimated from lastOpenTempC. */
+  residualCo2Volumes?: number | null;
+  lastOpenTempC?: number | null;
+  sealedTempC: number;
+  temperaturesC: number[];
+  maxWorkingPressureBar?: number | null;
+  baseAbvPercent: number;
+  yield: YieldCase;
+  abvLimitPercent: number;
+  /** Solids or purée left in the bottle even without library ingredients. */
+  solidsInBottle?: boolean;
+}
+
+export interface CaseResult {
+  co2: { residualVolumes: number; fromSugarVolumes: number; totalVolumes: number };
+  alcohol: { addedAbvPercent: number; totalAbvPercent: number };
+  pressures: (Equilibrium & { overRating: boolean })[];
+}
+
+export interface CarbonationResult extends CaseResult {
+  sugar: { fermentableG: number; fermentableGPerL: number; sweetOnlyG: number; fromIngredientsG: number; addedG: number };
+  cases: { worst: CaseResult; expected: CaseResult };
+  findings: Finding[];
+  assumptions: { name: string; value: string; source: string }[];
+}
+
+/** Temperatures the model is meant for, °C. Outside them the solubility fit and the ideal-gas headspace are extrapolated. */
+export const MODEL_RANGE_C = { min: 0, max: 50 } as const;
+/** Fermentable sugar above this, g/L, is far beyond bottle conditioning (common practice, no source: 4–12 g/L is usual). */
+export const ABSURD_SUGAR_G_PER_L = 40;
+/** Within this share of the rating, pressure is a caution. */
+export const CAUTION_SHARE_OF_RATING = 0.75;
+
+const round = (value: number, digits = 2) => Math.round(value * 10 ** digits) / 10 ** digits;
+
+function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients'>) {
+  const portions: FermentableSugar[] = [];
+  let addedG = 0;
+  let fromIngredientsG = 0;
+  let sweetOnlyG = 0;
+  for (const { type, grams } of input.sugars) {
+    const info = SUGARS[type];
+    const sugarG = grams * info.sugarFraction;
+    addedG += sugarG * info.fermentableShare;
+    sweetOnlyG += sugarG * (1 - info.fermentableShare);
+    portions.push({ grams: sugarG * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole });
+  }
+  for (const ingredient of input.ingredients) {
+    const fermentable = ingredient.sugarG * ingredient.fermentableShare;
+    fromIngredientsG += fermentable;
+    sweetOnlyG += ingredient.sugarG - fermentable;
+    // Mixed fruit sugars are counted with sucrose's yield per gram, the highest of the common sugars.
+    portions.push({ grams: fermentable, molarMass: SUGARS.sucrose.molarMass, co2PerMole: SUGARS.sucrose.co2PerMole });
+  }
+  return { portions, addedG, fromIngredientsG, sweetOnlyG };
+}
+
+/** Volumes of CO2 in the liquid when it is sealed, from the given value or from the temperature it was last open at. */
+export function residualVolumes(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC'>): number {
+  if (input.residualCo2Volumes !== undefined && input.residualCo2Volumes !== null) return input.residualCo2Volumes;
+  if (input.lastOpenTempC !== undefined && input.lastOpenTempC !== null) return residualVolumesAfterOpen(input.lastOpenTempC);
+  return 0;
+}
+
+function caseResult(input: CarbonationInput, container: Container, portions: FermentableSugar[], which: YieldCase): CaseResult {
+  const residual = residualVolumes(input);
+  const products = fermentationProducts(portions, yieldFactor(which));
+  const totalMol = volumesToMol(residual, input.liquidMl) + products.co2Mol;
+  const added = abvPercent(products.ethanolG, input.liquidMl);
+  const rating = input.maxWorkingPressureBar ?? null;
+  return {
+    co2: { residualVolumes: residual, fromSugarVolumes: molToVolumes(products.co2Mol, input.liquidMl), totalVolumes: molToVolumes(totalMol, input.liquidMl) },
+    alcohol: { addedAbvPercent: added, totalAbvPercent: input.baseAbvPercent + added },
+    pressures: input.temperaturesC.map((tempC) => {
+      const eq = equilibriumAt(container, totalMol, tempC);
+      return { ...eq, overRating: rating !== null && eq.gaugeBar > rating };
+    }),
+  };
+}
+
+function pressureFindings(worst: CaseResult, rating: number | null): Finding[] {
+  if (worst.pressures.length === 0) return [];
+  const hottest = worst.pressures.reduce((a, b) => (b.tempC > a.tempC ? b : a));
+  const at = `${round(hottest.gaugeBar, 2)} bar (${round(hottest.gaugePsi, 0)} psi) gauge at ${hottest.tempC} °C`;
+  const values = { tempC: hottest.tempC, gaugeBar: round(hottest.gaugeBar, 3), gaugePsi: round(hottest.gaugePsi, 1) };
+  if (rating === null) {
+    return [{ level: 'caution', code: 'no-rating', message: `Worst case ${at}. No bottle rating was given to compare it with: choose a bottle format.`, values }];
+  }
+  const withRating = { ...values, ratingBar: rating };
+  if (hottest.gaugeBar > rating) {
+    return [{ level: 'danger', code: 'pressure-over-rating', message: `Worst case ${at} is over the bottle's ${rating} bar rating. Use less sugar, stronger bottles, or keep them colder.`, values: withRating }];
+  }
+  if (hottest.gaugeBar > rating * CAUTION_SHARE_OF_RATING) {
+    return [{ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${at} is within 25 % of the bottle's ${rating} bar rating.`, values: withRating }];
+  }
+  return [{ level: 'ok', code: 'pressure-within-rating', message: `Worst case ${at} stays well within the bottle's ${rating} bar rating.`, values: withRating }];
+}
+
+function alcoholFindings(worst: CaseResult, expected: CaseResult, limit: number): Finding[] {
+  const total = worst.alcohol.totalAbvPercent;
+  const values = { worstTotalAbvPercent: round(total, 3), expectedTotalAbvPercent: round(expected.alcohol.totalAbvPercent, 3), limitAbvPercent: limit };
+  const text = `${round(total, 2)} % ABV in the worst case`;
+  if (total > limit) return [{ level: 'danger', code: 'alcohol-over-limit', message: `${text}: over the ${limit} % ABV limit for non-alcoholic drinks.`, values }];
+  if (total > limit * 0.8) return [{ level: 'caution', code: 'alcohol-near-limit', message: `${text}: within 20 % of the ${limit} % ABV limit.`, values }];
+  return [{ level: 'ok', code: 'alcohol-within-limit', message: `${text}, under the ${limit} % ABV limit.`, values }];
+}
+
+function inputFindings(input: CarbonationInput, fermentableGPerL: number): Finding[] {
+  const findings: Finding[] = [];
+  const temps = [...input.temperaturesC, input.sealedTempC, ...(input.lastOpenTempC != null ? [input.lastOpenTempC] : [])];
+  const outside = temps.filter((t) => t < MODEL_RANGE_C.min || t > MODEL_RANGE_C.max);
+  if (outside.length > 0) {
+    findings.push({
+      level: 'caution',
+      code: 'temperature-out-of-range',
+      message: `${outside.map((t) => `${t} °C`).join(', ')} is outside the ${MODEL_RANGE_C.min}–${MODEL_RANGE_C.max} °C the model is meant for: treat those numbers as rough.`,
+      values: { minC: Math.min(...outside), maxC: Math.max(...outside) },
+    });
+  }
+  if (fermentableGPerL > ABSURD_SUGAR_G_PER_L) {
+    findings.push({
+      level: 'caution',
+      code: 'sugar-out-of-range',
+      message: `${round(fermentableGPerL, 1)} g/L of fermentable sugar is far more than bottle conditioning uses (usually 4–12 g/L). Check the amounts.`,
+      values: { fermentableGPerL: round(fermentableGPerL, 2) },
+    });
+  }
+  if (input.solidsInBottle || input.ingredients.some((i) => i.inBottle)) {
+    findings.push({
+      level: 'caution',
+      code: 'solids-in-bottle',
+      message: 'Fruit, purée or other solids stay in the bottle: fermentation and pressure keep rising as long as sugar remains. Rely on the worst case, chill on time and check a test bottle.',
+    });
+  }
+  const fatty = input.ingredients.filter((i) => i.fatG > 0.5);
+  if (fatty.length > 0) {
+    findings.push({
+      level: 'caution',
+      code: 'fatty-ingredients',
+      // Common practice, no source: fats go rancid in a wet acidic drink and flatten foam.
+      message: `${fatty.map((i) => i.name).join(', ')} bring${fatty.length === 1 ? 's' : ''} fat: expect rancid off-flavours over time and poorer foam.`,
+      values: { fatG: round(fatty.reduce((sum, i) => sum + i.fatG, 0), 2) },
+    });
+  }
+  return findings;
+}
+
+const ASSUMPTIONS: CarbonationResult['assumptions'] = [
+  { name: 'CO2 solubility', value: 'ln K0 = −60.2409 + 93.4517·(100/T) + 23.3585·ln(T/100), mol/(kg·atm)', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
+  { name: 'Headspace', value: 'ideal gas; air and water vapour at 1 atm when sealed', source: 'ideal gas law; water vapour by Buck (1981/1996)' },
+  { name: 'Fermentation', value: '1 hexose → 2 ethanol + 2 CO2; 1 sucrose + water → 4 ethanol + 4 CO2', source: 'Gay-Lussac stoichiometry' },
+  { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur: about 95 % of sugar to ethanol and CO2 (from memory)' },
+  { name: 'Mixed sugars', value: 'counted with sucrose’s yield per gram (the highest)', source: 'conservative choice' },
+  { name: 'Volume of CO2', value: `1 L at 0 °C and 1 atm = ${round(CO2_G_PER_VOLUME, 4)} g (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`, source: 'CODATA 2018 molar volume' },
+  { name: 'Alcohol', value: 'ethanol density 0.78924 g/mL at 20 °C', source: 'CRC Handbook of Chemistry and Physics' },
+  { name: 'Residual CO2 from temperature', value: 'saturation under 1 atm of CO2', source: 'common practice, no source' },
+];
+
+/** Sugar, CO2, pressure at each temperature and alcohol for one sealed container, worst and expected cases. */
+export function computeCarbonation(input: CarbonationInput): CarbonationResult {
+  const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
+  const { portions, addedG, fromIngredientsG, sweetOnlyG } = fermentableSugars(input);
+  const fermentableG = addedG + fromIngredientsG;
+  const fermentableGPerL = (fermentableG / input.liquidMl) * 1000;
+  const worst = caseResult(input, container, portions, 'worst');
+  const expected = caseResult(input, container, portions, 'expected');
+  const chosen = input.yield === 'worst' ? worst : expected;
+  return {
+    sugar: { fermentableG, fermentableGPerL, sweetOnlyG, fromIngredientsG, addedG },
+    ...chosen,
+    cases: { worst, expected },
+    findings: [
+      ...pressureFindings(worst, input.maxWorkingPressureBar ?? null),
+      ...alcoholFindings(worst, expected, input.abvLimitPercent),
+      ...inputFindings(input, fermentableGPerL),
+    ],
+    assumptions: ASSUMPTIONS,
+  };
+}
+
+export interface PrimingInput {
+  liquidMl: number;
+  headspaceMl: number;
+  targetVolumes: number;
+  residualCo2Volumes?: number | null;
+  lastOpenTempC?: number | null;
+  sugarType: SugarType;
+  sealedTempC: number;
+  highestTempC: number;
+  maxWorkingPressureBar?: number | null;
+  baseAbvPercent: number;
+  abvLimitPercent: number;
+  yield: YieldCase;
+}
+
+export interface PrimingResult {
+  /** Grams of the sugar product (as weighed) per container, and per litre. */
+  sugarG: number;
+  sugarGPerL: number;
+  residualVolumes: number;
+  addedAbvPercent: number;
+  totalAbvPercent: number;
+  /** Most of this sugar the bottle may take, worst case at highestTempC; null when no rating is known. */
+  maxSafeSugarG: number | null;
+  /** Worst-case gauge pressure at highestTempC with sugarG. */
+  worstGaugeBarAtHighest: number;
+  findings: Finding[];
+}
+
+/** Sugar for a target carbonation, the alcohol it brings, and the most sugar the bottle's rating allows. */
+export function computePriming(input: PrimingInput): PrimingResult {
+  const info = SUGARS[input.sugarType];
+  const residual = residualVolumes(input);
+  const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
+  // Grams of the product that make one mole of CO2 at the chosen yield.
+  const gramsPerCo2Mol = info.molarMass / info.co2PerMole / (info.sugarFraction * info.fermentableShare);
+  const neededMol = volumesToMol(Math.max(0, input.targetVolumes - residual), input.liquidMl);
+  const sugarG = (neededMol * gramsPerCo2Mol) / yieldFactor(input.yield);
+  const portion: FermentableSugar = { grams: sugarG * info.sugarFraction * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole };
+  const added = abvPercent(fermentationProducts([portion], yieldFactor(input.yield)).ethanolG, input.liquidMl);
+  const worstMol = volumesToMol(residual, input.liquidMl) + fermentationProducts([portion], 1).co2Mol;
+  const worstGauge = equilibriumAt(container, worstMol, input.highestTempC).gaugeBar;
+  const rating = input.maxWorkingPressureBar ?? null;
+  const maxSafeSugarG =
+    rating === null ? null : Math.max(0, (maxCo2MolForGauge(container, rating, input.highestTempC) - volumesToMol(residual, input.liquidMl)) * gramsPerCo2Mol);
+
+  const findings: Finding[] = [];
+  if (residual >= input.targetVolumes) {
+    findings.push({ level: 'ok', code: 'already-at-target', message: `The liquid already holds ${round(residual)} volumes: no sugar is needed for ${input.targetVolumes}.` });
+  }
+  if (maxSafeSugarG !== null && rating !== null) {
+    const values = { sugarG: round(sugarG, 2), maxSafeSugarG: round(maxSafeSugarG, 2), ratingBar: rating, highestTempC: input.highestTempC };
+    if (sugarG > maxSafeSugarG) {
+      findings.push({ level: 'danger', code: 'pressure-over-rating', message: `${round(sugarG, 1)} g is more than the ${round(maxSafeSugarG, 1)} g this bottle can take at ${input.highestTempC} °C in the worst case (${rating} bar rating).`, values });
+    } else if (worstGauge > rating * CAUTION_SHARE_OF_RATING) {
+      findings.push({ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${round(worstGauge)} bar at ${input.highestTempC} °C is within 25 % of the ${rating} bar rating.`, values });
+    } else {
+      findings.push({ level: 'ok', code: 'pressure-within-rating', message: `Up to ${round(maxSafeSugarG, 1)} g stays within the ${rating} bar rating at ${input.highestTempC} °C in the worst case.`, values });
+    }
+  } else {
+    findings.push({ level: 'caution', code: 'no-rating', message: 'No bottle rating was given: choose a bottle format to see the most sugar it can take.' });
+  }
+  const total = input.baseAbvPercent + added;
+  if (total > input.abvLimitPercent) {
+    findings.push({ level: 'danger', code: 'alcohol-over-limit', message: `This sugar brings the drink to ${round(total)} % ABV, over the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
+  } else if (total > input.abvLimitPercent * 0.8) {
+    findings.push({ level: 'caution', code: 'alcohol-near-limit', message: `This sugar brings the drink to ${round(total)} % ABV, within 20 % of the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
+  }
+  return {
+    sugarG,
+    sugarGPerL: (sugarG / input.liquidMl) * 1000,
+    residualVolumes: residual,
+    addedAbvPercent: added,
+    totalAbvPercent: total,
+    maxSafeSugarG,
+    worstGaugeBarAtHighest: worstGauge,
+    findings,
+  };
+}

@@ -1,0 +1,53 @@
+import convert from 'convert-units';
+
+/**
+ * Unit conversion for display and input. The API and the engine speak g, mL, L, °C and bar; the screens convert
+ * here, and nowhere else, when a person works in US units.
+ */
+export type UnitSystem = 'metric' | 'us';
+export const UNIT_SYSTEMS: UnitSystem[] = ['metric', 'us'];
+
+type Unit = 'g' | 'kg' | 'oz' | 'lb' | 'ml' | 'l' | 'fl-oz' | 'gal' | 'C' | 'F' | 'bar' | 'psi' | 'kPa';
+
+/** Converts between any two units of the same kind. */
+export function convertUnit(value: number, from: Unit, to: Unit): number {
+  if (from === to) return value;
+  return convert(value).from(from).to(to);
+}
+
+export const cToF = (c: number) => convertUnit(c, 'C', 'F');
+export const fToC = (f: number) => convertUnit(f, 'F', 'C');
+export const barToPsi = (bar: number) => convertUnit(bar, 'bar', 'psi');
+export const mlToFlOz = (ml: number) => convertUnit(ml, 'ml', 'fl-oz');
+export const flOzToMl = (flOz: number) => convertUnit(flOz, 'fl-oz', 'ml');
+export const litresToGallons = (l: number) => convertUnit(l, 'l', 'gal');
+export const gallonsToLitres = (gal: number) => convertUnit(gal, 'gal', 'l');
+export const gramsToOunces = (g: number) => convertUnit(g, 'g', 'oz');
+
+/** How a quantity of each kind is shown in each unit system. */
+export const displayUnits: Record<UnitSystem, { temperature: 'C' | 'F'; smallVolume: 'ml' | 'fl-oz'; pressure: 'bar' | 'psi' }> = {
+  metric: { temperature: 'C', smallVolume: 'ml', pressure: 'bar' },
+  us: { temperature: 'F', smallVolume: 'fl-oz', pressure: 'psi' },
+};
+
+export const unitLabels: Record<Unit, string> = {
+  g: 'g',
+  kg: 'kg',
+  oz: 'oz',
+  lb: 'lb',
+  ml: 'mL',
+  l: 'L',
+  'fl-oz': 'US fl oz',
+  gal: 'US gal',
+  C: '°C',
+  F: '°F',
+  bar: 'bar',
+  psi: 'psi',
+  kPa: 'kPa',
+};
+
+/** A number rounded for reading: `digits` decimals, trailing zeros kept so columns line up. */
+export function formatNumber(value: number, digits = 1): string {
+  if (!Number.isFinite(value)) return '–';
+  return value.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+}
