@@ -51,3 +51,20 @@ export function formatNumber(value: number, digits = 1): string {
   if (!Number.isFinite(value)) return '–';
   return value.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 }
+
+/** A temperature in the person's units, e.g. "35 °C" or "95 °F". */
+export function formatTemp(tempC: number, units: UnitSystem, digits = 0): string {
+  return units === 'us' ? `${formatNumber(cToF(tempC), digits)} °F` : `${formatNumber(tempC, digits)} °C`;
+}
+
+/** A gauge pressure in the person's units first and the other in brackets: "2.10 bar (30 psi)". */
+export function formatPressure(bar: number, units: UnitSystem): string {
+  const psi = `${formatNumber(barToPsi(bar), 0)} psi`;
+  const inBar = `${formatNumber(bar, 2)} bar`;
+  return units === 'us' ? `${psi} (${inBar})` : `${inBar} (${psi})`;
+}
+
+/** A bottle-sized volume: "500 mL" or "16.9 US fl oz". */
+export function formatSmallVolume(ml: number, units: UnitSystem): string {
+  return units === 'us' ? `${formatNumber(mlToFlOz(ml), 1)} US fl oz` : `${formatNumber(ml, 0)} mL`;
+}

@@ -22,7 +22,14 @@ export function HomeActions({ session }: { session: Session }) {
   const owner = canManageTeam(session.user.role);
   const team = useTeamQuery(owner);
   const serverInfo = useServerInfoQuery();
-  const actions: Action[] = [];
+  const actions: Action[] = [
+    {
+      title: 'Quick check',
+      text: 'How much sugar for the fizz you want, what pressure the bottle will hold when warm, and how much alcohol the same sugar makes.',
+      button: 'Open Quick check',
+      href: '/quick-check',
+    },
+  ];
   if (owner) {
     const members = team.data?.members.filter((m) => m.active).length ?? 0;
     const pending = team.data?.invitations.filter((i) => i.status === 'pending').length ?? 0;

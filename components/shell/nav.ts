@@ -4,7 +4,7 @@ import { canManageTeam } from '@/lib/roles';
 import type { IconName } from '../ui/Icon';
 
 export interface NavItem {
-  href: '/' | '/team' | '/outbox' | '/profile';
+  href: '/' | '/quick-check' | '/team' | '/outbox' | '/profile';
   label: string;
   icon: IconName;
 }
@@ -12,7 +12,10 @@ export interface NavItem {
 /** The destinations a person sees, by role. A destination appears only once it does something. */
 export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined): NavItem[] {
   const owner = canManageTeam(session.user.role);
-  const items: NavItem[] = [{ href: '/', label: 'Home', icon: 'home' }];
+  const items: NavItem[] = [
+    { href: '/', label: 'Home', icon: 'home' },
+    { href: '/quick-check', label: 'Quick check', icon: 'gauge' },
+  ];
   if (owner) items.push({ href: '/team', label: 'Team', icon: 'team' });
   if (serverInfo?.outbox && (owner || serverInfo.outboxOpen)) items.push({ href: '/outbox', label: 'Mail outbox', icon: 'mail' });
   items.push({ href: '/profile', label: 'Profile', icon: 'person' });

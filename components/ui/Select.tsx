@@ -17,10 +17,12 @@ interface Props<T extends string> {
   onChange: (value: T) => void;
   error?: string;
   disabled?: boolean;
+  /** Small chips that only take the room their label needs (for longer lists of short labels). */
+  compact?: boolean;
 }
 
 /** A choice among a few options, shown all at once as a radio group: one tap on a phone, no hidden menu. */
-export function Select<T extends string>({ label, value, options, onChange, error, disabled }: Props<T>) {
+export function Select<T extends string>({ label, value, options, onChange, error, disabled, compact = false }: Props<T>) {
   return (
     <View style={styles.field}>
       <Text variant="label">{label}</Text>
@@ -37,10 +39,10 @@ export function Select<T extends string>({ label, value, options, onChange, erro
               onPress={() => onChange(option.value)}
               style={(state) => {
                 const { focused } = state as typeof state & { focused?: boolean };
-                return [styles.option, selected && styles.selected, focused && styles.focused, disabled && styles.disabled];
+                return [styles.option, compact && styles.compact, selected && styles.selected, focused && styles.focused, disabled && styles.disabled];
               }}
             >
-              <View style={[styles.dot, selected && styles.dotSelected]} />
+              {compact ? null : <View style={[styles.dot, selected && styles.dotSelected]} />}
               <View style={styles.optionText}>
                 <Text style={[styles.optionLabel, selected && styles.optionLabelSelected]}>{option.label}</Text>
                 {option.description ? <Text variant="small">{option.description}</Text> : null}
@@ -75,6 +77,7 @@ const styles = StyleSheet.create({
     flexGrow: 1,
     flexBasis: 140,
   },
+  compact: { flexGrow: 0, flexBasis: 'auto', paddingHorizontal: space.md },
   selected: { borderColor: colors.primary, backgroundColor: '#E6EFEC' },
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 1 } as ViewStyle,
   disabled: { opacity: 0.55 },

@@ -71,6 +71,8 @@ const styles = StyleSheet.create({
   boxError: { borderColor: colors.danger },
   input: {
     flex: 1,
+    // Without this a web input keeps its intrinsic width and pushes the unit out of the box.
+    minWidth: 0,
     minHeight: touchTarget - 3,
     paddingHorizontal: space.md,
     fontFamily: fonts.regular,

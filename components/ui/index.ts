@@ -16,3 +16,4 @@ export { Text } from './Text';
 export { TextField } from './TextField';
 export { Loading } from './Loading';
 export { TextLink } from './TextLink';
+export { Segmented } from './Segmented';

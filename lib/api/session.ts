@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import type { AcceptInvitationInput, ForgotPasswordInput, ResetPasswordInput, SignInInput, SignUpInput } from '../schemas/auth';
-import type { ChangePasswordInput, ProfileInput } from '../schemas/team';
+import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '../schemas/team';
 import { api, ApiError } from './client';
 import { staleTimes } from './query-client';
 import type { InvitationPreview, ServerInfo, Session } from './types';
@@ -87,6 +87,29 @@ export function useUpdateProfileMutation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: ProfileInput) => api.patch<Session>('/profile', input),
+    onSuccess: (session) => queryClient.setQueryData(sessionKeys.current, session),
+  });
+}
+
+/** Saves a preference such as the unit system; the screen switches at once, before the server answers. */
+export function useUpdatePreferencesMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: PreferencesInput) => api.patch<Session>('/profile/preferences', input),
+    onMutate: (input) => {
+      const previous = queryClient.getQueryData<Session | null>(sessionKeys.current);
+      if (previous) queryClient.setQueryData(sessionKeys.current, { ...previous, user: { ...previous.user, ...input } });
+      return { previous };
+    },
+    onError: (_error, _input, context) => queryClient.setQueryData(sessionKeys.current, context?.previous),
+    onSuccess: (session) => queryClient.setQueryData(sessionKeys.current, session),
+  });
+}
+
+export function useUpdateOrganisationMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: OrganisationInput) => api.patch<Session>('/organisation', input),
     onSuccess: (session) => queryClient.setQueryData(sessionKeys.current, session),
   });
 }

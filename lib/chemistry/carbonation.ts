@@ -181,7 +181,11 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
 
 const ASSUMPTIONS: CarbonationResult['assumptions'] = [
   { name: 'CO2 solubility', value: 'ln K0 = −60.2409 + 93.4517·(100/T) + 23.3585·ln(T/100), mol/(kg·atm)', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
-  { name: 'Headspace', value: 'ideal gas; air and water vapour at 1 atm when sealed', source: 'ideal gas law; water vapour by Buck (1981/1996)' },
+  {
+    name: 'Headspace',
+    value: 'ideal gas; air and water vapour at 1 atm when sealed, the air staying in the headspace (yeast using its oxygen is ignored, which errs high)',
+    source: 'ideal gas law and Dalton’s law; water vapour by Buck (1981/1996)',
+  },
   { name: 'Fermentation', value: '1 hexose → 2 ethanol + 2 CO2; 1 sucrose + water → 4 ethanol + 4 CO2', source: 'Gay-Lussac stoichiometry' },
   { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur: about 95 % of sugar to ethanol and CO2 (from memory)' },
   { name: 'Mixed sugars', value: 'counted with sucrose’s yield per gram (the highest)', source: 'conservative choice' },

@@ -1,0 +1,26 @@
+import { StyleSheet, View } from 'react-native';
+
+import { SAFETY_CAUTIONS } from '@/lib/chemistry/cautions';
+import { space } from '@/lib/theme';
+
+import { Banner, Text } from '../ui';
+
+/** The standing cautions, shown wherever pressure numbers are. */
+export function Cautions() {
+  return (
+    <Banner tone="caution" title="Glass under pressure">
+      <View style={styles.list}>
+        {SAFETY_CAUTIONS.map((caution) => (
+          <Text key={caution} variant="small" style={styles.item}>
+            • {caution}
+          </Text>
+        ))}
+      </View>
+    </Banner>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: space.xxs },
+  item: { color: '#3D3422' },
+});

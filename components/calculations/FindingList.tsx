@@ -1,0 +1,31 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { Finding } from '@/lib/chemistry/carbonation';
+import { space } from '@/lib/theme';
+
+import { Badge, Text, type Tone } from '../ui';
+
+const TONE: Record<Finding['level'], Tone> = { ok: 'success', caution: 'caution', danger: 'danger' };
+const LABEL: Record<Finding['level'], string> = { ok: 'OK', caution: 'Caution', danger: 'Danger' };
+const ORDER: Record<Finding['level'], number> = { danger: 0, caution: 1, ok: 2 };
+
+/** The engine's findings, most serious first, each with its level in words as well as colour. */
+export function FindingList({ findings }: { findings: Finding[] }) {
+  const sorted = [...findings].sort((a, b) => ORDER[a.level] - ORDER[b.level]);
+  return (
+    <View role="list" aria-label="Findings" style={styles.list}>
+      {sorted.map((finding) => (
+        <View role="listitem" key={finding.code} style={styles.item} aria-label={`${LABEL[finding.level]}: ${finding.message}`}>
+          <Badge label={LABEL[finding.level]} tone={TONE[finding.level]} />
+          <Text style={styles.message}>{finding.message}</Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: space.sm },
+  item: { flexDirection: 'row', gap: space.sm, alignItems: 'flex-start' },
+  message: { flex: 1 },
+});

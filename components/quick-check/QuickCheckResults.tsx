@@ -1,0 +1,106 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { CarbonationAnswer } from '@/lib/api/calculations';
+import { colors, fonts, space } from '@/lib/theme';
+import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
+
+import { Cautions } from '../calculations/Cautions';
+import { FindingList } from '../calculations/FindingList';
+import { PressureChart } from '../calculations/PressureChart';
+import { Card, Table, Text, type Column } from '../ui';
+
+interface Props {
+  answer: CarbonationAnswer;
+  chart: CarbonationAnswer | undefined;
+  units: UnitSystem;
+  limitPercent: number;
+  /** Names of the three temperatures, in the order they were asked. */
+  temperatureNames: string[];
+}
+
+type Row = { name: string; tempC: number; worst: number; expected: number; dissolved: number; over: boolean };
+
+/** What a Quick check answers: sugar, fizz, alcohol, pressure at each temperature, findings and cautions. */
+export function QuickCheckResults({ answer, chart, units, limitPercent, temperatureNames }: Props) {
+  const { sugar, cases } = answer;
+  const chosen = answer;
+  const rows: Row[] = cases.worst.pressures.map((p, i) => ({
+    name: temperatureNames[i] ?? '',
+    tempC: p.tempC,
+    worst: p.gaugeBar,
+    expected: cases.expected.pressures[i].gaugeBar,
+    dissolved: chosen.pressures[i].dissolvedVolumes,
+    over: p.overRating,
+  }));
+  const columns: Column<Row>[] = [
+    { key: 'where', header: 'Where', flex: 1.2, render: (r) => `${r.name} · ${formatTemp(r.tempC, units)}` },
+    { key: 'worst', header: 'Worst case', flex: 1.3, render: (r) => <Text style={r.over ? styles.over : undefined}>{formatPressure(r.worst, units)}{r.over ? ' · over rating' : ''}</Text> },
+    { key: 'expected', header: 'Expected', flex: 1.3, render: (r) => formatPressure(r.expected, units) },
+    { key: 'dissolved', header: 'In the liquid', render: (r) => `${formatNumber(r.dissolved, 2)} vol` },
+  ];
+  return (
+    <View style={styles.column}>
+      <Card title="In each bottle">
+        <View style={styles.figures}>
+          <Figure label="Fermentable sugar" value={`${formatNumber(sugar.fermentableG, 2)} g`} detail={`${formatNumber(sugar.fermentableGPerL, 1)} g/L${sugar.sweetOnlyG > 0 ? ` · ${formatNumber(sugar.sweetOnlyG, 1)} g sweetness only` : ''}`} />
+          <Figure
+            label="Carbonation, worst case"
+            value={`${formatNumber(cases.worst.co2.totalVolumes, 2)} volumes`}
+            detail={`${formatNumber(cases.worst.co2.residualVolumes, 2)} already in the base + ${formatNumber(cases.worst.co2.fromSugarVolumes, 2)} from sugar`}
+          />
+          <Figure label="Carbonation, expected" value={`${formatNumber(cases.expected.co2.totalVolumes, 2)} volumes`} detail="95 % of the sugar's theoretical yield" />
+          <Figure
+            label="Alcohol, worst case"
+            value={`${formatNumber(cases.worst.alcohol.totalAbvPercent, 2)} % ABV`}
+            detail={`+${formatNumber(cases.worst.alcohol.addedAbvPercent, 2)} % from this sugar · limit ${formatNumber(limitPercent, 1)} %`}
+          />
+        </View>
+      </Card>
+      <Card title="Findings">
+        <FindingList findings={answer.findings} />
+      </Card>
+      <Card title="Pressure in the bottle">
+        <Table label="Pressure at each temperature" columns={columns} rows={rows} rowKey={(r) => `${r.name}-${r.tempC}`} />
+        {chart ? (
+          <PressureChart
+            units={units}
+            ratingBar={answer.bottleFormat?.maxWorkingPressureBar ?? answerRating(answer)}
+            worst={chart.cases.worst.pressures}
+            expected={chart.cases.expected.pressures}
+          />
+        ) : null}
+        <Cautions />
+      </Card>
+      <Card title="How these numbers are worked out">
+        {answer.assumptions.map((a) => (
+          <Text key={a.name} variant="small">
+            {a.name}: {a.value} — {a.source}
+          </Text>
+        ))}
+      </Card>
+    </View>
+  );
+}
+
+/** The rating the pressure finding compared against, when it came from the request rather than a format. */
+function answerRating(answer: CarbonationAnswer): number | null {
+  const finding = answer.findings.find((f) => f.values && 'ratingBar' in f.values);
+  return finding?.values?.ratingBar ?? null;
+}
+
+function Figure({ label, value, detail }: { label: string; value: string; detail: string }) {
+  return (
+    <View style={styles.figure}>
+      <Text variant="small">{label}</Text>
+      <Text variant="subheading">{value}</Text>
+      <Text variant="small">{detail}</Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  column: { gap: space.lg },
+  figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  figure: { flexGrow: 1, flexBasis: 200, gap: 2 },
+  over: { color: colors.danger, fontFamily: fonts.semibold },
+});
