@@ -36,6 +36,8 @@ export function apiRouter(): Router {
 export function createApp(): Express {
   const app = express();
   app.disable('x-powered-by');
+  // API answers are computed per request and never revalidated; hashing every body for an ETag is wasted work.
+  app.set('etag', false);
   app.set('trust proxy', 'loopback');
   app.use(
     helmet({

@@ -13,6 +13,7 @@ import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
 import { PasswordReset } from './models/password-reset';
 import { User } from './models/user';
+import { forgetBrewery } from './services/brewery-cache';
 import { forgetCachedUser } from './services/sessions';
 
 export { BottleFormat, Invitation, Organisation, OutboxMessage, PasswordReset, User };
@@ -48,6 +49,12 @@ Organisation.hasMany(BottleFormat, { foreignKey: 'organisationId', as: 'bottleFo
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));
 User.addHook('afterDestroy', (user: User) => forgetCachedUser(user.id));
 User.addHook('afterBulkUpdate', () => forgetCachedUser());
+// Likewise for what calculations read about a brewery: its alcohol limit and bottle formats.
+Organisation.addHook('afterSave', (organisation: Organisation) => forgetBrewery(organisation.id));
+Organisation.addHook('afterBulkUpdate', () => forgetBrewery());
+BottleFormat.addHook('afterSave', (format: BottleFormat) => forgetBrewery(format.organisationId));
+BottleFormat.addHook('afterBulkCreate', () => forgetBrewery());
+BottleFormat.addHook('afterBulkUpdate', () => forgetBrewery());
 
 /** Opens the database, sets SQLite's safety and concurrency settings, and applies pending migrations. */
 export async function prepareDatabase(): Promise<void> {

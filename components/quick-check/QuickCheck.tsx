@@ -91,7 +91,9 @@ function SummaryStrip({ units }: { units: UnitSystem }) {
   const { answer } = useQuickCheckAnswer(units);
   if (!answer.data) return null;
   const worst = answer.data.cases.worst;
-  const hottest = worst.pressures.reduce((a, b) => (b.tempC > a.tempC ? b : a));
+  const temps = answer.data.pressures.map((p) => p.tempC);
+  const hottestIndex = temps.indexOf(Math.max(...temps));
+  const hottest = { tempC: temps[hottestIndex], gaugeBar: worst.gaugeBar[hottestIndex] };
   const level = answer.data.findings.some((f) => f.level === 'danger') ? 'danger' : answer.data.findings.some((f) => f.level === 'caution') ? 'caution' : 'success';
   return (
     <View style={styles.strip} aria-live="polite" role="status">

@@ -24,13 +24,14 @@ type Row = { name: string; tempC: number; worst: number; expected: number; disso
 export function QuickCheckResults({ answer, chart, units, limitPercent, temperatureNames }: Props) {
   const { sugar, cases } = answer;
   const chosen = answer;
-  const rows: Row[] = cases.worst.pressures.map((p, i) => ({
+  const rating = answer.bottleFormat?.maxWorkingPressureBar ?? answerRating(answer);
+  const rows: Row[] = chosen.pressures.map((p, i) => ({
     name: temperatureNames[i] ?? '',
     tempC: p.tempC,
-    worst: p.gaugeBar,
-    expected: cases.expected.pressures[i].gaugeBar,
-    dissolved: chosen.pressures[i].dissolvedVolumes,
-    over: p.overRating,
+    worst: cases.worst.gaugeBar[i],
+    expected: cases.expected.gaugeBar[i],
+    dissolved: p.dissolvedVolumes,
+    over: rating !== null && cases.worst.gaugeBar[i] > rating,
   }));
   const columns: Column<Row>[] = [
     { key: 'where', header: 'Where', flex: 1.2, render: (r) => `${r.name} · ${formatTemp(r.tempC, units)}` },
@@ -64,9 +65,9 @@ export function QuickCheckResults({ answer, chart, units, limitPercent, temperat
         {chart ? (
           <PressureChart
             units={units}
-            ratingBar={answer.bottleFormat?.maxWorkingPressureBar ?? answerRating(answer)}
-            worst={chart.cases.worst.pressures}
-            expected={chart.cases.expected.pressures}
+            ratingBar={rating}
+            worst={chart.pressures.map((p, i) => ({ tempC: p.tempC, gaugeBar: chart.cases.worst.gaugeBar[i] }))}
+            expected={chart.pressures.map((p, i) => ({ tempC: p.tempC, gaugeBar: chart.cases.expected.gaugeBar[i] }))}
           />
         ) : null}
         <Cautions />

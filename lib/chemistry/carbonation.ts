@@ -51,9 +51,17 @@ export interface CaseResult {
   pressures: (Equilibrium & { overRating: boolean })[];
 }
 
+/** One yield case in brief: gauge pressures in the order of the requested temperatures. */
+export interface CaseSummary {
+  co2: CaseResult['co2'];
+  alcohol: CaseResult['alcohol'];
+  gaugeBar: number[];
+}
+
 export interface CarbonationResult extends CaseResult {
   sugar: { fermentableG: number; fermentableGPerL: number; sweetOnlyG: number; fromIngredientsG: number; addedG: number };
-  cases: { worst: CaseResult; expected: CaseResult };
+  /** Both cases side by side, in brief; the top-level co2, alcohol and pressures are those of the requested yield. */
+  cases: { worst: CaseSummary; expected: CaseSummary };
   findings: Finding[];
   assumptions: { name: string; value: string; source: string }[];
 }
@@ -66,6 +74,8 @@ export const ABSURD_SUGAR_G_PER_L = 40;
 export const CAUTION_SHARE_OF_RATING = 0.75;
 
 const round = (value: number, digits = 2) => Math.round(value * 10 ** digits) / 10 ** digits;
+/** Six significant figures: far beyond what the model can claim, and answers stay small (a full float is 18 characters). */
+const sig = (value: number) => (Number.isFinite(value) ? Number(value.toPrecision(6)) : value);
 
 function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients'>) {
   const portions: FermentableSugar[] = [];
@@ -103,16 +113,24 @@ function caseResult(input: CarbonationInput, container: Container, portions: Fer
   const added = abvPercent(products.ethanolG, input.liquidMl);
   const rating = input.maxWorkingPressureBar ?? null;
   return {
-    co2: { residualVolumes: residual, fromSugarVolumes: molToVolumes(products.co2Mol, input.liquidMl), totalVolumes: molToVolumes(totalMol, input.liquidMl) },
-    alcohol: { addedAbvPercent: added, totalAbvPercent: input.baseAbvPercent + added },
+    co2: { residualVolumes: sig(residual), fromSugarVolumes: sig(molToVolumes(products.co2Mol, input.liquidMl)), totalVolumes: sig(molToVolumes(totalMol, input.liquidMl)) },
+    alcohol: { addedAbvPercent: sig(added), totalAbvPercent: sig(input.baseAbvPercent + added) },
     pressures: input.temperaturesC.map((tempC) => {
       const eq = equilibriumAt(container, totalMol, tempC);
-      return { ...eq, overRating: rating !== null && eq.gaugeBar > rating };
+      return {
+        tempC,
+        co2PartialAtm: sig(eq.co2PartialAtm),
+        gaugeBar: sig(eq.gaugeBar),
+        gaugePsi: sig(eq.gaugePsi),
+        dissolvedVolumes: sig(eq.dissolvedVolumes),
+        overRating: rating !== null && eq.gaugeBar > rating,
+      };
     }),
   };
 }
 
 function pressureFindings(worst: CaseResult, rating: number | null): Finding[] {
+  // Judged at the hottest temperature asked about, in the worst case.
   if (worst.pressures.length === 0) return [];
   const hottest = worst.pressures.reduce((a, b) => (b.tempC > a.tempC ? b : a));
   const at = `${round(hottest.gaugeBar, 2)} bar (${round(hottest.gaugePsi, 0)} psi) gauge at ${hottest.tempC} °C`;
@@ -180,18 +198,13 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
 }
 
 const ASSUMPTIONS: CarbonationResult['assumptions'] = [
-  { name: 'CO2 solubility', value: 'ln K0 = −60.2409 + 93.4517·(100/T) + 23.3585·ln(T/100), mol/(kg·atm)', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
-  {
-    name: 'Headspace',
-    value: 'ideal gas; air and water vapour at 1 atm when sealed, the air staying in the headspace (yeast using its oxygen is ignored, which errs high)',
-    source: 'ideal gas law and Dalton’s law; water vapour by Buck (1981/1996)',
-  },
-  { name: 'Fermentation', value: '1 hexose → 2 ethanol + 2 CO2; 1 sucrose + water → 4 ethanol + 4 CO2', source: 'Gay-Lussac stoichiometry' },
-  { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur: about 95 % of sugar to ethanol and CO2 (from memory)' },
-  { name: 'Mixed sugars', value: 'counted with sucrose’s yield per gram (the highest)', source: 'conservative choice' },
-  { name: 'Volume of CO2', value: `1 L at 0 °C and 1 atm = ${round(CO2_G_PER_VOLUME, 4)} g (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`, source: 'CODATA 2018 molar volume' },
-  { name: 'Alcohol', value: 'ethanol density 0.78924 g/mL at 20 °C', source: 'CRC Handbook of Chemistry and Physics' },
-  { name: 'Residual CO2 from temperature', value: 'saturation under 1 atm of CO2', source: 'common practice, no source' },
+  { name: 'CO2 solubility', value: 'K0(T), fresh water', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
+  { name: 'Headspace', value: 'ideal gas; sealed-in air and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)', source: 'ideal gas, Dalton' },
+  { name: 'Fermentation', value: 'hexose → 2 ethanol + 2 CO2; sucrose + water → 4 + 4; mixed sugars at sucrose’s yield per gram', source: 'Gay-Lussac' },
+  { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur (from memory)' },
+  { name: 'Volume of CO2', value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`, source: 'CODATA 2018' },
+  { name: 'Alcohol', value: 'ethanol 0.78924 g/mL at 20 °C', source: 'CRC Handbook' },
+  { name: 'Residual CO2 from temperature', value: 'saturated under 1 atm of CO2', source: 'common practice, no source' },
 ];
 
 /** Sugar, CO2, pressure at each temperature and alcohol for one sealed container, worst and expected cases. */
@@ -203,10 +216,11 @@ export function computeCarbonation(input: CarbonationInput): CarbonationResult {
   const worst = caseResult(input, container, portions, 'worst');
   const expected = caseResult(input, container, portions, 'expected');
   const chosen = input.yield === 'worst' ? worst : expected;
+  const brief = (c: CaseResult): CaseSummary => ({ co2: c.co2, alcohol: c.alcohol, gaugeBar: c.pressures.map((p) => p.gaugeBar) });
   return {
-    sugar: { fermentableG, fermentableGPerL, sweetOnlyG, fromIngredientsG, addedG },
+    sugar: { fermentableG: sig(fermentableG), fermentableGPerL: sig(fermentableGPerL), sweetOnlyG: sig(sweetOnlyG), fromIngredientsG: sig(fromIngredientsG), addedG: sig(addedG) },
     ...chosen,
-    cases: { worst, expected },
+    cases: { worst: brief(worst), expected: brief(expected) },
     findings: [
       ...pressureFindings(worst, input.maxWorkingPressureBar ?? null),
       ...alcoholFindings(worst, expected, input.abvLimitPercent),

@@ -1,9 +1,8 @@
 import { brixToSpecificGravity, brixToSugarGPerL, READING_CAUTION, specificGravityToBrix } from '../../lib/chemistry/brix';
 import { computeCarbonation, computePriming, type CarbonationResult, type PrimingResult } from '../../lib/chemistry/carbonation';
 import type { BrixRequest, CarbonationRequest, PrimingRequest } from '../../lib/schemas/calculations';
-import { Organisation } from '../db';
 import { badRequest } from '../errors';
-import { findBottleFormat } from './bottle-formats';
+import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
 import type { AuthContext } from './sessions';
 
 interface ResolvedContainer {
@@ -19,9 +18,8 @@ interface ResolvedContainer {
  */
 async function resolveContainer(auth: AuthContext, input: CarbonationRequest | PrimingRequest, headspaceGiven: boolean): Promise<ResolvedContainer> {
   if (input.bottleFormatId) {
-    const format = await findBottleFormat(auth.organisationId, input.bottleFormatId).catch(() => {
-      throw badRequest('No such bottle format in your brewery.', { bottleFormatId: 'No such bottle format in your brewery.' });
-    });
+    const format = await cachedBottleFormat(auth.organisationId, input.bottleFormatId);
+    if (!format) throw badRequest('No such bottle format in your brewery.', { bottleFormatId: 'No such bottle format in your brewery.' });
     return {
       liquidMl: input.liquidMl,
       headspaceMl: headspaceGiven ? input.headspaceMl : format.headspaceMl,
@@ -33,9 +31,7 @@ async function resolveContainer(auth: AuthContext, input: CarbonationRequest | P
 }
 
 async function abvLimit(auth: AuthContext, given: number | null | undefined): Promise<number> {
-  if (given) return given;
-  const organisation = await Organisation.findByPk(auth.organisationId, { attributes: ['abvLimitPercent'] });
-  return organisation?.abvLimitPercent ?? 0.5;
+  return given ?? (await cachedAbvLimit(auth.organisationId));
 }
 
 export async function carbonation(auth: AuthContext, input: CarbonationRequest, headspaceGiven: boolean): Promise<CarbonationResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {

@@ -17,7 +17,7 @@ export async function updatePreferences(userId: number, input: PreferencesInput)
 
 /** The brewery's own settings (owners only): its name and its alcohol limit. */
 export async function updateOrganisation(organisationId: number, userId: number, input: OrganisationInput): Promise<Session> {
-  await Organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent }, { where: { id: organisationId } });
+  await Organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent }, { where: { id: organisationId }, individualHooks: true });
   return sessionFor(userId);
 }
 

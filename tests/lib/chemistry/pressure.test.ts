@@ -143,14 +143,14 @@ describe('computePriming', () => {
     // By hand: (2.5 − 0.9) volumes × 1.9635 g = 3.1416 g/L CO2 ÷ 0.51428 = 6.1087 g/L sucrose → 3.054 g per 500 mL.
     expect(result.sugarGPerL).toBeCloseTo(6.109, 2);
     const check = computeCarbonation({ ...base, sugars: [{ type: 'sucrose', grams: result.sugarG }], residualCo2Volumes: 0.9 });
-    expect(check.co2.totalVolumes).toBeCloseTo(2.5, 6);
+    expect(check.co2.totalVolumes).toBeCloseTo(2.5, 4);
   });
 
   it('finds the most sugar the bottle takes at the highest temperature', () => {
     const result = computePriming(input);
     expect(result.maxSafeSugarG).not.toBeNull();
     const atLimit = computeCarbonation({ ...base, sugars: [{ type: 'sucrose', grams: result.maxSafeSugarG! }], residualCo2Volumes: 0.9, temperaturesC: [35] });
-    expect(atLimit.pressures[0].gaugeBar).toBeCloseTo(3, 6);
+    expect(atLimit.pressures[0].gaugeBar).toBeCloseTo(3, 4);
   });
 
   it('shows the alcohol the target fizz costs, and honey needs more weight than sucrose', () => {

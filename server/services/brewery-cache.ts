@@ -1,0 +1,46 @@
+import { BottleFormat } from '../models/bottle-format';
+import { Organisation } from '../models/organisation';
+
+/**
+ * Per-brewery facts that every calculation reads (the alcohol limit, the bottle formats), kept in memory so that a
+ * calculation costs no query. Hooks in db.ts clear a brewery's entry whenever its rows change.
+ */
+interface Entry {
+  abvLimitPercent?: number;
+  formats?: Map<number, BottleFormat>;
+}
+
+const cache = new Map<number, Entry>();
+
+export function forgetBrewery(organisationId?: number): void {
+  if (organisationId === undefined) cache.clear();
+  else cache.delete(organisationId);
+}
+
+function entry(organisationId: number): Entry {
+  let found = cache.get(organisationId);
+  if (!found) {
+    found = {};
+    cache.set(organisationId, found);
+  }
+  return found;
+}
+
+export async function cachedAbvLimit(organisationId: number): Promise<number> {
+  const e = entry(organisationId);
+  if (e.abvLimitPercent === undefined) {
+    const organisation = await Organisation.findByPk(organisationId, { attributes: ['abvLimitPercent'] });
+    e.abvLimitPercent = organisation?.abvLimitPercent ?? 0.5;
+  }
+  return e.abvLimitPercent;
+}
+
+/** A bottle format of the brewery (archived ones included), or undefined. */
+export async function cachedBottleFormat(organisationId: number, id: number): Promise<BottleFormat | undefined> {
+  const e = entry(organisationId);
+  if (!e.formats) {
+    const rows = await BottleFormat.findAll({ where: { organisationId } });
+    e.formats = new Map(rows.map((row) => [row.id, row]));
+  }
+  return e.formats.get(id);
+}

@@ -1,0 +1,153 @@
+/**
+ * `npm run bench`: throughput and latency of the API under concurrent load on loopback, each endpoint measured in
+ * the same run against references behind the same middleware. The server runs in its own process (as in
+ * production, NODE_ENV=production, logs at warn) on a temporary database; autocannon drives it from this process.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+
+import autocannon from 'autocannon';
+
+const ROOT = path.resolve(__dirname, '../..');
+const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 32);
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 6);
+/** The calculation and its reference are measured in alternating rounds and the medians kept, so drift and order do not decide. */
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
+
+interface Measure {
+  name: string;
+  requestsPerSec: number;
+  p50Ms: number;
+  p99Ms: number;
+  errors: number;
+  non2xx: number;
+}
+
+async function startServer(): Promise<{ child: ChildProcess; url: string; dir: string }> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'fizzwright-bench-'));
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      JWT_SECRET: 'bench-secret-not-used-anywhere-else',
+      PORT: '0',
+      HOST: '127.0.0.1',
+      DATABASE_PATH: path.join(dir, 'bench.sqlite'),
+      BENCH_ROUTES: 'true',
+      AUTH_RATE_LIMIT: '100000',
+      LOG_LEVEL: 'warn',
+      SEED_DEMO: 'true',
+    },
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  const url = await new Promise<string>((resolve, reject) => {
+    let out = '';
+    child.stdout!.on('data', (chunk: Buffer) => {
+      out += chunk.toString();
+      const match = /listening on (http:\/\/localhost:\d+)/.exec(out);
+      if (match) resolve(match[1].replace('localhost', '127.0.0.1'));
+    });
+    child.on('exit', (code) => reject(new Error(`server exited with ${code}\n${out}`)));
+  });
+  return { child, url, dir };
+}
+
+async function signIn(url: string): Promise<string> {
+  const res = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'imogen@wrenfield.example', password: 'wrenfield-owner' }),
+  });
+  if (!res.ok) throw new Error(`sign-in failed: ${res.status}`);
+  return res.headers.get('set-cookie')!.split(';')[0];
+}
+
+async function once(name: string, options: autocannon.Options): Promise<Measure> {
+  const result = await autocannon({ ...options, connections: CONNECTIONS, duration: SECONDS });
+  return {
+    name,
+    requestsPerSec: result.requests.average,
+    p50Ms: result.latency.p50,
+    p99Ms: result.latency.p99,
+    errors: result.errors,
+    non2xx: result.non2xx,
+  };
+}
+
+const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
+
+/** Several endpoints measured round-robin, ROUNDS times each after a warm-up; the median of each figure is kept. */
+async function measure(targets: [string, autocannon.Options][]): Promise<Measure[]> {
+  for (const [, options] of targets) await autocannon({ ...options, connections: CONNECTIONS, duration: 2 });
+  const runs: Measure[][] = targets.map(() => []);
+  for (let round = 0; round < ROUNDS; round++) {
+    for (const [i, [name, options]] of targets.entries()) runs[i].push(await once(name, options));
+  }
+  return runs.map((list) => ({
+    name: list[0].name,
+    requestsPerSec: median(list.map((m) => m.requestsPerSec)),
+    p50Ms: median(list.map((m) => m.p50Ms)),
+    p99Ms: median(list.map((m) => m.p99Ms)),
+    errors: list.reduce((sum, m) => sum + m.errors, 0),
+    non2xx: list.reduce((sum, m) => sum + m.non2xx, 0),
+  }));
+}
+
+/** What the Quick check sends: a bottle format of the brewery, one sugar, three temperatures. */
+const carbonationBody = (bottleFormatId: number) =>
+  JSON.stringify({
+    liquidMl: 500,
+    bottleFormatId,
+    sugars: [{ type: 'sucrose', grams: 3 }],
+    lastOpenTempC: 22,
+    sealedTempC: 20,
+    temperaturesC: [22, 4, 35],
+    baseAbvPercent: 0.2,
+    yield: 'worst',
+  });
+
+async function main(): Promise<void> {
+  const { child, url, dir } = await startServer();
+  try {
+    const cookie = await signIn(url);
+    const json = { 'content-type': 'application/json', cookie };
+    const formats = (await (await fetch(`${url}/api/bottle-formats`, { headers: { cookie } })).json()) as { id: number; liquidMl: number }[];
+    const formatId = formats.find((f) => f.liquidMl === 500)!.id;
+    const [health, open, signedIn] = await measure([
+      ['GET /api/health', { url: `${url}/api/health` }],
+      ['GET /api/bench/open (nothing, public)', { url: `${url}/api/bench/open` }],
+      ['GET /api/bench/signed-in (nothing, session check)', { url: `${url}/api/bench/signed-in`, headers: { cookie } }],
+    ]);
+    const [calc, noop] = await measure([
+      ['POST /api/calculations/carbonation', { url: `${url}/api/calculations/carbonation`, method: 'POST', headers: json, body: carbonationBody(formatId) }],
+      ['POST /api/bench/noop (same middleware, no calculation)', { url: `${url}/api/bench/noop`, method: 'POST', headers: json, body: carbonationBody(formatId) }],
+    ]);
+    const results = [health, open, signedIn, calc, noop];
+    console.log(`\n${CONNECTIONS} connections, median of ${ROUNDS} rounds of ${SECONDS} s, Node ${process.version}, ${os.cpus().length} cores\n`);
+    console.log('endpoint'.padEnd(56), 'req/s'.padStart(9), 'p50 ms'.padStart(8), 'p99 ms'.padStart(8), 'errors'.padStart(7));
+    for (const r of results) {
+      console.log(r.name.padEnd(56), r.requestsPerSec.toFixed(0).padStart(9), r.p50Ms.toFixed(1).padStart(8), r.p99Ms.toFixed(1).padStart(8), String(r.errors + r.non2xx).padStart(7));
+    }
+    const ratio = (a: number, b: number) => (a / b).toFixed(2);
+    const checks = [
+      [`calculation throughput / do-nothing throughput = ${ratio(calc.requestsPerSec, noop.requestsPerSec)}`, calc.requestsPerSec >= 0.9 * noop.requestsPerSec, 'goal ≥ 0.90'],
+      [`calculation p99 / do-nothing p99 = ${ratio(calc.p99Ms, noop.p99Ms)}`, calc.p99Ms <= 1.2 * noop.p99Ms, 'goal ≤ 1.20'],
+      [`session check: signed-in / public do-nothing throughput = ${ratio(signedIn.requestsPerSec, open.requestsPerSec)}`, signedIn.requestsPerSec >= 0.85 * open.requestsPerSec, 'goal ≥ 0.85'],
+      [`session check: signed-in do-nothing / health throughput = ${ratio(signedIn.requestsPerSec, health.requestsPerSec)}`, signedIn.requestsPerSec >= 0.85 * health.requestsPerSec, 'goal ≥ 0.85'],
+    ] as const;
+    console.log('');
+    for (const [text, ok, goal] of checks) console.log(`${ok ? 'meets' : 'MISSES'}  ${text}  (${goal})`);
+    if (results.some((r) => r.errors + r.non2xx > 0)) console.log('\nSome requests failed: the figures above are not valid.');
+  } finally {
+    child.kill('SIGTERM');
+    fs.rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
