@@ -1,10 +1,11 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { BrewerySettingsForm } from '@/components/team/BrewerySettingsForm';
 import { InvitationsTable } from '@/components/team/InvitationsTable';
 import { InviteForm } from '@/components/team/InviteForm';
 import { MembersTable } from '@/components/team/MembersTable';
 import { Banner, Card, Loading, Screen } from '@/components/ui';
-import { useSessionQuery } from '@/lib/api/session';
+import { useSessionQuery, useUpdateOrganisationMutation } from '@/lib/api/session';
 import { useInviteMutation, useTeamQuery } from '@/lib/api/team';
 import { canManageTeam } from '@/lib/roles';
 import { breakpoints, space } from '@/lib/theme';
@@ -14,6 +15,7 @@ export default function TeamScreen() {
   const owner = canManageTeam(session?.user.role);
   const team = useTeamQuery(owner);
   const invite = useInviteMutation();
+  const settings = useUpdateOrganisationMutation();
   const { width } = useWindowDimensions();
   if (!session) return null;
   if (!owner) {
@@ -35,14 +37,17 @@ export default function TeamScreen() {
           </Card>
           <Card title="Open invitations">{team.data ? <InvitationsTable invitations={team.data.invitations} /> : <Loading />}</Card>
         </View>
-        <Card title="Invite someone" style={styles.side}>
-          {invite.isSuccess ? (
-            <Banner tone="success">
-              {`Invitation sent to ${invite.data.email}. The link works once and expires in 7 days.`}
-            </Banner>
-          ) : null}
-          <InviteForm error={invite.error} onSubmit={(values) => invite.mutateAsync(values)} />
-        </Card>
+        <View style={styles.side}>
+          <Card title="Invite someone">
+            {invite.isSuccess ? (
+              <Banner tone="success">{`Invitation sent to ${invite.data.email}. The link works once and expires in 7 days.`}</Banner>
+            ) : null}
+            <InviteForm error={invite.error} onSubmit={(values) => invite.mutateAsync(values)} />
+          </Card>
+          <Card title="Brewery settings">
+            <BrewerySettingsForm organisation={session.organisation} error={settings.error} saved={settings.isSuccess} onSubmit={(input) => settings.mutateAsync(input)} />
+          </Card>
+        </View>
       </View>
     </Screen>
   );
@@ -52,5 +57,5 @@ const styles = StyleSheet.create({
   columns: { gap: space.lg },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   main: { flex: 2, gap: space.lg },
-  side: { flex: 1, minWidth: 320 },
+  side: { flex: 1, minWidth: 320, gap: space.lg },
 });

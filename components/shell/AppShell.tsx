@@ -116,7 +116,7 @@ function PhoneFrame({ session, items, children }: Props & { items: NavItem[] }) 
                 <Icon name={item.icon} color={active ? colors.textOnPrimary : colors.textMuted} size={22} />
               </View>
               <Text style={[styles.tabLabel, active && styles.tabLabelActive]} numberOfLines={1}>
-                {item.label}
+                {item.shortLabel}
               </Text>
             </Pressable>
           );

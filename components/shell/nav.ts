@@ -4,8 +4,10 @@ import { canManageTeam } from '@/lib/roles';
 import type { IconName } from '../ui/Icon';
 
 export interface NavItem {
-  href: '/' | '/quick-check' | '/team' | '/outbox' | '/profile';
+  href: '/' | '/quick-check' | '/bottles' | '/team' | '/outbox' | '/profile';
   label: string;
+  /** The word under the icon in the phone tab bar, where six labels share 390 px. */
+  shortLabel: string;
   icon: IconName;
 }
 
@@ -13,12 +15,13 @@ export interface NavItem {
 export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined): NavItem[] {
   const owner = canManageTeam(session.user.role);
   const items: NavItem[] = [
-    { href: '/', label: 'Home', icon: 'home' },
-    { href: '/quick-check', label: 'Quick check', icon: 'gauge' },
+    { href: '/', label: 'Home', shortLabel: 'Home', icon: 'home' },
+    { href: '/quick-check', label: 'Quick check', shortLabel: 'Check', icon: 'gauge' },
+    { href: '/bottles', label: 'Bottles', shortLabel: 'Bottles', icon: 'bottle' },
   ];
-  if (owner) items.push({ href: '/team', label: 'Team', icon: 'team' });
-  if (serverInfo?.outbox && (owner || serverInfo.outboxOpen)) items.push({ href: '/outbox', label: 'Mail outbox', icon: 'mail' });
-  items.push({ href: '/profile', label: 'Profile', icon: 'person' });
+  if (owner) items.push({ href: '/team', label: 'Team', shortLabel: 'Team', icon: 'team' });
+  if (serverInfo?.outbox && (owner || serverInfo.outboxOpen)) items.push({ href: '/outbox', label: 'Mail outbox', shortLabel: 'Outbox', icon: 'mail' });
+  items.push({ href: '/profile', label: 'Profile', shortLabel: 'Profile', icon: 'person' });
   return items;
 }
 
