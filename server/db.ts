@@ -8,6 +8,7 @@ import { config } from './config';
 import { logger } from './logger';
 import { migrations } from './migrations';
 import { BottleFormat } from './models/bottle-format';
+import { Ingredient, IngredientChange } from './models/ingredient';
 import { Invitation } from './models/invitation';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
@@ -16,7 +17,7 @@ import { User } from './models/user';
 import { forgetBrewery } from './services/brewery-cache';
 import { forgetCachedUser } from './services/sessions';
 
-export { BottleFormat, Invitation, Organisation, OutboxMessage, PasswordReset, User };
+export { BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, User };
 
 function createSequelize(databasePath: string): Sequelize {
   if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
@@ -32,7 +33,7 @@ function createSequelize(databasePath: string): Sequelize {
 
 export const sequelize = createSequelize(config.databasePath);
 
-for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat]) model.initModel(sequelize);
+for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat, Ingredient, IngredientChange]) model.initModel(sequelize);
 
 Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
 User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -44,6 +45,9 @@ PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Organisation.hasMany(OutboxMessage, { foreignKey: 'organisationId', as: 'outboxMessages' });
 OutboxMessage.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Organisation.hasMany(BottleFormat, { foreignKey: 'organisationId', as: 'bottleFormats' });
+Organisation.hasMany(Ingredient, { foreignKey: 'organisationId', as: 'ingredients' });
+Ingredient.hasMany(IngredientChange, { foreignKey: 'ingredientId', as: 'changeLog' });
+IngredientChange.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
 // Any change to a user row (role, active, password) must reach the sign-in check at once.
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));

@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 
+import compression from 'compression';
 import express, { Router } from 'express';
 
 /**
@@ -10,6 +11,8 @@ import express, { Router } from 'express';
 export function webApp(distDir: string): Router {
   const router = Router();
   const indexHtml = path.join(distDir, 'index.html');
+  // The bundle is 1.5 MB of JavaScript and about 0.4 MB gzipped: compress what the browser downloads.
+  router.use(compression());
   router.use(express.static(distDir, { index: false, maxAge: '1h', setHeaders: (res, file) => {
     if (file.includes(`${path.sep}_expo${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
   } }));

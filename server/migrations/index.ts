@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 
 import * as accounts from './0001-accounts';
 import * as calculations from './0002-calculations';
+import * as ingredients from './0003-ingredients';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -12,4 +13,5 @@ type Step = (params: { context: QueryInterface }) => Promise<void>;
 export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0001-accounts', ...accounts },
   { name: '0002-calculations', ...calculations },
+  { name: '0003-ingredients', ...ingredients },
 ];

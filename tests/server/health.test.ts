@@ -29,3 +29,18 @@ describe('unknown API routes', () => {
     expect(res.body).toEqual({ error: { code: 'not_found', message: expect.any(String) } });
   });
 });
+
+describe('the web app', () => {
+  it('serves index.html for client routes, compressed, and leaves unknown API paths to the API', async () => {
+    const fs = require('node:fs') as typeof import('node:fs');
+    const { config } = require('@/server/config') as typeof import('@/server/config');
+    if (!fs.existsSync(`${config.webDistDir}/index.html`)) {
+      const res = await request(app).get('/team').set('Accept', 'text/html').expect(503);
+      expect(res.text).toMatch(/has not been built/);
+      return;
+    }
+    const res = await request(app).get('/team').set('Accept', 'text/html').set('Accept-Encoding', 'gzip').expect(200);
+    expect(res.headers['content-type']).toMatch(/html/);
+    expect(res.headers['content-encoding']).toBe('gzip');
+  });
+});

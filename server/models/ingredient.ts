@@ -1,0 +1,107 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+import type { Allergen, Category, Measure } from '../../lib/ingredients';
+import type { Organisation } from './organisation';
+
+const jsonText = <T>(field: string) => ({
+  type: DataTypes.TEXT,
+  allowNull: false,
+  get(this: Model): T {
+    return JSON.parse((this.getDataValue(field as never) as string | null) ?? '[]') as T;
+  },
+  set(this: Model, value: T) {
+    this.setDataValue(field as never, JSON.stringify(value) as never);
+  },
+});
+
+/**
+ * An ingredient with its composition per 100 g. Dataset rows (organisationId null) come from an open dataset and
+ * are read-only to breweries; house rows belong to one brewery.
+ */
+export class Ingredient extends Model<InferAttributes<Ingredient>, InferCreationAttributes<Ingredient>> {
+  declare id: CreationOptional<number>;
+  declare organisationId: ForeignKey<Organisation['id']> | null;
+  declare name: string;
+  declare category: Category;
+  declare energyKcal: number | null;
+  declare carbohydrateG: number | null;
+  declare sugarsG: number | null;
+  declare fibreG: number | null;
+  declare fatG: number | null;
+  declare proteinG: number | null;
+  /** Share (0–1) of the sugars that yeast can ferment. */
+  declare fermentableShare: number;
+  /** Default share (0–1) of the sugars that reach the liquid when steeped and strained. */
+  declare steepShare: number;
+  declare allergens: Allergen[];
+  declare measures: Measure[];
+  declare costPerKg: number | null;
+  declare notes: string | null;
+  declare sourceDataset: string | null;
+  declare sourceRecord: string | null;
+  declare archivedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Ingredient.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        name: { type: DataTypes.STRING(200), allowNull: false },
+        category: { type: DataTypes.STRING(20), allowNull: false },
+        energyKcal: { type: DataTypes.FLOAT, allowNull: true },
+        carbohydrateG: { type: DataTypes.FLOAT, allowNull: true },
+        sugarsG: { type: DataTypes.FLOAT, allowNull: true },
+        fibreG: { type: DataTypes.FLOAT, allowNull: true },
+        fatG: { type: DataTypes.FLOAT, allowNull: true },
+        proteinG: { type: DataTypes.FLOAT, allowNull: true },
+        fermentableShare: { type: DataTypes.FLOAT, allowNull: false },
+        steepShare: { type: DataTypes.FLOAT, allowNull: false },
+        allergens: jsonText<Allergen[]>('allergens'),
+        measures: jsonText<Measure[]>('measures'),
+        costPerKg: { type: DataTypes.FLOAT, allowNull: true },
+        notes: { type: DataTypes.TEXT, allowNull: true },
+        sourceDataset: { type: DataTypes.STRING(60), allowNull: true },
+        sourceRecord: { type: DataTypes.STRING(20), allowNull: true },
+        archivedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'ingredients', underscored: true },
+    );
+  }
+}
+
+/** Who changed a house ingredient, when, and what (field: [before, after]). */
+export class IngredientChange extends Model<InferAttributes<IngredientChange>, InferCreationAttributes<IngredientChange>> {
+  declare id: CreationOptional<number>;
+  declare ingredientId: ForeignKey<Ingredient['id']>;
+  declare userId: number | null;
+  declare action: 'created' | 'updated' | 'archived' | 'restored';
+  declare changes: Record<string, [unknown, unknown]>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    IngredientChange.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        userId: { type: DataTypes.INTEGER, allowNull: true },
+        action: { type: DataTypes.STRING(20), allowNull: false },
+        changes: {
+          type: DataTypes.TEXT,
+          allowNull: false,
+          get(this: IngredientChange) {
+            return JSON.parse((this.getDataValue('changes') as unknown as string) ?? '{}') as Record<string, [unknown, unknown]>;
+          },
+          set(this: IngredientChange, value: Record<string, [unknown, unknown]>) {
+            this.setDataValue('changes', JSON.stringify(value) as never);
+          },
+        },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'ingredient_changes', underscored: true },
+    );
+  }
+}
