@@ -5,11 +5,14 @@ import { config } from './config';
 import { prepareDatabase } from './db';
 import { logger } from './logger';
 import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
+import { seedIngredientsIfEmpty } from './seed/ingredients';
 
 /** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
 export async function main(): Promise<number> {
   await prepareDatabase();
   if (config.seedDemo && (await seedDemoIfEmpty())) console.log(`\n${demoAccountsText()}\n`);
+  const ingredients = await seedIngredientsIfEmpty();
+  if (ingredients) console.log(ingredients);
   const app = createApp();
   return new Promise((resolve) => {
     const server = app.listen(config.port, config.host, () => {

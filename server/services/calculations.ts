@@ -1,6 +1,9 @@
 import { brixToSpecificGravity, brixToSugarGPerL, READING_CAUTION, specificGravityToBrix } from '../../lib/chemistry/brix';
-import { computeCarbonation, computePriming, type CarbonationResult, type PrimingResult } from '../../lib/chemistry/carbonation';
+import { computeCarbonation, computePriming, type CarbonationResult, type IngredientSugar, type PrimingResult } from '../../lib/chemistry/carbonation';
 import type { BrixRequest, CarbonationRequest, PrimingRequest } from '../../lib/schemas/calculations';
+import { Op } from 'sequelize';
+
+import { Ingredient } from '../db';
 import { badRequest } from '../errors';
 import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
 import type { AuthContext } from './sessions';
@@ -34,17 +37,38 @@ async function abvLimit(auth: AuthContext, given: number | null | undefined): Pr
   return given ?? (await cachedAbvLimit(auth.organisationId));
 }
 
-export async function carbonation(auth: AuthContext, input: CarbonationRequest, headspaceGiven: boolean): Promise<CarbonationResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
-  if (input.ingredients.length > 0) {
-    // The ingredient library is not part of this release yet; say so rather than ignore the sugar they bring.
-    const fields = Object.fromEntries(input.ingredients.map((_, i) => [`ingredients[${i}].ingredientId`, 'No such ingredient in your library.']));
-    throw badRequest('Ingredients from the library cannot be used yet: enter their sugar as added sugar.', fields);
+/**
+ * The sugar and fat each ingredient line brings: grams × sugars per gram × the share reaching the liquid. Only the
+ * dataset and the brewery's own house ingredients may be used (archived ones too: old recipes still name them).
+ */
+async function resolveIngredients(auth: AuthContext, lines: CarbonationRequest['ingredients']): Promise<IngredientSugar[]> {
+  if (lines.length === 0) return [];
+  const rows = await Ingredient.findAll({
+    where: { id: lines.map((l) => l.ingredientId), [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
+  });
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  const missing = lines.map((l, i) => [l, i] as const).filter(([l]) => !byId.has(l.ingredientId));
+  if (missing.length > 0) {
+    throw badRequest('Some ingredients are not in your library.', Object.fromEntries(missing.map(([, i]) => [`ingredients[${i}].ingredientId`, 'No such ingredient in your library.'])));
   }
+  return lines.map((line) => {
+    const ingredient = byId.get(line.ingredientId)!;
+    return {
+      name: ingredient.name,
+      sugarG: line.grams * ((ingredient.sugarsG ?? 0) / 100) * (line.extractionPct / 100),
+      fermentableShare: ingredient.fermentableShare,
+      fatG: line.grams * ((ingredient.fatG ?? 0) / 100),
+      inBottle: line.inBottle,
+    };
+  });
+}
+
+export async function carbonation(auth: AuthContext, input: CarbonationRequest, headspaceGiven: boolean): Promise<CarbonationResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
   const container = await resolveContainer(auth, input, headspaceGiven);
   const result = computeCarbonation({
     ...input,
     ...container,
-    ingredients: [],
+    ingredients: await resolveIngredients(auth, input.ingredients),
     abvLimitPercent: await abvLimit(auth, input.abvLimitPercent),
   });
   return { ...result, bottleFormat: container.bottleFormat };

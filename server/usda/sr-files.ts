@@ -113,6 +113,8 @@ export function categoryOf(food: Pick<SrFood, 'name' | 'foodGroup'>): Category {
   if (foodGroup === '1900' && has(name, 'sugar', 'syrup', 'honey', 'molasses', 'sweetener')) return 'sugar-syrup';
   if (foodGroup === '1800' || foodGroup === '1900') return 'baked-good';
   if (has(name, 'juice')) return 'juice';
+  if (has(name, 'ginger root', 'horseradish')) return 'spice';
+  if (has(name, 'lemon grass', 'lemongrass')) return 'herb';
   return 'other';
 }
 

@@ -1,0 +1,46 @@
+import { Router } from 'express';
+import * as yup from 'yup';
+
+import { idParam } from '../../lib/schemas/common';
+import { houseIngredientSchema, ingredientSearchSchema, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
+import { allow, authOf } from '../middleware/access';
+import { validate } from '../middleware/validate';
+import * as ingredients from '../services/ingredients';
+
+export const ingredientsRouter = Router();
+
+const EDITORS = ['owner', 'developer'] as const;
+const id = (locals: { params?: unknown }) => (locals.params as { id: number }).id;
+const copySchema = yup.object({ name: houseIngredientSchema.fields.name });
+
+ingredientsRouter.get('/', allow('signed-in'), validate({ query: ingredientSearchSchema }), async (_req, res) => {
+  res.json(await ingredients.searchIngredients(authOf(res), res.locals.query as IngredientSearch));
+});
+
+ingredientsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  res.json(ingredients.toIngredientDto(await ingredients.visibleIngredient(authOf(res), id(res.locals))));
+});
+
+ingredientsRouter.get('/:id/changes', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  res.json(await ingredients.ingredientChanges(authOf(res), id(res.locals)));
+});
+
+ingredientsRouter.post('/', allow(EDITORS), validate({ body: houseIngredientSchema }), async (_req, res) => {
+  res.status(201).json(await ingredients.createHouseIngredient(authOf(res), res.locals.body as HouseIngredientInput));
+});
+
+ingredientsRouter.put('/:id', allow(EDITORS), validate({ params: idParam, body: houseIngredientSchema }), async (_req, res) => {
+  res.json(await ingredients.updateHouseIngredient(authOf(res), id(res.locals), res.locals.body as HouseIngredientInput));
+});
+
+ingredientsRouter.post('/:id/copy', allow(EDITORS), validate({ params: idParam, body: copySchema }), async (_req, res) => {
+  res.status(201).json(await ingredients.copyToHouse(authOf(res), id(res.locals), (res.locals.body as { name: string }).name));
+});
+
+ingredientsRouter.post('/:id/archive', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
+  res.json(await ingredients.setHouseIngredientArchived(authOf(res), id(res.locals), true));
+});
+
+ingredientsRouter.post('/:id/restore', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
+  res.json(await ingredients.setHouseIngredientArchived(authOf(res), id(res.locals), false));
+});

@@ -1,0 +1,21 @@
+import { config } from '../config';
+import { datasetIngredientCount, importDatasetIngredients } from '../services/ingredients';
+import { ingredientFromSr, NotSrFolderError, readSrFoods } from '../usda/sr-files';
+import { loadStarterIngredients } from './starter-ingredients';
+
+/**
+ * Fills an empty ingredient library: the whole USDA SR25 dataset when its files are at NUTRIENT_DATA_DIR,
+ * otherwise the starter library shipped with the project. Answers what it did, in words, or null.
+ */
+export async function seedIngredientsIfEmpty(folder = config.nutrientDataDir): Promise<string | null> {
+  if ((await datasetIngredientCount()) > 0) return null;
+  try {
+    const foods = readSrFoods(folder).filter((food) => !food.branded);
+    const report = await importDatasetIngredients(foods.map(ingredientFromSr));
+    return `Ingredient library: imported ${report.created} foods from the USDA SR25 files in ${folder}.`;
+  } catch (error) {
+    if (!(error instanceof NotSrFolderError)) throw error;
+    const report = await importDatasetIngredients(loadStarterIngredients());
+    return `Ingredient library: no USDA SR25 files at ${folder}, so the ${report.created} starter ingredients were loaded (npm run import:usda -- <folder> adds the rest).`;
+  }
+}

@@ -1,0 +1,237 @@
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+
+import type { Allergen, Category, Measure } from '../../lib/ingredients';
+import { per100g, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
+import { Ingredient, IngredientChange, sequelize, User } from '../db';
+import { conflict, forbidden, notFound } from '../errors';
+import type { DatasetIngredient } from '../usda/sr-files';
+import type { AuthContext } from './sessions';
+
+export interface IngredientDto {
+  id: number;
+  scope: 'dataset' | 'house';
+  name: string;
+  category: Category;
+  per100g: { energyKcal: number | null; carbohydrateG: number | null; sugarsG: number | null; fibreG: number | null; fatG: number | null; proteinG: number | null };
+  perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
+  fermentableSharePct: number;
+  steepSharePct: number;
+  allergens: Allergen[];
+  measures: Measure[];
+  costPerKg: number | null;
+  notes: string | null;
+  source: string;
+  archived: boolean;
+}
+
+const div100 = (v: number | null) => (v === null ? null : v / 100);
+
+export function toIngredientDto(i: Ingredient): IngredientDto {
+  return {
+    id: i.id,
+    scope: i.organisationId === null ? 'dataset' : 'house',
+    name: i.name,
+    category: i.category,
+    per100g: { energyKcal: i.energyKcal, carbohydrateG: i.carbohydrateG, sugarsG: i.sugarsG, fibreG: i.fibreG, fatG: i.fatG, proteinG: i.proteinG },
+    perGram: {
+      sugarsG: div100(i.sugarsG),
+      fermentableSugarsG: i.sugarsG === null ? null : (i.sugarsG / 100) * i.fermentableShare,
+      fatG: div100(i.fatG),
+    },
+    fermentableSharePct: i.fermentableShare * 100,
+    steepSharePct: i.steepShare * 100,
+    allergens: i.allergens,
+    measures: i.measures,
+    costPerKg: i.costPerKg,
+    notes: i.notes,
+    source: i.sourceDataset ? `${i.sourceDataset} record ${i.sourceRecord}` : 'house',
+    archived: i.archivedAt !== null,
+  };
+}
+
+// ---------------------------------------------------------------- dataset import
+
+const COMPARED: (keyof DatasetIngredient)[] = ['name', 'category', 'energyKcal', 'carbohydrateG', 'sugarsG', 'fibreG', 'fatG', 'proteinG', 'fermentableShare', 'steepShare', 'allergens', 'measures', 'notes'];
+const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
+
+export interface ImportReport {
+  created: number;
+  updated: number;
+  unchanged: number;
+}
+
+/**
+ * Imports or updates dataset ingredients in one transaction, matched on dataset and record number. Running it
+ * twice changes nothing the second time.
+ */
+export async function importDatasetIngredients(rows: DatasetIngredient[], onProgress?: (done: number) => void): Promise<ImportReport> {
+  const report: ImportReport = { created: 0, updated: 0, unchanged: 0 };
+  await sequelize.transaction(async (transaction) => {
+    const existing = new Map(
+      (await Ingredient.findAll({ where: { organisationId: null }, transaction })).map((i) => [`${i.sourceDataset}|${i.sourceRecord}`, i]),
+    );
+    const toCreate: DatasetIngredient[] = [];
+    for (const [index, row] of rows.entries()) {
+      const found = existing.get(`${row.sourceDataset}|${row.sourceRecord}`);
+      if (!found) toCreate.push(row);
+      else if (COMPARED.some((key) => !same(found.get(key as never), row[key]))) {
+        await found.update(Object.fromEntries(COMPARED.map((key) => [key, row[key]])), { transaction });
+        report.updated += 1;
+      } else report.unchanged += 1;
+      if (index % 250 === 0) onProgress?.(index);
+    }
+    for (let i = 0; i < toCreate.length; i += 500) {
+      await Ingredient.bulkCreate(toCreate.slice(i, i + 500).map((row) => ({ ...row, organisationId: null })), { transaction });
+    }
+    report.created = toCreate.length;
+    onProgress?.(rows.length);
+  });
+  return report;
+}
+
+export async function datasetIngredientCount(): Promise<number> {
+  return Ingredient.count({ where: { organisationId: null } });
+}
+
+// ---------------------------------------------------------------- search
+
+/** Word prefixes of the query as an FTS5 expression: "straw rasp" → "straw"* OR "rasp"*. */
+export function ftsQuery(q: string): string | null {
+  const words = q.toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? [];
+  if (words.length === 0) return null;
+  return words.slice(0, 8).map((w) => `"${w}"*`).join(' OR ');
+}
+
+/**
+ * Ingredients a brewery may use: the dataset and its own house ingredients (house first), ranked by relevance
+ * (BM25 over the names) when there is a query, by name otherwise.
+ */
+export async function searchIngredients(auth: AuthContext, search: IngredientSearch): Promise<{ items: IngredientDto[]; total: number; page: number; pageSize: number }> {
+  const match = ftsQuery(search.q);
+  const filters = ['(i.organisation_id IS NULL OR i.organisation_id = :org)', search.archived ? 'i.archived_at IS NOT NULL' : 'i.archived_at IS NULL'];
+  if (search.category) filters.push('i.category = :category');
+  const replacements = { org: auth.organisationId, category: search.category, match, limit: search.pageSize, offset: (search.page - 1) * search.pageSize };
+  const from = match ? 'ingredient_search s JOIN ingredients i ON i.id = s.rowid' : 'ingredients i';
+  const where = `${match ? 'ingredient_search MATCH :match AND ' : ''}${filters.join(' AND ')}`;
+  const order = match ? '(i.organisation_id IS NULL), bm25(ingredient_search), length(i.name)' : '(i.organisation_id IS NULL), i.name';
+  const [ids, [{ total }]] = await Promise.all([
+    sequelize.query<{ id: number }>(`SELECT i.id FROM ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit OFFSET :offset`, { replacements, type: QueryTypes.SELECT }),
+    sequelize.query<{ total: number }>(`SELECT count(*) AS total FROM ${from} WHERE ${where}`, { replacements, type: QueryTypes.SELECT }),
+  ]);
+  const rows = await Ingredient.findAll({ where: { id: ids.map((r) => r.id) } });
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  return { items: ids.map((r) => toIngredientDto(byId.get(r.id)!)), total, page: search.page, pageSize: search.pageSize };
+}
+
+// ---------------------------------------------------------------- one ingredient
+
+/** An ingredient this brewery may see (the dataset or its own), archived ones included. */
+export async function visibleIngredient(auth: AuthContext, id: number): Promise<Ingredient> {
+  const found = await Ingredient.findOne({ where: { id, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] } });
+  if (!found) throw notFound('No such ingredient in your library.');
+  return found;
+}
+
+async function ownHouseIngredient(auth: AuthContext, id: number, transaction?: Transaction): Promise<Ingredient> {
+  const found = await Ingredient.findOne({ where: { id, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] }, transaction });
+  if (!found) throw notFound('No such ingredient in your library.');
+  if (found.organisationId === null) throw forbidden('Dataset ingredients are read-only. Copy it to a house ingredient to change it.');
+  return found;
+}
+
+export async function ingredientChanges(auth: AuthContext, id: number) {
+  const ingredient = await visibleIngredient(auth, id);
+  const rows = await IngredientChange.findAll({ where: { ingredientId: ingredient.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] });
+  return rows.map((c) => ({ id: c.id, action: c.action, at: c.createdAt.toISOString(), by: (c as IngredientChange & { user?: User }).user?.name ?? null, changes: c.changes }));
+}
+
+function fromLabel(input: HouseIngredientInput) {
+  const grams = input.servingUnit === 'ml' ? input.servingGrams! : input.servingSize;
+  return {
+    name: input.name,
+    category: input.category,
+    energyKcal: per100g(input.energyKcal, grams),
+    carbohydrateG: per100g(input.carbohydrateG, grams),
+    sugarsG: per100g(input.sugarsG, grams),
+    fibreG: per100g(input.fibreG, grams),
+    fatG: per100g(input.fatG, grams),
+    proteinG: per100g(input.proteinG, grams),
+    fermentableShare: input.fermentableSharePct / 100,
+    steepShare: input.steepSharePct / 100,
+    allergens: input.allergens,
+    costPerKg: input.costPerKg,
+    notes: input.notes,
+  };
+}
+
+async function assertNameFree(auth: AuthContext, name: string, exceptId?: number, transaction?: Transaction) {
+  const clash = await Ingredient.findOne({ where: { organisationId: auth.organisationId, name, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) }, transaction });
+  if (clash) throw conflict('Your brewery already has an ingredient with this name.', { name: 'Your brewery already has an ingredient with this name.' });
+}
+
+export async function createHouseIngredient(auth: AuthContext, input: HouseIngredientInput, measures: Measure[] = []): Promise<IngredientDto> {
+  return sequelize.transaction(async (transaction) => {
+    await assertNameFree(auth, input.name, undefined, transaction);
+    const values = { ...fromLabel(input), measures, sourceDataset: null, sourceRecord: null };
+    const created = await Ingredient.create({ ...values, organisationId: auth.organisationId }, { transaction });
+    await IngredientChange.create({ ingredientId: created.id, userId: auth.userId, action: 'created', changes: Object.fromEntries(Object.entries(values).map(([k, v]): [string, [unknown, unknown]] => [k, [null, v]])) }, { transaction });
+    return toIngredientDto(created);
+  });
+}
+
+export async function updateHouseIngredient(auth: AuthContext, id: number, input: HouseIngredientInput): Promise<IngredientDto> {
+  return sequelize.transaction(async (transaction) => {
+    const ingredient = await ownHouseIngredient(auth, id, transaction);
+    await assertNameFree(auth, input.name, id, transaction);
+    const next = fromLabel(input);
+    const changes: Record<string, [unknown, unknown]> = {};
+    for (const [key, value] of Object.entries(next)) {
+      const before = ingredient.get(key as never) as unknown;
+      if (!same(before, value)) changes[key] = [before, value];
+    }
+    if (Object.keys(changes).length > 0) {
+      await ingredient.update(next, { transaction });
+      await IngredientChange.create({ ingredientId: id, userId: auth.userId, action: 'updated', changes }, { transaction });
+    }
+    return toIngredientDto(ingredient);
+  });
+}
+
+/** Archived house ingredients leave search but stay readable wherever they are used. */
+export async function setHouseIngredientArchived(auth: AuthContext, id: number, archived: boolean): Promise<IngredientDto> {
+  return sequelize.transaction(async (transaction) => {
+    const ingredient = await ownHouseIngredient(auth, id, transaction);
+    await ingredient.update({ archivedAt: archived ? new Date() : null }, { transaction });
+    await IngredientChange.create({ ingredientId: id, userId: auth.userId, action: archived ? 'archived' : 'restored', changes: {} }, { transaction });
+    return toIngredientDto(ingredient);
+  });
+}
+
+/** A copy of any visible ingredient as a new house ingredient, to adjust. */
+export async function copyToHouse(auth: AuthContext, id: number, name: string): Promise<IngredientDto> {
+  const source = await visibleIngredient(auth, id);
+  return sequelize.transaction(async (transaction) => {
+    await assertNameFree(auth, name, undefined, transaction);
+    const values = {
+      name,
+      category: source.category,
+      energyKcal: source.energyKcal,
+      carbohydrateG: source.carbohydrateG,
+      sugarsG: source.sugarsG,
+      fibreG: source.fibreG,
+      fatG: source.fatG,
+      proteinG: source.proteinG,
+      fermentableShare: source.fermentableShare,
+      steepShare: source.steepShare,
+      allergens: source.allergens,
+      measures: source.measures,
+      costPerKg: source.costPerKg,
+      notes: [`Copied from ${source.name} (${source.sourceDataset ? `${source.sourceDataset} record ${source.sourceRecord}` : 'house'}).`, source.notes].filter(Boolean).join(' '),
+      sourceDataset: null,
+      sourceRecord: null,
+    };
+    const created = await Ingredient.create({ ...values, organisationId: auth.organisationId }, { transaction });
+    await IngredientChange.create({ ingredientId: created.id, userId: auth.userId, action: 'created', changes: { copiedFrom: [null, source.id] } }, { transaction });
+    return toIngredientDto(created);
+  });
+}
