@@ -11,7 +11,7 @@ import { breakpoints, colors, fonts, fontSize, radius, space, touchTarget } from
 import { Icon } from '../ui/Icon';
 import { Logo } from '../ui/Logo';
 import { Text } from '../ui/Text';
-import { isActive, navItemsFor, type NavItem } from './nav';
+import { isActive, navItemsFor, phoneTabs, type NavItem } from './nav';
 
 interface Props {
   session: Session;
@@ -89,6 +89,7 @@ function SideRail({ session, items, children }: Props & { items: NavItem[] }) {
 
 function PhoneFrame({ session, items, children }: Props & { items: NavItem[] }) {
   const pathname = usePathname();
+  const { tabs, overflow } = phoneTabs(items);
   const navigate = useNavigate();
   const insets = useSafeAreaInsets();
   return (
@@ -101,8 +102,8 @@ function PhoneFrame({ session, items, children }: Props & { items: NavItem[] }) 
       </View>
       <View style={styles.phoneContent}>{children}</View>
       <View role="navigation" aria-label="Main" style={[styles.tabBar, { paddingBottom: insets.bottom }]}>
-        {items.map((item) => {
-          const active = isActive(item, pathname);
+        {tabs.map((item) => {
+          const active = item.href === '/more' ? pathname === '/more' || overflow.some((o) => isActive(o, pathname)) : isActive(item, pathname);
           return (
             <Pressable
               key={item.href}

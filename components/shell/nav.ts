@@ -4,7 +4,7 @@ import { canManageTeam } from '@/lib/roles';
 import type { IconName } from '../ui/Icon';
 
 export interface NavItem {
-  href: '/' | '/quick-check' | '/bottles' | '/team' | '/outbox' | '/profile';
+  href: '/' | '/quick-check' | '/ingredients' | '/bottles' | '/team' | '/outbox' | '/profile' | '/more';
   label: string;
   /** The word under the icon in the phone tab bar, where six labels share 390 px. */
   shortLabel: string;
@@ -17,6 +17,7 @@ export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined
   const items: NavItem[] = [
     { href: '/', label: 'Home', shortLabel: 'Home', icon: 'home' },
     { href: '/quick-check', label: 'Quick check', shortLabel: 'Check', icon: 'gauge' },
+    { href: '/ingredients', label: 'Ingredients', shortLabel: 'Ingredients', icon: 'leaf' },
     { href: '/bottles', label: 'Bottles', shortLabel: 'Bottles', icon: 'bottle' },
   ];
   if (owner) items.push({ href: '/team', label: 'Team', shortLabel: 'Team', icon: 'team' });
@@ -28,4 +29,14 @@ export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined
 /** Whether a nav item is the current page (Home only on its own path). */
 export function isActive(item: NavItem, pathname: string): boolean {
   return item.href === '/' ? pathname === '/' : pathname === item.href || pathname.startsWith(`${item.href}/`);
+}
+
+/** Most tabs a phone's bottom bar holds at 390 px before labels get cramped. */
+export const PHONE_TAB_LIMIT = 5;
+
+/** The phone tab bar: every destination when they fit, else the first four and "More", which lists the rest. */
+export function phoneTabs(items: NavItem[]): { tabs: NavItem[]; overflow: NavItem[] } {
+  if (items.length <= PHONE_TAB_LIMIT) return { tabs: items, overflow: [] };
+  const tabs = items.slice(0, PHONE_TAB_LIMIT - 1);
+  return { tabs: [...tabs, { href: '/more', label: 'More', shortLabel: 'More', icon: 'more' }], overflow: items.slice(PHONE_TAB_LIMIT - 1) };
 }

@@ -110,7 +110,8 @@ export function categoryOf(food: Pick<SrFood, 'name' | 'foodGroup'>): Category {
       ? 'herb'
       : 'spice';
   }
-  if (foodGroup === '1900' && has(name, 'sugar', 'syrup', 'honey', 'molasses', 'sweetener')) return 'sugar-syrup';
+  // "No sugar added" ice cream is a sweet, not a sugar: judge by what the food is (its first word), or a syrup.
+  if (foodGroup === '1900' && (/^(sugars?|syrups?|honey|molasses|sweeteners?)\b/i.test(name) || has(name, 'syrup'))) return 'sugar-syrup';
   if (foodGroup === '1800' || foodGroup === '1900') return 'baked-good';
   if (has(name, 'juice')) return 'juice';
   if (has(name, 'ginger root', 'horseradish')) return 'spice';

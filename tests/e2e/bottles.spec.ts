@@ -1,11 +1,11 @@
 import { expect, test } from '@playwright/test';
 
-import { PHONE, shot, signIn, WIDE } from './helpers';
+import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
 
 test('an owner adds a bottle format with its rating; a brewer sees it but cannot change the table', async ({ browser }) => {
   const owner = await (await browser.newContext({ viewport: WIDE })).newPage();
   await signIn(owner, 'imogen@wrenfield.example', 'wrenfield-owner');
-  await owner.getByRole('link', { name: 'Bottles' }).click();
+  await openNav(owner, 'Bottles');
   await expect(owner.getByText('Glass crown cap 330 mL')).toBeVisible();
   await expect(owner.getByText('Typical value: confirm with your supplier').first()).toBeVisible();
   await owner.getByRole('button', { name: 'Add a format' }).click();
@@ -26,7 +26,7 @@ test('an owner adds a bottle format with its rating; a brewer sees it but cannot
 
   const brewer = await (await browser.newContext({ viewport: PHONE })).newPage();
   await signIn(brewer, 'juno@wrenfield.example', 'wrenfield-brewer');
-  await brewer.getByRole('link', { name: 'Bottles' }).click();
+  await openNav(brewer, 'Bottles');
   await expect(brewer.getByText('Stubby glass 275 mL')).toBeVisible();
   await expect(brewer.getByText('Only owners change this table.', { exact: false })).toBeVisible();
   await expect(brewer.getByRole('button', { name: 'Add a format' })).toHaveCount(0);

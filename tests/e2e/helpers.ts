@@ -14,3 +14,15 @@ export async function signIn(page: Page, email: string, password: string) {
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
+
+/** Opens a destination of the shell: from the rail or tab bar, or through "More" when the phone bar has no room for it. */
+export async function openNav(page: Page, label: string) {
+  await page.getByRole('navigation', { name: 'Main' }).waitFor();
+  const link = page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: label, exact: true });
+  if ((await link.count()) > 0) {
+    await link.first().click();
+    return;
+  }
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'More', exact: true }).click();
+  await page.getByRole('button', { name: label, exact: true }).click();
+}

@@ -1,9 +1,9 @@
 import { expect, test, type Page } from '@playwright/test';
 
-import { PHONE, shot, signIn, WIDE } from './helpers';
+import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
 
 async function answerTheQuestion(page: Page, prefix: string) {
-  await page.getByRole('link', { name: 'Quick check' }).click();
+  await openNav(page, 'Quick check');
   await expect(page.getByRole('heading', { name: 'Quick check', level: 1 })).toBeVisible();
   await page.getByRole('radio', { name: 'Glass crown cap 330 mL' }).click();
   await expect(page.getByLabel('Liquid per bottle')).toHaveValue('330');
@@ -77,7 +77,7 @@ test('bad input gets a message and the last good numbers stay', async ({ browser
   const context = await browser.newContext({ viewport: WIDE });
   const page = await context.newPage();
   await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
-  await page.getByRole('link', { name: 'Quick check' }).click();
+  await openNav(page, 'Quick check');
   await expect(page.getByRole('heading', { name: 'In each bottle', exact: true })).toBeVisible();
   await page.getByLabel('Liquid per bottle').fill('-3');
   await page.getByLabel('Liquid per bottle').blur();

@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 
-import { PHONE, shot, signIn, url, WIDE } from './helpers';
+import { openNav, PHONE, shot, signIn, url, WIDE } from './helpers';
 
 test('an owner signs up, invites a brewer through the outbox, and the brewer cannot open Team', async ({ browser }) => {
   const stamp = Date.now();
@@ -23,7 +23,7 @@ test('an owner signs up, invites a brewer through the outbox, and the brewer can
   await expect(owner.getByText('Sloe Meadow Ferments').first()).toBeVisible();
   await shot(owner, 'phone-owner-home');
 
-  await owner.getByRole('link', { name: 'Team' }).click();
+  await openNav(owner, 'Team');
   await owner.getByLabel('E-mail of the person to invite').fill(brewerEmail);
   await owner.getByRole('radio', { name: 'Brewer' }).click();
   await owner.getByRole('button', { name: 'Send invitation' }).click();
@@ -31,7 +31,7 @@ test('an owner signs up, invites a brewer through the outbox, and the brewer can
   await expect(owner.getByText(brewerEmail).last()).toBeVisible();
   await shot(owner, 'phone-owner-team');
 
-  await owner.getByRole('link', { name: 'Mail outbox' }).click();
+  await openNav(owner, 'Mail outbox');
   await owner.getByRole('listitem', { name: new RegExp(`to ${brewerEmail}`) }).click();
   const link = owner.getByRole('link', { name: /accept-invitation\?token=/ });
   await expect(link).toBeVisible();
@@ -66,7 +66,7 @@ test('an owner signs up, invites a brewer through the outbox, and the brewer can
   await shot(brewer, 'wide-brewer-team-refused');
 
   // The owner's team now lists the brewer as a member.
-  await owner.getByRole('link', { name: 'Team' }).click();
+  await openNav(owner, 'Team');
   await expect(owner.getByText('Bram Tiller')).toBeVisible();
   await ownerContext.close();
   await brewerContext.close();
@@ -81,7 +81,7 @@ test('the demo owner signs in on a wide screen and sees the side rail', async ({
   await expect(page.getByRole('heading', { name: 'Hello, Imogen' })).toBeVisible();
   await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
   await shot(page, 'wide-demo-owner-home');
-  await page.getByRole('link', { name: 'Team' }).click();
+  await openNav(page, 'Team');
   await expect(page.getByText('Juno Marsh')).toBeVisible();
   await shot(page, 'wide-demo-owner-team');
   await context.close();

@@ -1,0 +1,84 @@
+import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import type { Allergen, Category, Measure } from '../ingredients';
+import type { HouseIngredientInput } from '../schemas/ingredients';
+import { api } from './client';
+import { staleTimes } from './query-client';
+
+export interface Ingredient {
+  id: number;
+  scope: 'dataset' | 'house';
+  name: string;
+  category: Category;
+  per100g: { energyKcal: number | null; carbohydrateG: number | null; sugarsG: number | null; fibreG: number | null; fatG: number | null; proteinG: number | null };
+  perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
+  fermentableSharePct: number;
+  steepSharePct: number;
+  allergens: Allergen[];
+  measures: Measure[];
+  costPerKg: number | null;
+  notes: string | null;
+  source: string;
+  archived: boolean;
+}
+
+export interface IngredientPage {
+  items: Ingredient[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface IngredientChangeEntry {
+  id: number;
+  action: string;
+  at: string;
+  by: string | null;
+  changes: Record<string, [unknown, unknown]>;
+}
+
+export interface IngredientQuery {
+  q: string;
+  category: Category | '';
+  page: number;
+  pageSize?: number;
+  archived?: boolean;
+}
+
+export const ingredientKeys = {
+  all: ['ingredients'] as const,
+  search: (query: IngredientQuery) => ['ingredients', 'search', query] as const,
+  one: (id: number) => ['ingredients', 'one', id] as const,
+  changes: (id: number) => ['ingredients', 'changes', id] as const,
+};
+
+export function useIngredientSearchQuery(query: IngredientQuery) {
+  const params = new URLSearchParams({ q: query.q, category: query.category, page: String(query.page), pageSize: String(query.pageSize ?? 25), archived: String(query.archived ?? false) });
+  return useQuery({
+    queryKey: ingredientKeys.search(query),
+    staleTime: staleTimes.list,
+    placeholderData: keepPreviousData,
+    queryFn: ({ signal }) => api.get<IngredientPage>(`/ingredients?${params.toString()}`, signal),
+  });
+}
+
+export function useIngredientQuery(id: number) {
+  return useQuery({ queryKey: ingredientKeys.one(id), enabled: Number.isInteger(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<Ingredient>(`/ingredients/${id}`, signal) });
+}
+
+export function useIngredientChangesQuery(id: number, enabled: boolean) {
+  return useQuery({ queryKey: ingredientKeys.changes(id), enabled, staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<IngredientChangeEntry[]>(`/ingredients/${id}/changes`, signal) });
+}
+
+function useIngredientMutation<T>(mutationFn: (input: T) => Promise<Ingredient>) {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn, onSuccess: () => queryClient.invalidateQueries({ queryKey: ingredientKeys.all }) });
+}
+
+export const useCreateIngredientMutation = () => useIngredientMutation((input: HouseIngredientInput) => api.post<Ingredient>('/ingredients', input));
+export const useUpdateIngredientMutation = () =>
+  useIngredientMutation(({ id, input }: { id: number; input: HouseIngredientInput }) => api.put<Ingredient>(`/ingredients/${id}`, input));
+export const useCopyIngredientMutation = () =>
+  useIngredientMutation(({ id, name }: { id: number; name: string }) => api.post<Ingredient>(`/ingredients/${id}/copy`, { name }));
+export const useArchiveIngredientMutation = () =>
+  useIngredientMutation(({ id, archived }: { id: number; archived: boolean }) => api.post<Ingredient>(`/ingredients/${id}/${archived ? 'archive' : 'restore'}`));

@@ -1,0 +1,49 @@
+import { expect, test } from '@playwright/test';
+
+import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
+
+test('a developer searches the library, reads an ingredient and adds a house ingredient from its label', async ({ browser }) => {
+  const page = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
+  await openNav(page, 'Ingredients');
+  await page.getByLabel('Search ingredients').fill('straw rasp');
+  await expect(page.getByRole('link', { name: 'Strawberries, raw', exact: true })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Raspberries, raw', exact: true })).toBeVisible();
+  await shot(page, 'phone-ingredients-search');
+  await page.getByRole('link', { name: 'Strawberries, raw', exact: true }).click();
+  // USDA SR25, NDB 09316: 4.89 g total sugars per 100 g, so 0.0489 g per gram.
+  await expect(page.getByText('0.0489 g per gram', { exact: true })).toBeVisible();
+  await expect(page.getByText('Source: USDA SR25 record 09316')).toBeVisible();
+  await shot(page, 'phone-ingredient-detail');
+
+  const stamp = Date.now();
+  await openNav(page, 'Ingredients');
+  await page.getByRole('button', { name: 'New house ingredient' }).click();
+  await page.getByLabel('Name', { exact: true }).fill(`Orchard quince purée ${stamp}`);
+  await page.getByRole('radio', { name: 'Purée' }).click();
+  await page.getByLabel('Serving size').fill('40');
+  await page.getByLabel('Total sugars per serving').fill('50');
+  await page.getByRole('button', { name: 'Save ingredient' }).click();
+  await expect(page.getByText('Sugars (50 g) cannot weigh more than the serving (40 g).')).toBeVisible();
+  await page.getByLabel('Total sugars per serving').fill('6');
+  await expect(page.getByText('= 15.00 g of sugars per 100 g')).toBeVisible();
+  await page.getByRole('checkbox', { name: 'Tree nuts' }).click();
+  await shot(page, 'phone-house-ingredient-form');
+  await page.getByRole('button', { name: 'Save ingredient' }).click();
+  await expect(page.getByRole('heading', { name: `Orchard quince purée ${stamp}`, level: 1 })).toBeVisible();
+  await expect(page.getByText('0.1500 g per gram', { exact: true })).toBeVisible();
+  await expect(page.getByText('Tree nuts')).toBeVisible();
+  await expect(page.getByText(/Rafi Castellan · created/)).toBeVisible();
+});
+
+test('a brewer reads the library on a wide screen but cannot add to it', async ({ browser }) => {
+  const page = await (await browser.newContext({ viewport: WIDE })).newPage();
+  await signIn(page, 'juno@wrenfield.example', 'wrenfield-brewer');
+  await openNav(page, 'Ingredients');
+  await page.getByRole('radio', { name: 'Sugar or syrup' }).click();
+  await page.getByLabel('Search ingredients').fill('hon');
+  // Ranked by relevance: the word that starts with "hon" comes first.
+  await expect(page.getByRole('table', { name: 'Ingredients' }).getByRole('link').first()).toHaveText('Honey');
+  await expect(page.getByRole('button', { name: 'New house ingredient' })).toHaveCount(0);
+  await shot(page, 'wide-ingredients');
+});
