@@ -111,7 +111,9 @@ export async function searchIngredients(auth: AuthContext, search: IngredientSea
   const filters = ['(i.organisation_id IS NULL OR i.organisation_id = :org)', search.archived ? 'i.archived_at IS NOT NULL' : 'i.archived_at IS NULL'];
   if (search.category) filters.push('i.category = :category');
   const replacements = { org: auth.organisationId, category: search.category, match, limit: search.pageSize, offset: (search.page - 1) * search.pageSize };
-  const from = match ? 'ingredient_search s JOIN ingredients i ON i.id = s.rowid' : 'ingredients i';
+  // CROSS JOIN makes SQLite run the full-text match first and look rows up by id; left to itself it walks every
+  // ingredient and probes the index per row (150 ms instead of 1 ms over the full dataset).
+  const from = match ? 'ingredient_search s CROSS JOIN ingredients i ON i.id = s.rowid' : 'ingredients i';
   const where = `${match ? 'ingredient_search MATCH :match AND ' : ''}${filters.join(' AND ')}`;
   const order = match ? '(i.organisation_id IS NULL), bm25(ingredient_search), length(i.name)' : '(i.organisation_id IS NULL), i.name';
   const [ids, [{ total }]] = await Promise.all([
