@@ -12,7 +12,7 @@ import { benchRouter } from './routes/bench';
 import { bottleFormatsRouter } from './routes/bottle-formats';
 import { calculationsRouter } from './routes/calculations';
 import { healthRouter } from './routes/health';
-import { ingredientsRouter } from './routes/ingredients';
+import { attachmentsRouter, ingredientsRouter } from './routes/ingredients';
 import { outboxRouter } from './routes/outbox';
 import { organisationRouter, profileRouter } from './routes/profile';
 import { teamRouter } from './routes/team';
@@ -30,6 +30,7 @@ export function apiRouter(): Router {
   api.use('/calculations', calculationsRouter);
   api.use('/bottle-formats', bottleFormatsRouter);
   api.use('/ingredients', ingredientsRouter);
+  api.use('/attachments', attachmentsRouter);
   if (config.benchRoutes) api.use('/bench', benchRouter);
   return api;
 }

@@ -24,6 +24,8 @@ const envSchema = yup.object({
   LOG_LEVEL: yup.string().oneOf(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']),
   CORS_ORIGINS: yup.string().default('http://localhost:8081'),
   BENCH_ROUTES: yup.boolean().default(false),
+  UPLOADS_DIR: yup.string().default('data/uploads'),
+  UPLOAD_MAX_MB: yup.number().positive().max(100).default(10),
 });
 
 export interface Config {
@@ -51,6 +53,8 @@ export interface Config {
   webDistDir: string;
   /** Mounts /api/bench, the do-nothing reference endpoint `npm run bench` measures against. */
   benchRoutes: boolean;
+  uploadsDir: string;
+  uploadMaxBytes: number;
 }
 
 const DEV_SECRET = 'fizzwright-development-secret-not-for-production';
@@ -91,6 +95,8 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     corsOrigins: parsed.CORS_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean),
     webDistDir: path.resolve(ROOT_DIR, 'dist'),
     benchRoutes: parsed.BENCH_ROUTES,
+    uploadsDir: path.resolve(ROOT_DIR, parsed.UPLOADS_DIR),
+    uploadMaxBytes: Math.round(parsed.UPLOAD_MAX_MB * 1024 * 1024),
   };
 }
 

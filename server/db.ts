@@ -7,6 +7,7 @@ import { SequelizeStorage, Umzug } from 'umzug';
 import { config } from './config';
 import { logger } from './logger';
 import { migrations } from './migrations';
+import { Attachment } from './models/attachment';
 import { BottleFormat } from './models/bottle-format';
 import { Ingredient, IngredientChange } from './models/ingredient';
 import { Invitation } from './models/invitation';
@@ -17,7 +18,7 @@ import { User } from './models/user';
 import { forgetBrewery } from './services/brewery-cache';
 import { forgetCachedUser } from './services/sessions';
 
-export { BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, User };
+export { Attachment, BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, User };
 
 function createSequelize(databasePath: string): Sequelize {
   if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
@@ -33,7 +34,7 @@ function createSequelize(databasePath: string): Sequelize {
 
 export const sequelize = createSequelize(config.databasePath);
 
-for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat, Ingredient, IngredientChange]) model.initModel(sequelize);
+for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat, Ingredient, IngredientChange, Attachment]) model.initModel(sequelize);
 
 Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
 User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -48,6 +49,9 @@ Organisation.hasMany(BottleFormat, { foreignKey: 'organisationId', as: 'bottleFo
 Organisation.hasMany(Ingredient, { foreignKey: 'organisationId', as: 'ingredients' });
 Ingredient.hasMany(IngredientChange, { foreignKey: 'ingredientId', as: 'changeLog' });
 IngredientChange.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Ingredient.hasMany(Attachment, { foreignKey: 'ingredientId', as: 'attachments' });
+Organisation.hasMany(Attachment, { foreignKey: 'organisationId', as: 'attachments' });
+Attachment.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
 
 // Any change to a user row (role, active, password) must reach the sign-in check at once.
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));

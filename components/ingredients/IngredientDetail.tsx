@@ -6,6 +6,7 @@ import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
 import { Badge, Card, Table, Text, type Column } from '../ui';
+import { Attachments } from './Attachments';
 
 const value = (v: number | null, unit: string, digits = 1) => (v === null ? 'not measured' : `${formatNumber(v, digits)} ${unit}`);
 
@@ -15,7 +16,7 @@ interface MeasureRow {
 }
 
 /** Everything known about one ingredient: per 100 g, per household measure, sugar per gram, allergens, source, changes. */
-export function IngredientDetail({ ingredient }: { ingredient: Ingredient }) {
+export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredient; canEdit: boolean }) {
   const changes = useIngredientChangesQuery(ingredient.id, ingredient.scope === 'house');
   const sugarPerG = ingredient.perGram.sugarsG;
   const measureColumns: Column<MeasureRow>[] = [
@@ -68,6 +69,7 @@ export function IngredientDetail({ ingredient }: { ingredient: Ingredient }) {
           <Table label="Household measures" columns={measureColumns} rows={ingredient.measures} rowKey={(m) => m.label} />
         </Card>
       ) : null}
+      {ingredient.scope === 'house' ? <Attachments ingredientId={ingredient.id} canUpload={canEdit} /> : null}
       {ingredient.scope === 'house' ? (
         <Card title="Changes">
           {changes.data?.map((c) => (

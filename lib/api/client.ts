@@ -50,7 +50,26 @@ export async function apiRequest<T>(path: string, options: { method?: Method; bo
   return parsed as T;
 }
 
+/** Sends one file as multipart form data (the browser sets the boundary). */
+async function upload<T>(path: string, file: Blob, name: string): Promise<T> {
+  const form = new FormData();
+  form.append('file', file, name);
+  let response: Response;
+  try {
+    response = await fetch(`${env.apiUrl}/api${path}`, { method: 'POST', credentials: 'include', body: form, headers: { Accept: 'application/json' } });
+  } catch {
+    throw new ApiError(0, 'network', 'Cannot reach the Fizzwright server. Check your connection and try again.');
+  }
+  const parsed = (await response.json().catch(() => undefined)) as (T & ErrorBody) | undefined;
+  if (!response.ok) {
+    const error = parsed?.error;
+    throw new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.fields);
+  }
+  return parsed as T;
+}
+
 export const api = {
+  upload,
   get: <T>(path: string, signal?: AbortSignal) => apiRequest<T>(path, { signal }),
   post: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'POST', body: body ?? {} }),
   patch: <T>(path: string, body: unknown) => apiRequest<T>(path, { method: 'PATCH', body }),

@@ -82,3 +82,30 @@ export const useCopyIngredientMutation = () =>
   useIngredientMutation(({ id, name }: { id: number; name: string }) => api.post<Ingredient>(`/ingredients/${id}/copy`, { name }));
 export const useArchiveIngredientMutation = () =>
   useIngredientMutation(({ id, archived }: { id: number; archived: boolean }) => api.post<Ingredient>(`/ingredients/${id}/${archived ? 'archive' : 'restore'}`));
+
+export interface Attachment {
+  id: number;
+  name: string;
+  mimeType: string;
+  sizeBytes: number;
+  uploadedBy: string | null;
+  createdAt: string;
+  url: string;
+}
+
+export function useAttachmentsQuery(ingredientId: number, enabled: boolean) {
+  return useQuery({
+    queryKey: ['ingredients', 'attachments', ingredientId],
+    enabled,
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<Attachment[]>(`/ingredients/${ingredientId}/attachments`, signal),
+  });
+}
+
+export function useUploadAttachmentMutation(ingredientId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, name }: { file: Blob; name: string }) => api.upload<Attachment>(`/ingredients/${ingredientId}/attachments`, file, name),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['ingredients', 'attachments', ingredientId] }),
+  });
+}

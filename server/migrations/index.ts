@@ -3,6 +3,7 @@ import type { QueryInterface } from 'sequelize';
 import * as accounts from './0001-accounts';
 import * as calculations from './0002-calculations';
 import * as ingredients from './0003-ingredients';
+import * as attachments from './0004-attachments';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -14,4 +15,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0001-accounts', ...accounts },
   { name: '0002-calculations', ...calculations },
   { name: '0003-ingredients', ...ingredients },
+  { name: '0004-attachments', ...attachments },
 ];

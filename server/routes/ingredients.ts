@@ -1,10 +1,13 @@
 import { Router } from 'express';
+import multer from 'multer';
 import * as yup from 'yup';
 
 import { idParam } from '../../lib/schemas/common';
 import { houseIngredientSchema, ingredientSearchSchema, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
 import { allow, authOf } from '../middleware/access';
 import { validate } from '../middleware/validate';
+import { config } from '../config';
+import * as attachments from '../services/attachments';
 import * as ingredients from '../services/ingredients';
 
 export const ingredientsRouter = Router();
@@ -43,4 +46,25 @@ ingredientsRouter.post('/:id/archive', allow(EDITORS), validate({ params: idPara
 
 ingredientsRouter.post('/:id/restore', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
   res.json(await ingredients.setHouseIngredientArchived(authOf(res), id(res.locals), false));
+});
+
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.uploadMaxBytes, files: 1 } });
+
+ingredientsRouter.get('/:id/attachments', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  res.json(await attachments.listAttachments(authOf(res), id(res.locals)));
+});
+
+ingredientsRouter.post('/:id/attachments', allow(EDITORS), validate({ params: idParam }), upload.single('file'), async (req, res) => {
+  res.status(201).json(await attachments.addAttachment(authOf(res), id(res.locals), req.file));
+});
+
+/** Mounted at /api/attachments: files are served only to members of the brewery that owns them. */
+export const attachmentsRouter = Router();
+
+attachmentsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  const file = await attachments.attachmentFile(authOf(res), id(res.locals));
+  res.setHeader('Content-Type', file.mimeType);
+  res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/"/g, '')}"`);
+  res.setHeader('Cache-Control', 'private, max-age=3600');
+  res.sendFile(file.path);
 });

@@ -16,6 +16,7 @@ export default async function globalSetup(): Promise<void> {
       PORT: '0',
       HOST: '127.0.0.1',
       DATABASE_PATH: path.join(dir, 'e2e.sqlite'),
+      UPLOADS_DIR: path.join(dir, 'uploads'),
       BCRYPT_COST: '4',
       AUTH_RATE_LIMIT: '10000',
       OUTBOX_OPEN: 'false',

@@ -34,6 +34,16 @@ test('a developer searches the library, reads an ingredient and adds a house ing
   await expect(page.getByText('0.1500 g per gram', { exact: true })).toBeVisible();
   await expect(page.getByText('Tree nuts')).toBeVisible();
   await expect(page.getByText(/Rafi Castellan · created/)).toBeVisible();
+
+  // The supplier's label photo, through the browser's file picker.
+  const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.alloc(200, 7)]);
+  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Attach a PDF, JPEG or PNG' }).click()]);
+  await chooser.setFiles({ name: 'quince-label.png', mimeType: 'image/png', buffer: png });
+  await expect(page.getByRole('button', { name: 'Open quince-label.png' })).toBeVisible();
+  const [chooser2] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Attach a PDF, JPEG or PNG' }).click()]);
+  await chooser2.setFiles({ name: 'not-really.png', mimeType: 'image/png', buffer: Buffer.from('plain text pretending') });
+  await expect(page.getByText('Attach a PDF, JPEG or PNG file.')).toBeVisible();
+  await shot(page, 'phone-house-ingredient-detail');
 });
 
 test('a brewer reads the library on a wide screen but cannot add to it', async ({ browser }) => {

@@ -9,3 +9,5 @@ process.env.AUTH_RATE_LIMIT = process.env.AUTH_RATE_LIMIT_FOR_TEST ?? '10000';
 process.env.SEED_DEMO = 'false';
 process.env.APP_URL = 'http://fizzwright.test';
 process.env.SMTP_URL = '';
+process.env.UPLOADS_DIR = path.join(os.tmpdir(), `fizzwright-uploads-${process.pid}-${Math.random().toString(36).slice(2)}`);
+process.env.UPLOAD_MAX_MB = '1';

@@ -33,7 +33,7 @@ export default function IngredientScreen() {
   return (
     <Screen title={item.name} actions={actions}>
       <FormStatus error={copy.error ?? archive.error} />
-      <IngredientDetail ingredient={item} />
+      <IngredientDetail ingredient={item} canEdit={canEdit} />
     </Screen>
   );
 }
