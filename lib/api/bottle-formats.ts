@@ -3,11 +3,9 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { BottleFormatInput } from '../schemas/bottle-formats';
 import { api } from './client';
 import { staleTimes } from './query-client';
+import type { BottleFormat } from './types';
 
-export interface BottleFormat extends BottleFormatInput {
-  id: number;
-  archived: boolean;
-}
+export type { BottleFormat };
 
 export const bottleFormatKeys = {
   all: ['bottle-formats'] as const,

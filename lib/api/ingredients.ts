@@ -1,26 +1,12 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { Allergen, Category, Measure } from '../ingredients';
+import type { Category } from '../ingredients';
 import type { HouseIngredientInput } from '../schemas/ingredients';
 import { api } from './client';
 import { staleTimes } from './query-client';
+import type { Attachment, Ingredient } from './types';
 
-export interface Ingredient {
-  id: number;
-  scope: 'dataset' | 'house';
-  name: string;
-  category: Category;
-  per100g: { energyKcal: number | null; carbohydrateG: number | null; sugarsG: number | null; fibreG: number | null; fatG: number | null; proteinG: number | null };
-  perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
-  fermentableSharePct: number;
-  steepSharePct: number;
-  allergens: Allergen[];
-  measures: Measure[];
-  costPerKg: number | null;
-  notes: string | null;
-  source: string;
-  archived: boolean;
-}
+export type { Attachment, Ingredient };
 
 export interface IngredientPage {
   items: Ingredient[];
@@ -82,16 +68,6 @@ export const useCopyIngredientMutation = () =>
   useIngredientMutation(({ id, name }: { id: number; name: string }) => api.post<Ingredient>(`/ingredients/${id}/copy`, { name }));
 export const useArchiveIngredientMutation = () =>
   useIngredientMutation(({ id, archived }: { id: number; archived: boolean }) => api.post<Ingredient>(`/ingredients/${id}/${archived ? 'archive' : 'restore'}`));
-
-export interface Attachment {
-  id: number;
-  name: string;
-  mimeType: string;
-  sizeBytes: number;
-  uploadedBy: string | null;
-  createdAt: string;
-  url: string;
-}
 
 export function useAttachmentsQuery(ingredientId: number, enabled: boolean) {
   return useQuery({

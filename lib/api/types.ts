@@ -1,4 +1,6 @@
+import type { Allergen, Category, Measure } from '../ingredients';
 import type { Role } from '../roles';
+import type { BottleFormatInput } from '../schemas/bottle-formats';
 import type { UnitSystem } from '../units';
 
 /** The uniform error body every API error carries. */
@@ -76,4 +78,37 @@ export interface ServerInfo {
   outbox: boolean;
   /** True when anyone, signed in or not, may read the outbox (development only). */
   outboxOpen: boolean;
+}
+
+export interface BottleFormat extends BottleFormatInput {
+  id: number;
+  archived: boolean;
+}
+
+/** An ingredient as the API answers it: values per 100 g and per gram, with where they come from. */
+export interface Ingredient {
+  id: number;
+  scope: 'dataset' | 'house';
+  name: string;
+  category: Category;
+  per100g: { energyKcal: number | null; carbohydrateG: number | null; sugarsG: number | null; fibreG: number | null; fatG: number | null; proteinG: number | null };
+  perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
+  fermentableSharePct: number;
+  steepSharePct: number;
+  allergens: Allergen[];
+  measures: Measure[];
+  costPerKg: number | null;
+  notes: string | null;
+  source: string;
+  archived: boolean;
+}
+
+export interface Attachment {
+  id: number;
+  name: string;
+  mimeType: string;
+  sizeBytes: number;
+  uploadedBy: string | null;
+  createdAt: string;
+  url: string;
 }

@@ -2,8 +2,9 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 
+import type { Attachment } from '../../lib/api/types';
 import { config } from '../config';
-import { Attachment, User } from '../db';
+import { Attachment as AttachmentRow, User } from '../db';
 import { badRequest, forbidden, notFound } from '../errors';
 import { visibleIngredient } from './ingredients';
 import type { AuthContext } from './sessions';
@@ -19,17 +20,9 @@ export function sniffFileType(buffer: Buffer): { mime: string; ext: string } | n
   return SIGNATURES.find((s) => s.bytes.every((byte, i) => buffer[i] === byte)) ?? null;
 }
 
-export interface AttachmentDto {
-  id: number;
-  name: string;
-  mimeType: string;
-  sizeBytes: number;
-  uploadedBy: string | null;
-  createdAt: string;
-  url: string;
-}
+export type AttachmentDto = Attachment;
 
-const toDto = (a: Attachment & { uploadedBy?: User | null }): AttachmentDto => ({
+const toDto = (a: AttachmentRow & { uploadedBy?: User | null }): AttachmentDto => ({
   id: a.id,
   name: a.originalName,
   mimeType: a.mimeType,
@@ -51,7 +44,7 @@ export async function addAttachment(auth: AuthContext, ingredientId: number, fil
   await fs.promises.writeFile(path.join(config.uploadsDir, storedName), file.buffer, { flag: 'wx' });
   const originalName = path.basename(file.originalname).replace(/[^\w .()-]+/g, '_').slice(0, 200) || `file.${type.ext}`;
   try {
-    const created = await Attachment.create({
+    const created = await AttachmentRow.create({
       organisationId: auth.organisationId,
       ingredientId: ingredient.id,
       uploadedById: auth.userId,
@@ -69,7 +62,7 @@ export async function addAttachment(auth: AuthContext, ingredientId: number, fil
 
 export async function listAttachments(auth: AuthContext, ingredientId: number): Promise<AttachmentDto[]> {
   const ingredient = await visibleIngredient(auth, ingredientId);
-  const rows = await Attachment.findAll({
+  const rows = await AttachmentRow.findAll({
     where: { ingredientId: ingredient.id, organisationId: auth.organisationId },
     include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }],
     order: [['id', 'DESC']],
@@ -79,7 +72,7 @@ export async function listAttachments(auth: AuthContext, ingredientId: number): 
 
 /** The file for a member of the brewery that owns it; anyone else is told it does not exist. */
 export async function attachmentFile(auth: AuthContext, id: number): Promise<{ path: string; mimeType: string; name: string }> {
-  const attachment = await Attachment.findOne({ where: { id, organisationId: auth.organisationId } });
+  const attachment = await AttachmentRow.findOne({ where: { id, organisationId: auth.organisationId } });
   if (!attachment) throw notFound('No such file.');
   return { path: path.join(config.uploadsDir, attachment.storedName), mimeType: attachment.mimeType, name: attachment.originalName };
 }

@@ -1,14 +1,12 @@
 import { Op, type Transaction } from 'sequelize';
 
+import type { BottleFormat as BottleFormatShape } from '../../lib/api/types';
 import type { BottleFormatInput } from '../../lib/schemas/bottle-formats';
 import { BottleFormat } from '../db';
 import { conflict, notFound } from '../errors';
 import { STARTER_BOTTLE_FORMATS } from '../seed/bottle-formats';
 
-export interface BottleFormatDto extends BottleFormatInput {
-  id: number;
-  archived: boolean;
-}
+export type BottleFormatDto = BottleFormatShape;
 
 const toDto = (f: BottleFormat): BottleFormatDto => ({
   id: f.id,

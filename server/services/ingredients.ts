@@ -1,28 +1,14 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 
-import type { Allergen, Category, Measure } from '../../lib/ingredients';
+import type { Ingredient as IngredientDtoShape } from '../../lib/api/types';
+import type { Measure } from '../../lib/ingredients';
 import { per100g, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
 import { Ingredient, IngredientChange, sequelize, User } from '../db';
 import { conflict, forbidden, notFound } from '../errors';
 import type { DatasetIngredient } from '../usda/sr-files';
 import type { AuthContext } from './sessions';
 
-export interface IngredientDto {
-  id: number;
-  scope: 'dataset' | 'house';
-  name: string;
-  category: Category;
-  per100g: { energyKcal: number | null; carbohydrateG: number | null; sugarsG: number | null; fibreG: number | null; fatG: number | null; proteinG: number | null };
-  perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
-  fermentableSharePct: number;
-  steepSharePct: number;
-  allergens: Allergen[];
-  measures: Measure[];
-  costPerKg: number | null;
-  notes: string | null;
-  source: string;
-  archived: boolean;
-}
+export type IngredientDto = IngredientDtoShape;
 
 const div100 = (v: number | null) => (v === null ? null : v / 100);
 
