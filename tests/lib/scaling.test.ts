@@ -1,0 +1,81 @@
+import { batchLitres, gramsPerLitre, roundMass, roundVolume, scaleRecipe, type ScaleInput } from '@/lib/recipes/scaling';
+
+// Hand-worked examples. Conversions by NIST SP 811: 1 lb = 453.59237 g, 1 oz = 28.349523 g, 1 US gal = 3.785412 L.
+const recipe = (batch: ScaleInput['batch'], units: ScaleInput['units'] = 'metric', process: ScaleInput['process'] = { method: 'in-bottle' }): ScaleInput => ({
+  lines: [
+    { name: 'Strawberries', amount: 40, unit: 'g-per-l' },
+    { name: 'Ginger root', amount: 0.8, unit: 'g-per-l' },
+    { name: 'Vanilla extract', amount: 0.2, unit: 'g-per-bottle' },
+  ],
+  sugars: [{ name: 'Sucrose', gPerL: 6 }],
+  bottleLiquidMl: 473,
+  process,
+  batch,
+  units,
+});
+
+describe('batch sizes', () => {
+  it('converts litres, US gallons and bottles of the recipe format', () => {
+    expect(batchLitres({ kind: 'litres', value: 20 }, 473)).toBe(20);
+    expect(batchLitres({ kind: 'us-gallons', value: 5 }, 473)).toBeCloseTo(18.92706, 4);
+    // 120 bottles × 473 mL = 56.76 L.
+    expect(batchLitres({ kind: 'bottles', value: 120 }, 473)).toBeCloseTo(56.76, 10);
+  });
+
+  it('turns every amount unit into grams per litre', () => {
+    expect(gramsPerLitre({ name: 'a', amount: 0.2, unit: 'g-per-bottle' }, 473)).toBeCloseTo(0.42283, 4); // 0.2 g × 1000/473
+    expect(gramsPerLitre({ name: 'b', amount: 2.5, unit: 'pct-weight' }, 473)).toBe(25); // 2.5 % of 1000 g
+  });
+});
+
+describe('rounding to what a scale reads', () => {
+  it('uses grams below 1 kg and kilograms above, showing the resolution', () => {
+    expect(roundMass(5.28, 'metric')).toMatchObject({ value: 5.3, unit: 'g', resolution: 0.1, warn: false });
+    expect(roundMass(340.56, 'metric')).toMatchObject({ value: 340, unit: 'g', resolution: 5 });
+    expect(roundMass(2270.4, 'metric')).toMatchObject({ value: 2.27, unit: 'kg', resolution: 0.01 });
+    expect(roundMass(8000, 'metric')).toMatchObject({ value: 8, unit: 'kg' });
+  });
+
+  it('warns when the rounded amount is more than 1 % off', () => {
+    // 0.14 g read to 0.1 g is 0.1, 28.6 % off: weigh it on a finer scale.
+    expect(roundMass(0.14, 'metric')).toMatchObject({ value: 0.1, warn: true });
+    expect(roundMass(0.14, 'metric').offPct).toBeCloseTo(28.57, 1);
+  });
+
+  it('uses ounces below 1 lb and pounds above in US units', () => {
+    // 340.56 g ÷ 28.349523 = 12.013 oz → 12.0 oz; 2270.4 g ÷ 453.59237 = 5.0054 lb → 5.01 lb.
+    expect(roundMass(340.56, 'us')).toMatchObject({ value: 12, unit: 'oz', resolution: 0.1 });
+    expect(roundMass(2270.4, 'us')).toMatchObject({ value: 5.01, unit: 'lb', resolution: 0.01 });
+    expect(roundVolume(56.76, 'us')).toMatchObject({ value: 14.99, unit: 'US gal' });
+  });
+});
+
+describe('scaleRecipe', () => {
+  it('scales to 120 bottles of 473 mL', () => {
+    const scaled = scaleRecipe(recipe({ kind: 'bottles', value: 120 }));
+    expect(scaled.bottles).toBe(120);
+    expect(scaled.finishedLitres).toMatchObject({ value: 56.8, unit: 'L' });
+    // 40 g/L × 56.76 L = 2270.4 g → 2.27 kg; 0.8 × 56.76 = 45.41 g → 45 g; 0.2 g × 120 = 24 g; 6 × 56.76 = 340.56 g → 340 g.
+    expect(scaled.lines.map((l) => [l.name, l.value, l.unit])).toEqual([
+      ['Strawberries', 2.27, 'kg'],
+      ['Ginger root', 45, 'g'],
+      ['Vanilla extract', 24, 'g'],
+    ]);
+    expect(scaled.sugars[0]).toMatchObject({ value: 340, unit: 'g' });
+    expect(scaled.topUpLitres.exact).toBe(0);
+  });
+
+  it('scales 20 L to whole bottles, and counts the base and the top-up when steeped and strained', () => {
+    // 20 L with 12 % strain loss: steep in 20 L, 2.4 L stays in the solids, top up 2.4 L: 22.4 L of base in all.
+    const scaled = scaleRecipe(recipe({ kind: 'litres', value: 20 }, 'metric', { method: 'steep-strain', strainLossPct: 12 }));
+    expect(scaled.bottles).toBe(42); // 20 000 mL ÷ 473 mL = 42.28
+    expect(scaled.baseLitres).toMatchObject({ value: 22.4, unit: 'L' });
+    expect(scaled.topUpLitres).toMatchObject({ value: 2.4, unit: 'L' });
+    expect(scaled.lines[0]).toMatchObject({ value: 800, unit: 'g' });
+  });
+
+  it('refuses a batch of zero or of a billion litres', () => {
+    expect(() => scaleRecipe(recipe({ kind: 'litres', value: 0 }))).toThrow(RangeError);
+    expect(() => scaleRecipe(recipe({ kind: 'litres', value: 1e9 }))).toThrow(/at most 20000 L/);
+  });
+});
