@@ -15,6 +15,7 @@ import { healthRouter } from './routes/health';
 import { attachmentsRouter, ingredientsRouter } from './routes/ingredients';
 import { outboxRouter } from './routes/outbox';
 import { organisationRouter, profileRouter } from './routes/profile';
+import { recipesRouter } from './routes/recipes';
 import { teamRouter } from './routes/team';
 import { webApp } from './web';
 
@@ -31,6 +32,7 @@ export function apiRouter(): Router {
   api.use('/bottle-formats', bottleFormatsRouter);
   api.use('/ingredients', ingredientsRouter);
   api.use('/attachments', attachmentsRouter);
+  api.use('/recipes', recipesRouter);
   if (config.benchRoutes) api.use('/bench', benchRouter);
   return api;
 }

@@ -4,6 +4,7 @@ import * as accounts from './0001-accounts';
 import * as calculations from './0002-calculations';
 import * as ingredients from './0003-ingredients';
 import * as attachments from './0004-attachments';
+import * as recipes from './0005-recipes';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -16,4 +17,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0002-calculations', ...calculations },
   { name: '0003-ingredients', ...ingredients },
   { name: '0004-attachments', ...attachments },
+  { name: '0005-recipes', ...recipes },
 ];

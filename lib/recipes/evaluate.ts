@@ -1,0 +1,83 @@
+import { computeCarbonation, type CarbonationResult } from '../chemistry/carbonation';
+import type { YieldCase } from '../chemistry/fermentation';
+import type { Allergen } from '../ingredients';
+import type { RecipeContent } from '../schemas/recipes';
+import { gramsPerLitre } from './scaling';
+
+/** What the recipe needs to know of each ingredient it uses. */
+export interface IngredientFacts {
+  id: number;
+  name: string;
+  sugarsG: number | null;
+  fatG: number | null;
+  fermentableShare: number;
+  allergens: Allergen[];
+  costPerKg: number | null;
+}
+
+export interface BottleFacts {
+  liquidMl: number;
+  headspaceMl: number;
+  maxWorkingPressureBar: number;
+}
+
+export interface RecipeEvaluation {
+  carbonation: CarbonationResult;
+  /** Grams per bottle of each ingredient line, and the sugar it brings into the liquid. */
+  lines: { ingredientId: number; name: string; gramsPerBottle: number; sugarToLiquidG: number }[];
+  allergens: Allergen[];
+  /** Ingredient cost; null when a line has no cost per kg. */
+  cost: { perBottle: number | null; perLitre: number | null; missing: string[] };
+  /** Temperatures reported, in order: carbonating, cold store, highest. */
+  temperatureNames: string[];
+}
+
+/**
+ * A recipe's numbers for one bottle of its format: the sugar from the base's residual sugar, the ingredients and
+ * the added sugars, then the engine's carbonation, pressure and alcohol with its findings. In the bottle the solids
+ * stay and all their sugar counts; steeped and strained, each line's extraction share counts.
+ */
+export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingredients: Map<number, IngredientFacts>, abvLimitPercent: number, yieldCase: YieldCase = 'worst'): RecipeEvaluation {
+  const litresPerBottle = bottle.liquidMl / 1000;
+  const inBottle = content.process.method === 'in-bottle';
+  const lines = content.lines.map((line) => {
+    const facts = ingredients.get(line.ingredientId);
+    const gramsPerBottle = gramsPerLitre({ name: '', amount: line.amount, unit: line.unit as never }, bottle.liquidMl) * litresPerBottle;
+    const share = inBottle ? 1 : line.extractionPct / 100;
+    return { line, facts, gramsPerBottle, sugarToLiquidG: gramsPerBottle * ((facts?.sugarsG ?? 0) / 100) * share };
+  });
+  const carbonation = computeCarbonation({
+    liquidMl: bottle.liquidMl,
+    headspaceMl: bottle.headspaceMl,
+    sugars: [
+      // The base's own residual sugar keeps fermenting in the bottle (counted as sucrose: the worst case per gram).
+      { type: 'sucrose', grams: content.baseBrew.residualSugarGPerL * litresPerBottle },
+      ...content.sugars.map((s) => ({ type: s.type, grams: s.gPerL * litresPerBottle })),
+    ],
+    ingredients: lines.map(({ facts, gramsPerBottle, sugarToLiquidG }) => ({
+      name: facts?.name ?? 'Unknown ingredient',
+      sugarG: sugarToLiquidG,
+      fermentableShare: facts?.fermentableShare ?? 1,
+      fatG: inBottle ? gramsPerBottle * ((facts?.fatG ?? 0) / 100) : 0,
+      inBottle,
+    })),
+    residualCo2Volumes: content.baseBrew.residualCo2Volumes,
+    lastOpenTempC: content.baseBrew.lastOpenTempC,
+    sealedTempC: content.process.carbonateTempC,
+    temperaturesC: [content.process.carbonateTempC, content.process.coldStoreTempC, content.highestTempC],
+    maxWorkingPressureBar: bottle.maxWorkingPressureBar,
+    baseAbvPercent: content.baseBrew.abvPercent,
+    yield: yieldCase,
+    abvLimitPercent,
+  });
+  const missing = lines.filter(({ facts }) => facts?.costPerKg === null || facts?.costPerKg === undefined).map(({ facts }) => facts?.name ?? 'Unknown ingredient');
+  const perBottle = missing.length > 0 ? null : lines.reduce((sum, { facts, gramsPerBottle }) => sum + (gramsPerBottle / 1000) * (facts!.costPerKg ?? 0), 0);
+  const allergens = [...new Set(lines.flatMap(({ facts }) => facts?.allergens ?? []))].sort();
+  return {
+    carbonation,
+    lines: lines.map(({ line, facts, gramsPerBottle, sugarToLiquidG }) => ({ ingredientId: line.ingredientId, name: facts?.name ?? 'Unknown ingredient', gramsPerBottle, sugarToLiquidG })),
+    allergens,
+    cost: { perBottle, perLitre: perBottle === null ? null : perBottle / litresPerBottle, missing },
+    temperatureNames: ['Carbonating', 'Cold store', 'Highest'],
+  };
+}

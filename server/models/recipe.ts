@@ -1,0 +1,114 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+import type { RecipeContent, TastingInput } from '../../lib/schemas/recipes';
+import type { Organisation } from './organisation';
+
+function jsonColumn<T>(field: string, allowNull = false) {
+  return {
+    type: DataTypes.TEXT,
+    allowNull,
+    get(this: Model): T {
+      const raw = this.getDataValue(field as never) as string | null;
+      return (raw === null ? null : JSON.parse(raw)) as T;
+    },
+    set(this: Model, value: T) {
+      this.setDataValue(field as never, (value === null ? null : JSON.stringify(value)) as never);
+    },
+  };
+}
+
+/** A flavour of the brewery; its content lives in versions, the newest being `currentVersion`. */
+export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttributes<Recipe>> {
+  declare id: CreationOptional<number>;
+  declare organisationId: ForeignKey<Organisation['id']>;
+  declare name: string;
+  declare flavourNotes: CreationOptional<string>;
+  declare status: CreationOptional<'draft'>;
+  declare currentVersion: CreationOptional<number>;
+  declare archivedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Recipe.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        name: { type: DataTypes.STRING(100), allowNull: false },
+        flavourNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft' },
+        currentVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        archivedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'recipes', underscored: true },
+    );
+  }
+}
+
+/** One saved state of a recipe: never changed once written. */
+export class RecipeVersion extends Model<InferAttributes<RecipeVersion>, InferCreationAttributes<RecipeVersion>> {
+  declare id: CreationOptional<number>;
+  declare recipeId: ForeignKey<Recipe['id']>;
+  declare number: number;
+  declare name: string;
+  declare flavourNotes: string;
+  declare content: RecipeContent;
+  declare note: CreationOptional<string>;
+  declare createdById: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    RecipeVersion.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        number: { type: DataTypes.INTEGER, allowNull: false },
+        name: { type: DataTypes.STRING(100), allowNull: false },
+        flavourNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        content: jsonColumn<RecipeContent>('content'),
+        note: { type: DataTypes.STRING(300), allowNull: false, defaultValue: '' },
+        createdById: { type: DataTypes.INTEGER, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'recipe_versions', underscored: true },
+    );
+  }
+}
+
+export class Tasting extends Model<InferAttributes<Tasting>, InferCreationAttributes<Tasting>> {
+  declare id: CreationOptional<number>;
+  declare recipeId: ForeignKey<Recipe['id']>;
+  declare versionNumber: number;
+  declare userId: number | null;
+  declare tastedOn: string;
+  declare notes: string;
+  declare sweetness: number;
+  declare sourness: number;
+  declare fizz: number;
+  declare flavour: number;
+  declare sugarAddition: TastingInput['sugarAddition'];
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Tasting.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        versionNumber: { type: DataTypes.INTEGER, allowNull: false },
+        userId: { type: DataTypes.INTEGER, allowNull: true },
+        tastedOn: { type: DataTypes.STRING(10), allowNull: false },
+        notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        sweetness: { type: DataTypes.INTEGER, allowNull: false },
+        sourness: { type: DataTypes.INTEGER, allowNull: false },
+        fizz: { type: DataTypes.INTEGER, allowNull: false },
+        flavour: { type: DataTypes.INTEGER, allowNull: false },
+        sugarAddition: jsonColumn<TastingInput['sugarAddition']>('sugarAddition', true),
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'tastings', underscored: true },
+    );
+  }
+}

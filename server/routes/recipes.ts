@@ -1,0 +1,91 @@
+import { Router } from 'express';
+import * as yup from 'yup';
+
+import { idParam } from '../../lib/schemas/common';
+import { numberField } from '../../lib/schemas/numbers';
+import {
+  createRecipeSchema,
+  recipeContentSchema,
+  saveRecipeSchema,
+  scaleRequestSchema,
+  tastingSchema,
+  type CreateRecipeInput,
+  type RecipeContent,
+  type SaveRecipeInput,
+  type ScaleRequest,
+  type TastingInput,
+} from '../../lib/schemas/recipes';
+import { allow, authOf } from '../middleware/access';
+import { validate } from '../middleware/validate';
+import * as recipes from '../services/recipes';
+
+export const recipesRouter = Router();
+
+const EDITORS = ['owner', 'developer'] as const;
+const id = (locals: { params?: unknown }) => (locals.params as { id: number }).id;
+const listQuery = yup.object({ q: yup.string().trim().max(100).default(''), status: yup.string().oneOf(['draft', 'archived', 'all'] as const, 'Choose draft, archived or all.').default('draft') });
+const versionQuery = yup.object({ version: yup.number().typeError('Version must be a number.').integer().positive().optional() });
+const diffQuery = yup.object({
+  from: yup.number().typeError('From must be a version number.').integer().positive().required('Give the version to compare from.'),
+  to: yup.number().typeError('To must be a version number.').integer().positive().required('Give the version to compare to.'),
+});
+const restoreBody = yup.object({ version: numberField('Version').integer().positive().required('Give the version to restore.') });
+
+recipesRouter.get('/', allow('signed-in'), validate({ query: listQuery }), async (_req, res) => {
+  const { q, status } = res.locals.query as yup.InferType<typeof listQuery>;
+  res.json(await recipes.listRecipes(authOf(res), q, status));
+});
+
+recipesRouter.post('/', allow(EDITORS), validate({ body: createRecipeSchema }), async (_req, res) => {
+  res.status(201).json(await recipes.createRecipe(authOf(res), res.locals.body as CreateRecipeInput));
+});
+
+/** The numbers of a recipe being edited, before it is saved. */
+recipesRouter.post('/evaluate', allow('signed-in'), validate({ body: yup.object({ content: recipeContentSchema.required() }) }), async (_req, res) => {
+  res.json(await recipes.evaluate(authOf(res), (res.locals.body as { content: RecipeContent }).content));
+});
+
+recipesRouter.get('/:id', allow('signed-in'), validate({ params: idParam, query: versionQuery }), async (_req, res) => {
+  res.json(await recipes.getRecipe(authOf(res), id(res.locals), (res.locals.query as { version?: number }).version));
+});
+
+recipesRouter.put('/:id', allow(EDITORS), validate({ params: idParam, body: saveRecipeSchema }), async (_req, res) => {
+  res.json(await recipes.saveRecipe(authOf(res), id(res.locals), res.locals.body as SaveRecipeInput));
+});
+
+recipesRouter.get('/:id/versions', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  res.json(await recipes.listVersions(authOf(res), id(res.locals)));
+});
+
+recipesRouter.get('/:id/diff', allow('signed-in'), validate({ params: idParam, query: diffQuery }), async (_req, res) => {
+  const { from, to } = res.locals.query as { from: number; to: number };
+  res.json(await recipes.diffVersions(authOf(res), id(res.locals), from, to));
+});
+
+recipesRouter.post('/:id/restore', allow(EDITORS), validate({ params: idParam, body: restoreBody }), async (_req, res) => {
+  res.json(await recipes.restoreVersion(authOf(res), id(res.locals), (res.locals.body as { version: number }).version));
+});
+
+recipesRouter.post('/:id/duplicate', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
+  res.status(201).json(await recipes.duplicateRecipe(authOf(res), id(res.locals)));
+});
+
+recipesRouter.post('/:id/archive', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
+  res.json(await recipes.setRecipeArchived(authOf(res), id(res.locals), true));
+});
+
+recipesRouter.post('/:id/restore-archived', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
+  res.json(await recipes.setRecipeArchived(authOf(res), id(res.locals), false));
+});
+
+recipesRouter.post('/:id/scale', allow('signed-in'), validate({ params: idParam, body: scaleRequestSchema }), async (_req, res) => {
+  res.json(await recipes.scale(authOf(res), id(res.locals), res.locals.body as ScaleRequest));
+});
+
+recipesRouter.get('/:id/tastings', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  res.json(await recipes.listTastings(authOf(res), id(res.locals)));
+});
+
+recipesRouter.post('/:id/tastings', allow(EDITORS), validate({ params: idParam, body: tastingSchema }), async (_req, res) => {
+  res.status(201).json(await recipes.addTasting(authOf(res), id(res.locals), res.locals.body as TastingInput));
+});

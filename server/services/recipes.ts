@@ -1,0 +1,231 @@
+import { Op } from 'sequelize';
+
+import { diffRecipes, type Change } from '../../lib/recipes/diff';
+import { evaluateRecipe, type IngredientFacts, type RecipeEvaluation } from '../../lib/recipes/evaluate';
+import { scaleRecipe, type ScaledRecipe } from '../../lib/recipes/scaling';
+import { SUGARS } from '../../lib/chemistry/sugars';
+import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../../lib/schemas/recipes';
+import { Ingredient, Recipe, RecipeVersion, sequelize, Tasting, User } from '../db';
+import { badRequest, HttpError, notFound } from '../errors';
+import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
+import type { AuthContext } from './sessions';
+
+export interface RecipeSummary {
+  id: number;
+  name: string;
+  flavourNotes: string;
+  status: 'draft' | 'archived';
+  currentVersion: number;
+  updatedAt: string;
+}
+
+export interface RecipeDetail extends RecipeSummary {
+  content: RecipeContent;
+  versionNote: string;
+  savedBy: string | null;
+  savedAt: string;
+  ingredientNames: Record<number, string>;
+}
+
+const summary = (r: Recipe): RecipeSummary => ({
+  id: r.id,
+  name: r.name,
+  flavourNotes: r.flavourNotes,
+  status: r.archivedAt ? 'archived' : 'draft',
+  currentVersion: r.currentVersion,
+  updatedAt: r.updatedAt.toISOString(),
+});
+
+async function ownRecipe(auth: AuthContext, id: number): Promise<Recipe> {
+  const recipe = await Recipe.findOne({ where: { id, organisationId: auth.organisationId } });
+  if (!recipe) throw notFound('No such recipe in your brewery.');
+  return recipe;
+}
+
+/** Ingredient facts for the lines, refusing ingredients this brewery may not use (another brewery's house ones). */
+async function ingredientFacts(auth: AuthContext, content: RecipeContent, strict: boolean): Promise<Map<number, IngredientFacts>> {
+  const ids = [...new Set(content.lines.map((l) => l.ingredientId))];
+  const rows = ids.length === 0 ? [] : await Ingredient.findAll({ where: { id: ids, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] } });
+  const facts = new Map(rows.map((r) => [r.id, { id: r.id, name: r.name, sugarsG: r.sugarsG, fatG: r.fatG, fermentableShare: r.fermentableShare, allergens: r.allergens, costPerKg: r.costPerKg }]));
+  if (strict) {
+    const fields: Record<string, string> = {};
+    content.lines.forEach((line, i) => {
+      if (!facts.has(line.ingredientId)) fields[`content.lines[${i}].ingredientId`] = 'No such ingredient in your library.';
+    });
+    if (Object.keys(fields).length > 0) throw badRequest('Some ingredients are not in your library.', fields);
+  }
+  return facts;
+}
+
+async function bottleFacts(auth: AuthContext, content: RecipeContent) {
+  const format = await cachedBottleFormat(auth.organisationId, content.bottleFormatId);
+  if (!format) throw badRequest('No such bottle format in your brewery.', { 'content.bottleFormatId': 'No such bottle format in your brewery.' });
+  return format;
+}
+
+/** Checks what a version may refer to before it is stored. */
+async function assertUsable(auth: AuthContext, content: RecipeContent): Promise<void> {
+  await bottleFacts(auth, content);
+  await ingredientFacts(auth, content, true);
+}
+
+export async function listRecipes(auth: AuthContext, q: string, status: 'draft' | 'archived' | 'all'): Promise<RecipeSummary[]> {
+  const where: Record<string | symbol, unknown> = { organisationId: auth.organisationId };
+  if (q) where.name = { [Op.like]: `%${q.replace(/[%_]/g, '')}%` };
+  if (status === 'draft') where.archivedAt = { [Op.is]: null };
+  if (status === 'archived') where.archivedAt = { [Op.not]: null };
+  const rows = await Recipe.findAll({ where, order: [['updatedAt', 'DESC']] });
+  return rows.map(summary);
+}
+
+async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<RecipeDetail> {
+  const version = await RecipeVersion.findOne({ where: { recipeId: recipe.id, number }, include: [{ model: User, as: 'createdBy', attributes: ['name'] }] });
+  if (!version) throw notFound('No such version of this recipe.');
+  const ids = version.content.lines.map((l) => l.ingredientId);
+  const names = ids.length ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
+  return {
+    ...summary(recipe),
+    name: version.name,
+    flavourNotes: version.flavourNotes,
+    content: version.content,
+    versionNote: version.note,
+    savedBy: (version as RecipeVersion & { createdBy?: User }).createdBy?.name ?? null,
+    savedAt: version.createdAt.toISOString(),
+    ingredientNames: Object.fromEntries(names.map((n) => [n.id, n.name])),
+  };
+}
+
+export async function getRecipe(auth: AuthContext, id: number, version?: number): Promise<RecipeDetail> {
+  return detail(await ownRecipe(auth, id), version);
+}
+
+export async function createRecipe(auth: AuthContext, input: CreateRecipeInput): Promise<RecipeDetail> {
+  await assertUsable(auth, input.content);
+  const recipe = await sequelize.transaction(async (transaction) => {
+    const created = await Recipe.create({ organisationId: auth.organisationId, name: input.name, flavourNotes: input.flavourNotes, currentVersion: 1 }, { transaction });
+    await RecipeVersion.create({ recipeId: created.id, number: 1, name: input.name, flavourNotes: input.flavourNotes, content: input.content, note: 'First version', createdById: auth.userId }, { transaction });
+    return created;
+  });
+  return detail(recipe);
+}
+
+/**
+ * Saves a new version. When someone else saved since the editor loaded `baseVersion`, nothing is written and the
+ * answer says so (409), so that neither change is lost silently.
+ */
+export async function saveRecipe(auth: AuthContext, id: number, input: SaveRecipeInput): Promise<RecipeDetail> {
+  await assertUsable(auth, input.content);
+  const recipe = await sequelize.transaction(async (transaction) => {
+    const found = await Recipe.findOne({ where: { id, organisationId: auth.organisationId }, transaction });
+    if (!found) throw notFound('No such recipe in your brewery.');
+    if (found.archivedAt) throw new HttpError(409, 'archived', 'This recipe is archived. Restore it or duplicate it to change it.');
+    if (found.currentVersion !== input.baseVersion) {
+      throw new HttpError(409, 'stale_version', `Someone saved version ${found.currentVersion} while you were editing version ${input.baseVersion}. Reload to see it; your changes are still in the form.`);
+    }
+    const number = found.currentVersion + 1;
+    await RecipeVersion.create({ recipeId: found.id, number, name: input.name, flavourNotes: input.flavourNotes, content: input.content, note: input.note, createdById: auth.userId }, { transaction });
+    await found.update({ name: input.name, flavourNotes: input.flavourNotes, currentVersion: number }, { transaction });
+    return found;
+  });
+  return detail(recipe);
+}
+
+export async function listVersions(auth: AuthContext, id: number) {
+  const recipe = await ownRecipe(auth, id);
+  const versions = await RecipeVersion.findAll({ where: { recipeId: recipe.id }, include: [{ model: User, as: 'createdBy', attributes: ['name'] }], order: [['number', 'DESC']] });
+  return versions.map((v) => ({ number: v.number, note: v.note, savedBy: (v as RecipeVersion & { createdBy?: User }).createdBy?.name ?? null, savedAt: v.createdAt.toISOString() }));
+}
+
+export async function diffVersions(auth: AuthContext, id: number, from: number, to: number): Promise<Change[]> {
+  const recipe = await ownRecipe(auth, id);
+  const [a, b] = await Promise.all([RecipeVersion.findOne({ where: { recipeId: recipe.id, number: from } }), RecipeVersion.findOne({ where: { recipeId: recipe.id, number: to } })]);
+  if (!a || !b) throw notFound('No such version of this recipe.');
+  const ids = [...a.content.lines, ...b.content.lines].map((l) => l.ingredientId);
+  const rows = ids.length ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
+  return diffRecipes(a, b, new Map(rows.map((r) => [r.id, r.name])));
+}
+
+/** Any version becomes the newest version again, as a new version: history is never rewritten. */
+export async function restoreVersion(auth: AuthContext, id: number, number: number): Promise<RecipeDetail> {
+  const recipe = await ownRecipe(auth, id);
+  const version = await RecipeVersion.findOne({ where: { recipeId: recipe.id, number } });
+  if (!version) throw notFound('No such version of this recipe.');
+  return saveRecipe(auth, id, { name: version.name, flavourNotes: version.flavourNotes, content: version.content, baseVersion: recipe.currentVersion, note: `Restored version ${number}` });
+}
+
+export async function duplicateRecipe(auth: AuthContext, id: number): Promise<RecipeDetail> {
+  const source = await getRecipe(auth, id);
+  return createRecipe(auth, { name: `${source.name} (variation)`.slice(0, 100), flavourNotes: source.flavourNotes, content: source.content });
+}
+
+export async function setRecipeArchived(auth: AuthContext, id: number, archived: boolean): Promise<RecipeSummary> {
+  const recipe = await ownRecipe(auth, id);
+  await recipe.update({ archivedAt: archived ? new Date() : null });
+  return summary(recipe);
+}
+
+/** The numbers of a recipe (saved or being edited) for one bottle of its format. */
+export async function evaluate(auth: AuthContext, content: RecipeContent): Promise<RecipeEvaluation> {
+  const format = await bottleFacts(auth, content);
+  const facts = await ingredientFacts(auth, content, true);
+  return evaluateRecipe(content, format, facts, await cachedAbvLimit(auth.organisationId));
+}
+
+export async function scale(auth: AuthContext, id: number, input: ScaleRequest): Promise<ScaledRecipe & { version: number; bottleName: string }> {
+  const recipe = await getRecipe(auth, id, input.version ?? undefined);
+  const format = await bottleFacts(auth, recipe.content);
+  const names = recipe.ingredientNames;
+  try {
+    const scaled = scaleRecipe({
+      lines: recipe.content.lines.map((l) => ({ name: names[l.ingredientId] ?? `Ingredient ${l.ingredientId}`, amount: l.amount, unit: l.unit as never })),
+      sugars: recipe.content.sugars.map((s) => ({ name: SUGARS[s.type].label, gPerL: s.gPerL })),
+      bottleLiquidMl: format.liquidMl,
+      process: recipe.content.process.method === 'steep-strain' ? { method: 'steep-strain', strainLossPct: recipe.content.process.strainLossPct } : { method: 'in-bottle' },
+      batch: input.batch,
+      units: input.units,
+    });
+    return { ...scaled, version: recipe.currentVersion, bottleName: format.name };
+  } catch (error) {
+    if (error instanceof RangeError) throw badRequest(error.message, { 'batch.value': error.message });
+    throw error;
+  }
+}
+
+/** Records a tasting; a sugar addition made at the tasting becomes a new version with the sugar per litre raised. */
+export async function addTasting(auth: AuthContext, id: number, input: TastingInput) {
+  const recipe = await getRecipe(auth, id);
+  let versionNumber = recipe.currentVersion;
+  if (input.sugarAddition) {
+    const { type, grams, toMl } = input.sugarAddition;
+    const extra = (grams / toMl) * 1000;
+    const sugars = [...recipe.content.sugars];
+    const existing = sugars.findIndex((s) => s.type === type);
+    if (existing >= 0) sugars[existing] = { type, gPerL: Number((sugars[existing].gPerL + extra).toFixed(4)) };
+    else sugars.push({ type, gPerL: Number(extra.toFixed(4)) });
+    const saved = await saveRecipe(auth, id, {
+      name: recipe.name,
+      flavourNotes: recipe.flavourNotes,
+      content: { ...recipe.content, sugars },
+      baseVersion: recipe.currentVersion,
+      note: `Tasting ${input.tastedOn}: +${grams} g ${type} to ${toMl} mL`,
+    });
+    versionNumber = saved.currentVersion;
+  }
+  await Tasting.create({ recipeId: id, versionNumber, userId: auth.userId, ...input });
+  return listTastings(auth, id);
+}
+
+export async function listTastings(auth: AuthContext, id: number) {
+  const recipe = await ownRecipe(auth, id);
+  const rows = await Tasting.findAll({ where: { recipeId: recipe.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['tastedOn', 'DESC'], ['id', 'DESC']] });
+  return rows.map((t) => ({
+    id: t.id,
+    versionNumber: t.versionNumber,
+    tastedOn: t.tastedOn,
+    by: (t as Tasting & { user?: User }).user?.name ?? null,
+    notes: t.notes,
+    scores: { sweetness: t.sweetness, sourness: t.sourness, fizz: t.fizz, flavour: t.flavour },
+    sugarAddition: t.sugarAddition,
+  }));
+}
+
