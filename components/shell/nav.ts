@@ -4,7 +4,7 @@ import { canManageTeam } from '@/lib/roles';
 import type { IconName } from '../ui/Icon';
 
 export interface NavItem {
-  href: '/' | '/quick-check' | '/ingredients' | '/bottles' | '/team' | '/outbox' | '/profile' | '/more';
+  href: '/' | '/recipes' | '/quick-check' | '/ingredients' | '/bottles' | '/team' | '/outbox' | '/profile' | '/more';
   label: string;
   /** The word under the icon in the phone tab bar, where six labels share 390 px. */
   shortLabel: string;
@@ -16,6 +16,7 @@ export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined
   const owner = canManageTeam(session.user.role);
   const items: NavItem[] = [
     { href: '/', label: 'Home', shortLabel: 'Home', icon: 'home' },
+    { href: '/recipes', label: 'Recipes', shortLabel: 'Recipes', icon: 'flask' },
     { href: '/quick-check', label: 'Quick check', shortLabel: 'Check', icon: 'gauge' },
     { href: '/ingredients', label: 'Ingredients', shortLabel: 'Ingredients', icon: 'leaf' },
     { href: '/bottles', label: 'Bottles', shortLabel: 'Bottles', icon: 'bottle' },

@@ -1,6 +1,6 @@
 import Svg, { Circle, Path } from 'react-native-svg';
 
-export type IconName = 'home' | 'team' | 'mail' | 'person' | 'signOut' | 'gauge' | 'bottle' | 'leaf' | 'more';
+export type IconName = 'home' | 'team' | 'mail' | 'person' | 'signOut' | 'gauge' | 'bottle' | 'leaf' | 'more' | 'flask';
 
 /** Line icons drawn for Fizzwright on a 24-unit grid; decorative, so hidden from screen readers. */
 const paths: Record<IconName, { d: string[]; circles?: [number, number, number][] }> = {
@@ -9,6 +9,7 @@ const paths: Record<IconName, { d: string[]; circles?: [number, number, number][
   mail: { d: ['M3 6h18v12H3z', 'M3 7l9 6 9-6'] },
   person: { d: ['M5 20c0-4 3-6 7-6s7 2 7 6'], circles: [[12, 8, 3.6]] },
   signOut: { d: ['M14 4H5v16h9', 'M10 12h10', 'M17 8l4 4-4 4'] },
+  flask: { d: ['M9 3h6', 'M10 3v6L5 19a1 1 0 0 0 1 1.5h12a1 1 0 0 0 1-1.5L14 9V3', 'M7.5 15h9'] },
   leaf: { d: ['M5 19c0-8 5-14 15-14 0 10-6 15-14 15', 'M5 19l8-8'] },
   more: { d: [], circles: [[5, 12, 1.6], [12, 12, 1.6], [19, 12, 1.6]] },
   bottle: { d: ['M10 3h4v4c2 1 3 3 3 5v8a1 1 0 0 1-1 1H8a1 1 0 0 1-1-1v-8c0-2 1-4 3-5V3z', 'M7 13h10'] },

@@ -7,9 +7,9 @@ const info = (outbox: boolean, outboxOpen: boolean): ServerInfo => ({ status: 'o
 
 describe('navItemsFor', () => {
   it('shows Team only to owners', () => {
-    expect(navItemsFor(session('owner'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Quick check', 'Ingredients', 'Bottles', 'Team', 'Profile']);
-    expect(navItemsFor(session('brewer'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Quick check', 'Ingredients', 'Bottles', 'Profile']);
-    expect(navItemsFor(session('developer'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Quick check', 'Ingredients', 'Bottles', 'Profile']);
+    expect(navItemsFor(session('owner'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Recipes', 'Quick check', 'Ingredients', 'Bottles', 'Team', 'Profile']);
+    expect(navItemsFor(session('brewer'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Recipes', 'Quick check', 'Ingredients', 'Bottles', 'Profile']);
+    expect(navItemsFor(session('developer'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Recipes', 'Quick check', 'Ingredients', 'Bottles', 'Profile']);
   });
 
   it('shows the Mail outbox to owners when mail stays local, and to everyone when the outbox is open', () => {
@@ -21,7 +21,7 @@ describe('navItemsFor', () => {
 
 describe('isActive', () => {
   it('matches Home only on its own path and other items on their subpaths', () => {
-    const [home, , , , team] = navItemsFor(session('owner'), undefined);
+    const [home, , , , , team] = navItemsFor(session('owner'), undefined);
     expect(isActive(home, '/')).toBe(true);
     expect(isActive(home, '/team')).toBe(false);
     expect(isActive(team, '/team')).toBe(true);

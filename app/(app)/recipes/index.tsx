@@ -1,0 +1,38 @@
+import { Link, useRouter } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet } from 'react-native';
+
+import { Badge, Banner, Button, Card, EmptyState, Loading, Screen, Segmented, Table, TextField, type Column } from '@/components/ui';
+import { useRecipesQuery, type RecipeSummary } from '@/lib/api/recipes';
+import { useSessionQuery } from '@/lib/api/session';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { colors, fonts } from '@/lib/theme';
+
+export default function RecipesScreen() {
+  const router = useRouter();
+  const { data: session } = useSessionQuery();
+  const [text, setText] = useState('');
+  const [status, setStatus] = useState<'draft' | 'archived' | 'all'>('draft');
+  const recipes = useRecipesQuery(useDebouncedValue(text, 250), status);
+  const canEdit = session?.user.role === 'owner' || session?.user.role === 'developer';
+  const columns: Column<RecipeSummary>[] = [
+    { key: 'name', header: 'Recipe', flex: 2, render: (r) => <Link href={`/recipes/${r.id}`} style={styles.link}>{r.name}</Link> },
+    { key: 'notes', header: 'Flavour', flex: 2, render: (r) => r.flavourNotes || '—' },
+    { key: 'status', header: 'Status', render: (r) => <Badge label={r.status === 'archived' ? 'Archived' : `Draft · v${r.currentVersion}`} tone={r.status === 'archived' ? 'neutral' : 'info'} /> },
+    { key: 'updated', header: 'Changed', render: (r) => new Date(r.updatedAt).toLocaleDateString() },
+  ];
+  return (
+    <Screen title="Recipes" subtitle="Flavours of your brewery, kept per litre so every batch size is exact." actions={canEdit ? <Button label="New recipe" onPress={() => router.push('/recipes/new')} /> : null}>
+      <Card>
+        <TextField label="Search recipes" value={text} onChangeText={setText} placeholder="Name" />
+        <Segmented label="Show" value={status} onChange={setStatus} options={[{ value: 'draft', label: 'Current' }, { value: 'archived', label: 'Archived' }, { value: 'all', label: 'All' }]} />
+        {recipes.isError ? <Banner tone="danger">{recipes.error.message}</Banner> : null}
+        {!recipes.data ? <Loading /> : recipes.data.length === 0 ? <EmptyState title="No recipes here" message={canEdit ? 'Start one with New recipe.' : 'Recipe developers add recipes here.'} /> : <Table label="Recipes" columns={columns} rows={recipes.data} rowKey={(r) => r.id} />}
+      </Card>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
+});

@@ -1,0 +1,238 @@
+import { Formik, useFormikContext } from 'formik';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+
+import type { BottleFormat } from '@/lib/api/bottle-formats';
+import { usePrimingQuery } from '@/lib/api/calculations';
+import { ApiError } from '@/lib/api/client';
+import { useRecipeEvaluationQuery, type RecipeDetail } from '@/lib/api/recipes';
+import { SUGARS } from '@/lib/chemistry/sugars';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { toContent, toFormValues, type RecipeFormValues } from '@/lib/recipes/form';
+import { processStages } from '@/lib/recipes/stages';
+import { AMOUNT_UNIT_LABELS, METHOD_LABELS, METHODS } from '@/lib/schemas/recipes';
+import { breakpoints, fonts, space } from '@/lib/theme';
+import { formatNumber, type UnitSystem } from '@/lib/units';
+
+import { sugarOptions } from '../quick-check/QuickCheckInputs';
+import { Badge, Banner, Button, Card, FormField, Loading, Segmented, Select, Text } from '../ui';
+import { IngredientPicker } from './IngredientPicker';
+import { RecipeResults } from './RecipeResults';
+
+interface Props {
+  recipe: RecipeDetail;
+  formats: BottleFormat[];
+  units: UnitSystem;
+  limitPercent: number;
+  canEdit: boolean;
+  onSave: (values: { name: string; flavourNotes: string; content: NonNullable<ReturnType<typeof toContent>['content']>; baseVersion: number }) => Promise<unknown>;
+  saveError: unknown;
+  onReload: () => void;
+}
+
+/** The designer: the recipe's parts on one side, its numbers for one bottle beside them, updated as it changes. */
+export function RecipeEditor({ recipe, formats, units, limitPercent, canEdit, onSave, saveError, onReload }: Props) {
+  return (
+    <Formik<RecipeFormValues>
+      initialValues={toFormValues(recipe.name, recipe.flavourNotes, recipe.content, recipe.ingredientNames)}
+      enableReinitialize
+      validate={(values) => toContent(values).errors}
+      onSubmit={async (values) => {
+        const { content } = toContent(values);
+        if (content) await onSave({ name: values.name, flavourNotes: values.flavourNotes, content, baseVersion: recipe.currentVersion }).catch(() => undefined);
+      }}
+    >
+      <Layout recipe={recipe} formats={formats} units={units} limitPercent={limitPercent} canEdit={canEdit} saveError={saveError} onReload={onReload} />
+    </Formik>
+  );
+}
+
+function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onReload }: Omit<Props, 'onSave'>) {
+  const { width } = useWindowDimensions();
+  const wide = width >= breakpoints.wide;
+  const { values, dirty, isSubmitting, handleSubmit, resetForm } = useFormikContext<RecipeFormValues>();
+  const { content } = toContent(values);
+  const settled = useDebouncedValue(content, 350);
+  const evaluation = useRecipeEvaluationQuery(settled);
+  const format = formats.find((f) => String(f.id) === values.bottleFormatId);
+  const stale = saveError instanceof ApiError && saveError.code === 'stale_version';
+  return (
+    <View style={styles.column}>
+      {stale ? (
+        <Banner tone="caution" title="Someone else saved this recipe">
+          <Text>{(saveError as ApiError).message}</Text>
+          <Button label="Load their version (drops your changes)" variant="secondary" onPress={() => { resetForm(); onReload(); }} style={styles.left} />
+        </Banner>
+      ) : saveError instanceof Error ? (
+        <Banner tone="danger">{saveError.message}</Banner>
+      ) : null}
+      {canEdit ? (
+        <View style={styles.saveBar}>
+          <Badge label={`Version ${recipe.currentVersion}${dirty ? ' · unsaved changes' : ''}`} tone={dirty ? 'caution' : 'neutral'} />
+          <Button label="Save as new version" busy={isSubmitting} disabled={!dirty || !content} onPress={() => handleSubmit()} />
+        </View>
+      ) : null}
+      <View style={[styles.layout, wide && styles.layoutWide]}>
+        <View style={[styles.column, wide && styles.inputs]}>
+          <Parts formats={formats} canEdit={canEdit} />
+          {format && content ? <TargetHelper units={units} content={content} liquidMl={format.liquidMl} headspaceMl={format.headspaceMl} rating={format.maxWorkingPressureBar} currentAddedGPerL={evaluation.data ? (evaluation.data.carbonation.sugar.addedG / format.liquidMl) * 1000 - content.baseBrew.residualSugarGPerL : null} fermentableGPerL={evaluation.data?.carbonation.sugar.fermentableGPerL ?? null} /> : null}
+          {content ? (
+            <Card title="Process">
+              {processStages(content).map((stage, i) => (
+                <Text key={stage.title}>
+                  {i + 1}. {stage.title}
+                  {stage.hours ? ` · ${formatNumber(stage.hours, 0)} h` : ''}
+                  {stage.tempC !== null ? ` · ${formatNumber(stage.tempC, 0)} °C` : ''} — {stage.detail}
+                </Text>
+              ))}
+            </Card>
+          ) : null}
+        </View>
+        <View style={[styles.column, wide && styles.results]}>
+          {evaluation.isError ? <Banner tone="danger">{evaluation.error.message}</Banner> : null}
+          {!content ? <Banner tone="caution">Some parts need attention: the numbers are for the last complete recipe.</Banner> : null}
+          {evaluation.data ? (
+            <View style={{ opacity: evaluation.isPlaceholderData ? 0.6 : 1 }}>
+              <RecipeResults evaluation={evaluation.data} units={units} limitPercent={limitPercent} bottleName={format?.name ?? 'the bottle'} />
+            </View>
+          ) : (
+            <Loading label="Working out the numbers…" />
+          )}
+        </View>
+      </View>
+      <Text variant="small">Last saved by {recipe.savedBy ?? 'someone'} on {new Date(recipe.savedAt).toLocaleString()}.</Text>
+    </View>
+  );
+}
+
+function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean }) {
+  const { values, setFieldValue } = useFormikContext<RecipeFormValues>();
+  const steep = values.method === 'steep-strain';
+  return (
+    <View style={styles.column} pointerEvents={canEdit ? 'auto' : 'none'}>
+      <Card title="Recipe">
+        <FormField name="name" label="Recipe name" editable={canEdit} />
+        <FormField name="flavourNotes" label="Flavour notes" multiline editable={canEdit} />
+        <Select compact label="Bottle format" value={values.bottleFormatId} options={formats.map((f) => ({ value: String(f.id), label: f.name }))} onChange={(id) => setFieldValue('bottleFormatId', id)} />
+      </Card>
+      <Card title="Base brew">
+        <View style={styles.row}>
+          <View style={styles.cell}><FormField name="base.name" label="Base" /></View>
+          <View style={styles.cell}><FormField name="base.residualSugarGPerL" label="Residual sugar" suffix="g/L" inputMode="decimal" /></View>
+          <View style={styles.cell}><FormField name="base.abvPercent" label="Alcohol" suffix="% ABV" inputMode="decimal" /></View>
+          <View style={styles.cell}><FormField name="base.ph" label="pH" inputMode="decimal" hint="4.2 or below before flavouring." /></View>
+        </View>
+        <Segmented label="CO2 already in the base" value={values.base.residualMode} onChange={(m) => setFieldValue('base.residualMode', m)} options={[{ value: 'last-open', label: 'From temperature' }, { value: 'volumes', label: 'Known volumes' }]} />
+        {values.base.residualMode === 'volumes' ? (
+          <FormField name="base.residualCo2Volumes" label="Residual CO2" suffix="volumes" inputMode="decimal" />
+        ) : (
+          <FormField name="base.lastOpenTempC" label="Temperature when last open" suffix="°C" inputMode="decimal" />
+        )}
+      </Card>
+      <Card title="How the flavour goes in">
+        <Segmented label="Method" value={values.method} onChange={(m) => setFieldValue('method', m)} options={METHODS.map((m) => ({ value: m, label: METHOD_LABELS[m] }))} />
+        {steep ? (
+          <View style={styles.row}>
+            <View style={styles.cell}><FormField name="steepHours" label="Steep for" suffix="h" inputMode="decimal" /></View>
+            <View style={styles.cell}><FormField name="steepTempC" label="Steep at" suffix="°C" inputMode="decimal" /></View>
+            <View style={styles.cell}><FormField name="strainLossPct" label="Liquid lost when straining" suffix="%" inputMode="decimal" /></View>
+          </View>
+        ) : (
+          <Banner tone="caution">Solids stay in the bottle: pressure keeps rising as long as sugar remains. The worst case applies.</Banner>
+        )}
+        <View style={styles.row}>
+          <View style={styles.cell}><FormField name="carbonateHours" label="Carbonate for" suffix="h" inputMode="decimal" /></View>
+          <View style={styles.cell}><FormField name="carbonateTempC" label="Carbonate at" suffix="°C" inputMode="decimal" /></View>
+          <View style={styles.cell}><FormField name="coldStoreTempC" label="Cold store at" suffix="°C" inputMode="decimal" /></View>
+          <View style={styles.cell}><FormField name="highestTempC" label="Highest it may meet" suffix="°C" inputMode="decimal" /></View>
+        </View>
+      </Card>
+      <Card title="Ingredients">
+        {values.lines.length === 0 ? <Text variant="muted">No ingredients yet: add the first from the library.</Text> : null}
+        {values.lines.map((line, index) => (
+          <View key={line.ingredientId} style={styles.line}>
+            <Text style={styles.lineName}>{line.name}</Text>
+            <View style={styles.row}>
+              <View style={styles.cell}><FormField name={`lines.${index}.amount`} label={`Amount of ${line.name}`} inputMode="decimal" /></View>
+              <View style={styles.cell}>
+                <Select compact label="Unit" value={line.unit} options={(Object.keys(AMOUNT_UNIT_LABELS) as (keyof typeof AMOUNT_UNIT_LABELS)[]).map((u) => ({ value: u, label: AMOUNT_UNIT_LABELS[u] }))} onChange={(u) => setFieldValue(`lines.${index}.unit`, u)} />
+              </View>
+              {steep ? <View style={styles.cell}><FormField name={`lines.${index}.extractionPct`} label="Sugar reaching the liquid" suffix="%" inputMode="decimal" /></View> : null}
+            </View>
+            {canEdit ? <Button label="Remove" accessibleName={`Remove ${line.name}`} variant="quiet" onPress={() => setFieldValue('lines', values.lines.filter((_, i) => i !== index))} style={styles.left} /> : null}
+          </View>
+        ))}
+        {canEdit ? (
+          <IngredientPicker
+            exclude={values.lines.map((l) => l.ingredientId)}
+            onPick={(ingredient) => setFieldValue('lines', [...values.lines, { ingredientId: ingredient.id, name: ingredient.name, amount: '', unit: 'g-per-l', extractionPct: String(ingredient.steepSharePct) }])}
+          />
+        ) : null}
+      </Card>
+      <Card title="Added sugar">
+        {values.sugars.map((sugar, index) => (
+          <View key={index} style={styles.row}>
+            <View style={styles.cell}><Select compact label={`Sugar ${index + 1}`} value={sugar.type} options={sugarOptions} onChange={(type) => setFieldValue(`sugars.${index}.type`, type)} /></View>
+            <View style={styles.cell}><FormField name={`sugars.${index}.gPerL`} label={`${SUGARS[sugar.type].label} per litre`} suffix="g/L" inputMode="decimal" /></View>
+          </View>
+        ))}
+        <View style={styles.row}>
+          <View style={styles.cell}><FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" /></View>
+          <View style={styles.cell}><FormField name="sweetnessNote" label="Sweetness note" placeholder="e.g. off-dry" /></View>
+        </View>
+      </Card>
+    </View>
+  );
+}
+
+/** Fills the added sugar that reaches the target fizz, given what the base and the ingredients already bring. */
+function TargetHelper({ units, content, liquidMl, headspaceMl, rating, fermentableGPerL, currentAddedGPerL }: { units: UnitSystem; content: NonNullable<ReturnType<typeof toContent>['content']>; liquidMl: number; headspaceMl: number; rating: number; fermentableGPerL: number | null; currentAddedGPerL: number | null }) {
+  const { setFieldValue, values } = useFormikContext<RecipeFormValues>();
+  const request = useDebouncedValue({
+    liquidMl,
+    headspaceMl,
+    targetVolumes: content.targetVolumes,
+    residualCo2Volumes: content.baseBrew.residualCo2Volumes,
+    lastOpenTempC: content.baseBrew.lastOpenTempC,
+    sugarType: 'sucrose' as const,
+    sealedTempC: content.process.carbonateTempC,
+    highestTempC: content.highestTempC,
+    maxWorkingPressureBar: rating,
+    baseAbvPercent: content.baseBrew.abvPercent,
+    abvLimitPercent: null,
+    bottleFormatId: null,
+    yield: 'worst' as const,
+  }, 400);
+  const priming = usePrimingQuery(request);
+  if (!priming.data || fermentableGPerL === null || currentAddedGPerL === null) return null;
+  const fromOthers = fermentableGPerL - Math.max(0, currentAddedGPerL);
+  const needed = Math.max(0, priming.data.sugarGPerL - fromOthers);
+  return (
+    <Card title="Sugar for the target fizz">
+      <Text>
+        {content.targetVolumes} volumes need {formatNumber(priming.data.sugarGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring {formatNumber(fromOthers, 1)} g/L, so add {formatNumber(needed, 1)} g/L of sucrose. The alcohol follows: +{formatNumber(priming.data.addedAbvPercent, 2)} % ABV.
+      </Text>
+      <Button
+        label="Use this sugar"
+        variant="secondary"
+        style={styles.left}
+        onPress={() => setFieldValue('sugars', [{ type: 'sucrose', gPerL: String(Number(needed.toFixed(2))) }, ...values.sugars.filter((s) => s.type !== 'sucrose')])}
+      />
+      <Text variant="small">{units === 'us' ? 'Amounts in the recipe are per litre; the Scale tab gives them in US units.' : 'Amounts in the recipe are per litre of finished drink.'}</Text>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  column: { gap: space.lg },
+  layout: { gap: space.lg },
+  layoutWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  inputs: { flex: 5, minWidth: 380 },
+  // On a wide screen the numbers stay in view while the long list of parts scrolls past.
+  results: { flex: 6, position: 'sticky' as never, top: space.lg },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-start' },
+  cell: { flexGrow: 1, flexBasis: 150 },
+  line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: '#EDE8DE' },
+  lineName: { fontFamily: fonts.semibold },
+  left: { alignSelf: 'flex-start' },
+  saveBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.md },
+});

@@ -1,0 +1,44 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { RecipeEvaluation } from '@/lib/api/recipes';
+import { ALLERGEN_LABELS } from '@/lib/ingredients';
+import { space } from '@/lib/theme';
+import { formatNumber, type UnitSystem } from '@/lib/units';
+
+import { QuickCheckResults } from '../quick-check/QuickCheckResults';
+import { Badge, Card, Text } from '../ui';
+
+/** The live numbers beside the editor: the engine's answer for one bottle, allergens and cost. */
+export function RecipeResults({ evaluation, units, limitPercent, bottleName }: { evaluation: RecipeEvaluation; units: UnitSystem; limitPercent: number; bottleName: string }) {
+  return (
+    <View style={styles.wrap}>
+      <Card title="Allergens and cost" aside={<Text variant="small">per bottle of {bottleName}</Text>}>
+        {evaluation.allergens.length > 0 ? (
+          <View style={styles.badges}>
+            {evaluation.allergens.map((a) => (
+              <Badge key={a} label={ALLERGEN_LABELS[a]} tone="caution" />
+            ))}
+          </View>
+        ) : (
+          <Text variant="muted">No major allergens recorded for these ingredients.</Text>
+        )}
+        <Text>
+          {evaluation.cost.perBottle === null
+            ? `Cost unknown: no cost per kg for ${evaluation.cost.missing.join(', ')}.`
+            : `Ingredients cost ${formatNumber(evaluation.cost.perBottle, 3)} per bottle, ${formatNumber(evaluation.cost.perLitre ?? 0, 2)} per litre.`}
+        </Text>
+        {evaluation.lines.map((line) => (
+          <Text key={line.ingredientId} variant="small">
+            {line.name}: {formatNumber(line.gramsPerBottle, 2)} g per bottle, {formatNumber(line.sugarToLiquidG, 2)} g of sugar into the liquid
+          </Text>
+        ))}
+      </Card>
+      <QuickCheckResults answer={{ ...evaluation.carbonation, bottleFormat: null }} chart={undefined} units={units} limitPercent={limitPercent} temperatureNames={evaluation.temperatureNames} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+});

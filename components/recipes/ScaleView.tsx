@@ -1,0 +1,60 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { useScaleQuery } from '@/lib/api/recipes';
+import { parseNumber } from '@/lib/forms';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import type { Rounded } from '@/lib/recipes/scaling';
+import { colors, fonts, space } from '@/lib/theme';
+import { formatNumber, type UnitSystem } from '@/lib/units';
+
+import { Banner, Card, NumberField, Segmented, Table, Text, type Column } from '../ui';
+
+type Kind = 'litres' | 'us-gallons' | 'bottles';
+type Row = Rounded & { name: string };
+
+const digits = (r: Rounded) => Math.max(0, -Math.floor(Math.log10(r.resolution) + 1e-9));
+const show = (r: Rounded) => `${formatNumber(r.value, digits(r))} ${r.unit}`;
+
+/** The recipe at batch size: every amount rounded to what a scale reads, with the rounding shown. */
+export function ScaleView({ recipeId, units }: { recipeId: number; units: UnitSystem }) {
+  const [kind, setKind] = useState<Kind>('bottles');
+  const [text, setText] = useState('120');
+  const [system, setSystem] = useState<UnitSystem>(units);
+  const value = parseNumber(text);
+  const valid = value !== undefined && !Number.isNaN(value) && value > 0;
+  const request = useDebouncedValue(valid ? { batch: { kind, value: value! }, units: system, version: null } : undefined, 300);
+  const scaled = useScaleQuery(recipeId, request);
+  const columns: Column<Row>[] = [
+    { key: 'name', header: 'What', flex: 2, render: (r) => r.name },
+    { key: 'amount', header: 'Amount', render: (r) => <Text style={r.warn ? styles.warn : undefined}>{show(r)}</Text> },
+    { key: 'exact', header: 'Exact', render: (r) => `${formatNumber(r.exact, digits(r) + 2)} ${r.unit}` },
+    { key: 'rounding', header: 'Rounded to', render: (r) => `${r.resolution} ${r.unit}${r.warn ? ` · ${formatNumber(r.offPct, 1)} % off` : ''}` },
+  ];
+  return (
+    <View style={styles.wrap}>
+      <Card title="Batch size">
+        <Segmented label="Batch given as" value={kind} onChange={setKind} options={[{ value: 'bottles', label: 'Bottles' }, { value: 'litres', label: 'Litres' }, { value: 'us-gallons', label: 'US gallons' }]} />
+        <NumberField label={kind === 'bottles' ? 'Number of bottles' : kind === 'litres' ? 'Litres of finished drink' : 'US gallons of finished drink'} value={text} onChangeText={setText} error={valid ? (scaled.error?.message ?? undefined) : 'Enter a batch size above 0.'} />
+        <Segmented label="Amounts in" value={system} onChange={setSystem} options={[{ value: 'metric', label: 'Metric' }, { value: 'us', label: 'US' }]} />
+      </Card>
+      {scaled.data ? (
+        <Card title={`Batch: ${scaled.data.bottles} bottles of ${scaled.data.bottleName}`} aside={<Text variant="small">version {scaled.data.version}</Text>}>
+          <Text>
+            Finished drink {show(scaled.data.finishedLitres)} · base brew {show(scaled.data.baseLitres)}
+            {scaled.data.topUpLitres.exact > 0 ? ` (of which ${show(scaled.data.topUpLitres)} to top up after straining)` : ''}
+          </Text>
+          <Table label="Scaled amounts" columns={columns} rows={[...scaled.data.lines, ...scaled.data.sugars]} rowKey={(r) => r.name} />
+          {[...scaled.data.lines, ...scaled.data.sugars].some((r) => r.warn) ? (
+            <Banner tone="caution">Some amounts are more than 1 % off once rounded: weigh them on a finer scale.</Banner>
+          ) : null}
+        </Card>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  warn: { color: colors.caution, fontFamily: fonts.semibold },
+});

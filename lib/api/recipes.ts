@@ -1,0 +1,119 @@
+import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import type { Change } from '../recipes/diff';
+import type { RecipeEvaluation } from '../recipes/evaluate';
+import type { ScaledRecipe } from '../recipes/scaling';
+import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../schemas/recipes';
+import { api } from './client';
+import { staleTimes } from './query-client';
+
+export interface RecipeSummary {
+  id: number;
+  name: string;
+  flavourNotes: string;
+  status: 'draft' | 'archived';
+  currentVersion: number;
+  updatedAt: string;
+}
+
+export interface RecipeDetail extends RecipeSummary {
+  content: RecipeContent;
+  versionNote: string;
+  savedBy: string | null;
+  savedAt: string;
+  ingredientNames: Record<number, string>;
+}
+
+export interface VersionEntry {
+  number: number;
+  note: string;
+  savedBy: string | null;
+  savedAt: string;
+}
+
+export interface TastingEntry {
+  id: number;
+  versionNumber: number;
+  tastedOn: string;
+  by: string | null;
+  notes: string;
+  scores: { sweetness: number; sourness: number; fizz: number; flavour: number };
+  sugarAddition: TastingInput['sugarAddition'];
+}
+
+export type { Change, RecipeEvaluation, ScaledRecipe };
+
+export const recipeKeys = {
+  all: ['recipes'] as const,
+  list: (q: string, status: string) => ['recipes', 'list', q, status] as const,
+  one: (id: number) => ['recipes', 'one', id] as const,
+  versions: (id: number) => ['recipes', 'versions', id] as const,
+  diff: (id: number, from: number, to: number) => ['recipes', 'diff', id, from, to] as const,
+  tastings: (id: number) => ['recipes', 'tastings', id] as const,
+  evaluate: (content: RecipeContent | undefined) => ['recipes', 'evaluate', content] as const,
+  scale: (id: number, request: ScaleRequest | undefined) => ['recipes', 'scale', id, request] as const,
+};
+
+export function useRecipesQuery(q: string, status: 'draft' | 'archived' | 'all') {
+  return useQuery({
+    queryKey: recipeKeys.list(q, status),
+    staleTime: staleTimes.list,
+    placeholderData: keepPreviousData,
+    queryFn: ({ signal }) => api.get<RecipeSummary[]>(`/recipes?${new URLSearchParams({ q, status }).toString()}`, signal),
+  });
+}
+
+export function useRecipeQuery(id: number) {
+  return useQuery({ queryKey: recipeKeys.one(id), enabled: Number.isInteger(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<RecipeDetail>(`/recipes/${id}`, signal) });
+}
+
+export function useRecipeVersionsQuery(id: number) {
+  return useQuery({ queryKey: recipeKeys.versions(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<VersionEntry[]>(`/recipes/${id}/versions`, signal) });
+}
+
+export function useRecipeDiffQuery(id: number, from: number | null, to: number) {
+  return useQuery({
+    queryKey: recipeKeys.diff(id, from ?? 0, to),
+    enabled: from !== null && from !== to,
+    staleTime: staleTimes.static,
+    queryFn: ({ signal }) => api.get<Change[]>(`/recipes/${id}/diff?from=${from}&to=${to}`, signal),
+  });
+}
+
+export function useTastingsQuery(id: number) {
+  return useQuery({ queryKey: recipeKeys.tastings(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<TastingEntry[]>(`/recipes/${id}/tastings`, signal) });
+}
+
+/** The numbers of the recipe being edited; the previous answer stays while the next loads. */
+export function useRecipeEvaluationQuery(content: RecipeContent | undefined) {
+  return useQuery({
+    queryKey: recipeKeys.evaluate(content),
+    enabled: content !== undefined,
+    staleTime: staleTimes.static,
+    placeholderData: keepPreviousData,
+    queryFn: () => api.post<RecipeEvaluation>('/recipes/evaluate', { content }),
+  });
+}
+
+export function useScaleQuery(id: number, request: ScaleRequest | undefined) {
+  return useQuery({
+    queryKey: recipeKeys.scale(id, request),
+    enabled: request !== undefined,
+    staleTime: staleTimes.list,
+    placeholderData: keepPreviousData,
+    queryFn: () => api.post<ScaledRecipe & { version: number; bottleName: string }>(`/recipes/${id}/scale`, request),
+  });
+}
+
+function useRecipeMutation<T, R>(mutationFn: (input: T) => Promise<R>) {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn, onSuccess: () => queryClient.invalidateQueries({ queryKey: recipeKeys.all }) });
+}
+
+export const useCreateRecipeMutation = () => useRecipeMutation((input: CreateRecipeInput) => api.post<RecipeDetail>('/recipes', input));
+export const useSaveRecipeMutation = (id: number) => useRecipeMutation((input: SaveRecipeInput) => api.put<RecipeDetail>(`/recipes/${id}`, input));
+export const useRestoreVersionMutation = (id: number) => useRecipeMutation((version: number) => api.post<RecipeDetail>(`/recipes/${id}/restore`, { version }));
+export const useDuplicateRecipeMutation = (id: number) => useRecipeMutation(() => api.post<RecipeDetail>(`/recipes/${id}/duplicate`));
+export const useArchiveRecipeMutation = (id: number) =>
+  useRecipeMutation((archived: boolean) => api.post<RecipeSummary>(`/recipes/${id}/${archived ? 'archive' : 'restore-archived'}`));
+export const useAddTastingMutation = (id: number) => useRecipeMutation((input: TastingInput) => api.post<TastingEntry[]>(`/recipes/${id}/tastings`, input));

@@ -1,0 +1,58 @@
+import { expect, test, type Page } from '@playwright/test';
+
+import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
+
+async function buildRecipe(page: Page, name: string, prefix: string) {
+  await openNav(page, 'Recipes');
+  await page.getByRole('button', { name: 'New recipe' }).click();
+  await page.getByLabel('Recipe name').fill(name);
+  await page.getByRole('radio', { name: 'Glass crown cap 473 mL' }).click();
+  await page.getByRole('radio', { name: 'Steep, strain, then carbonate' }).click();
+  await page.getByRole('button', { name: 'Create and open the designer' }).click();
+  await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+
+  // Ingredients from the library.
+  await page.getByLabel('Add an ingredient').fill('straw');
+  await page.getByRole('button', { name: 'Add Strawberries, raw' }).click();
+  await page.getByLabel('Amount of Strawberries, raw').fill('60');
+  await page.getByLabel('Add an ingredient').fill('ginger root');
+  await page.getByRole('button', { name: 'Add Ginger root, raw' }).click();
+  await page.getByLabel('Amount of Ginger root, raw').fill('2');
+  await page.getByLabel('Sucrose (table sugar) per litre').fill('2');
+  await expect(page.getByText(/g of sugar into the liquid/).first()).toBeVisible();
+  await expect(page.getByText(/Worst case .* within 25 %|stays well within/).first()).toBeVisible();
+  await shot(page, `${prefix}-recipe-designer`);
+
+  // More sugar: a caution (or worse) shows before anything is sealed.
+  await page.getByLabel('Sucrose (table sugar) per litre').fill('9');
+  await expect(page.getByText(/is over the bottle's 3 bar rating/).first()).toBeVisible();
+  await page.getByLabel('Sucrose (table sugar) per litre').fill('4');
+  await page.getByRole('button', { name: 'Save as new version' }).click();
+  await expect(page.getByText('Version 2', { exact: true })).toBeVisible();
+
+  // Scale to 200 bottles and read the amounts.
+  await page.getByRole('radio', { name: 'Scale' }).click();
+  await page.getByLabel('Number of bottles').fill('200');
+  await expect(page.getByText(/Batch: 200 bottles of Glass crown cap 473 mL/)).toBeVisible();
+  // 60 g/L × 94.6 L = 5676 g → 5.68 kg; sucrose 4 g/L → 378.4 g → 380 g (5 g steps).
+  await expect(page.getByText('5.68 kg', { exact: true })).toBeVisible();
+  await expect(page.getByText('380 g', { exact: true })).toBeVisible();
+  await expect(page.getByText(/to top up after straining/)).toBeVisible();
+  await shot(page, `${prefix}-recipe-scaled`);
+}
+
+test('a developer builds a recipe on a phone, sees the caution when sugar goes up, and scales it to 200 bottles', async ({ browser }) => {
+  const page = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
+  await buildRecipe(page, `Berry ginger fizz ${Date.now()}`, 'phone');
+});
+
+test('the same on a wide screen, then the history shows what changed', async ({ browser }) => {
+  const page = await (await browser.newContext({ viewport: WIDE })).newPage();
+  await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
+  await buildRecipe(page, `Garden berry ${Date.now()}`, 'wide');
+  await page.getByRole('radio', { name: 'History' }).click();
+  await page.getByRole('button', { name: 'Compare version 1 with the current one' }).click();
+  await expect(page.getByText(/Strawberries, raw added/)).toBeVisible();
+  await shot(page, 'wide-recipe-history');
+});
