@@ -5,6 +5,7 @@ import { config } from './config';
 import { prepareDatabase } from './db';
 import { logger } from './logger';
 import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
+import { seedDemoRecipesIfEmpty } from './seed/demo-recipes';
 import { seedIngredientsIfEmpty } from './seed/ingredients';
 
 /** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
@@ -13,6 +14,7 @@ export async function main(): Promise<number> {
   if (config.seedDemo && (await seedDemoIfEmpty())) console.log(`\n${demoAccountsText()}\n`);
   const ingredients = await seedIngredientsIfEmpty();
   if (ingredients) console.log(ingredients);
+  if (config.seedDemo) await seedDemoRecipesIfEmpty();
   const app = createApp();
   return new Promise((resolve) => {
     const server = app.listen(config.port, config.host, () => {
