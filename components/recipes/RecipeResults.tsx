@@ -12,6 +12,13 @@ import { Badge, Card, Text } from '../ui';
 export function RecipeResults({ evaluation, units, limitPercent, bottleName }: { evaluation: RecipeEvaluation; units: UnitSystem; limitPercent: number; bottleName: string }) {
   return (
     <View style={styles.wrap}>
+      <Card title="Sugar in each bottle" aside={<Text variant="small">{bottleName}</Text>}>
+        <Text>
+          From the ingredients {formatNumber(evaluation.carbonation.sugar.fromIngredientsG, 2)} g · base and added sugar {formatNumber(evaluation.carbonation.sugar.addedG, 2)} g · fermentable{' '}
+          {formatNumber(evaluation.carbonation.sugar.fermentableG, 2)} g ({formatNumber(evaluation.carbonation.sugar.fermentableGPerL, 1)} g/L)
+          {evaluation.carbonation.sugar.sweetOnlyG > 0 ? ` · ${formatNumber(evaluation.carbonation.sugar.sweetOnlyG, 2)} g sweetness only` : ''}
+        </Text>
+      </Card>
       <Card title="Allergens and cost" aside={<Text variant="small">per bottle of {bottleName}</Text>}>
         {evaluation.allergens.length > 0 ? (
           <View style={styles.badges}>

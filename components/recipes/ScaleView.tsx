@@ -1,10 +1,11 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useScaleQuery } from '@/lib/api/recipes';
+import { useScaleQuery, type RecipeDetail } from '@/lib/api/recipes';
 import { parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import type { Rounded } from '@/lib/recipes/scaling';
+import { batchSteps } from '@/lib/recipes/stages';
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
@@ -17,7 +18,8 @@ const digits = (r: Rounded) => Math.max(0, -Math.floor(Math.log10(r.resolution) 
 const show = (r: Rounded) => `${formatNumber(r.value, digits(r))} ${r.unit}`;
 
 /** The recipe at batch size: every amount rounded to what a scale reads, with the rounding shown. */
-export function ScaleView({ recipeId, units }: { recipeId: number; units: UnitSystem }) {
+export function ScaleView({ recipe, units }: { recipe: RecipeDetail; units: UnitSystem }) {
+  const recipeId = recipe.id;
   const [kind, setKind] = useState<Kind>('bottles');
   const [text, setText] = useState('120');
   const [system, setSystem] = useState<UnitSystem>(units);
@@ -45,6 +47,12 @@ export function ScaleView({ recipeId, units }: { recipeId: number; units: UnitSy
             {scaled.data.topUpLitres.exact > 0 ? ` (of which ${show(scaled.data.topUpLitres)} to top up after straining)` : ''}
           </Text>
           <Table label="Scaled amounts" columns={columns} rows={[...scaled.data.lines, ...scaled.data.sugars]} rowKey={(r) => r.name} />
+          <Text variant="subheading">Steps</Text>
+          {batchSteps(recipe.content, scaled.data, scaled.data.bottleName).map((step, i) => (
+            <Text key={i}>
+              {i + 1}. {step}
+            </Text>
+          ))}
           {[...scaled.data.lines, ...scaled.data.sugars].some((r) => r.warn) ? (
             <Banner tone="caution">Some amounts are more than 1 % off once rounded: weigh them on a finer scale.</Banner>
           ) : null}

@@ -52,3 +52,39 @@ export function defaultContent(bottleFormatId: number, method: RecipeContent['pr
     highestTempC: 30,
   };
 }
+
+/** An amount as written on a batch sheet, e.g. "5.68 kg" (the rounding resolution decides the decimals). */
+export function formatRounded(r: { value: number; unit: string; resolution: number }): string {
+  const digits = Math.max(0, -Math.floor(Math.log10(r.resolution) + 1e-9));
+  return `${r.value.toFixed(digits)} ${r.unit}`;
+}
+
+interface ScaledParts {
+  bottles: number;
+  finishedLitres: { value: number; unit: string; resolution: number };
+  topUpLitres: { value: number; unit: string; resolution: number; exact: number };
+  lines: { name: string; value: number; unit: string; resolution: number }[];
+  sugars: { name: string; value: number; unit: string; resolution: number }[];
+}
+
+/** The numbered steps of a batch, with its amounts written in: what the screen and the printed card list. */
+export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleName: string): string[] {
+  const list = (items: { name: string; value: number; unit: string; resolution: number }[]) =>
+    items.length === 0 ? 'nothing' : items.map((i) => `${formatRounded(i)} ${i.name.toLowerCase()}`).join(', ');
+  const p = content.process;
+  const finished = formatRounded(scaled.finishedLitres);
+  const sugars = scaled.sugars.filter((s) => s.value > 0);
+  const steps: string[] = [];
+  if (p.method === 'steep-strain') {
+    steps.push(`Steep ${list(scaled.lines)} in ${finished} of ${content.baseBrew.name} at ${p.steepTempC} °C for ${p.steepHours} h.`);
+    steps.push(`Strain out the solids; about ${p.strainLossPct} % of the liquid (${formatRounded(scaled.topUpLitres)}) stays in them.`);
+    steps.push(`Top up with ${formatRounded(scaled.topUpLitres)} of fresh base to ${finished}${sugars.length ? ` and dissolve ${list(sugars)}` : ''}.`);
+    steps.push(`Fill ${scaled.bottles} bottles (${bottleName}), cap and keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h.`);
+  } else {
+    steps.push(`Share ${list(scaled.lines)}${sugars.length ? ` and ${list(sugars)}` : ''} between ${scaled.bottles} bottles (${bottleName}).`);
+    steps.push(`Fill with ${finished} of ${content.baseBrew.name} and cap.`);
+    steps.push(`Keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h; the solids keep feeding the yeast, so check a test bottle.`);
+  }
+  steps.push(`Open a test bottle; once the fizz is right, move every bottle to cold store at ${p.coldStoreTempC} °C.`);
+  return steps;
+}

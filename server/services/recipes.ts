@@ -71,7 +71,10 @@ async function assertUsable(auth: AuthContext, content: RecipeContent): Promise<
 
 export async function listRecipes(auth: AuthContext, q: string, status: 'draft' | 'archived' | 'all'): Promise<RecipeSummary[]> {
   const where: Record<string | symbol, unknown> = { organisationId: auth.organisationId };
-  if (q) where.name = { [Op.like]: `%${q.replace(/[%_]/g, '')}%` };
+  if (q) {
+    const like = `%${q.replace(/[%_]/g, '')}%`;
+    where[Op.or] = [{ name: { [Op.like]: like } }, { flavourNotes: { [Op.like]: like } }];
+  }
   if (status === 'draft') where.archivedAt = { [Op.is]: null };
   if (status === 'archived') where.archivedAt = { [Op.not]: null };
   const rows = await Recipe.findAll({ where, order: [['updatedAt', 'DESC']] });

@@ -38,6 +38,7 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   await expect(page.getByText('5.68 kg', { exact: true })).toBeVisible();
   await expect(page.getByText('380 g', { exact: true })).toBeVisible();
   await expect(page.getByText(/to top up after straining/)).toBeVisible();
+  await expect(page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 380 g sucrose/)).toBeVisible();
   await shot(page, `${prefix}-recipe-scaled`);
 }
 

@@ -79,3 +79,25 @@ describe('scaleRecipe', () => {
     expect(() => scaleRecipe(recipe({ kind: 'litres', value: 1e9 }))).toThrow(/at most 20000 L/);
   });
 });
+
+describe('batchSteps', () => {
+  const { batchSteps } = require('@/lib/recipes/stages') as typeof import('@/lib/recipes/stages');
+  it('writes the batch amounts into the numbered steps of a steeped recipe', () => {
+    const content = {
+      baseBrew: { name: 'black tea base', residualSugarGPerL: 1, ph: 3.2, abvPercent: 0.1, residualCo2Volumes: null, lastOpenTempC: 21 },
+      lines: [],
+      sugars: [],
+      process: { method: 'steep-strain', steepHours: 48, steepTempC: 4, strainLossPct: 12, carbonateHours: 72, carbonateTempC: 22, coldStoreTempC: 4 },
+      bottleFormatId: 1,
+      targetVolumes: 2.5,
+      sweetnessNote: '',
+      highestTempC: 30,
+    } as const;
+    const scaled = scaleRecipe(recipe({ kind: 'litres', value: 20 }, 'metric', { method: 'steep-strain', strainLossPct: 12 }));
+    const steps = batchSteps(content as never, scaled, 'Glass crown cap 473 mL');
+    expect(steps[0]).toBe('Steep 800 g strawberries, 16 g ginger root, 8.5 g vanilla extract in 20.0 L of black tea base at 4 °C for 48 h.');
+    expect(steps[2]).toBe('Top up with 2.40 L of fresh base to 20.0 L and dissolve 120 g sucrose.');
+    expect(steps[3]).toMatch(/^Fill 42 bottles/);
+    expect(steps).toHaveLength(5);
+  });
+});

@@ -59,7 +59,7 @@ export default function RecipeScreen() {
         />
       ) : null}
       {tab === 'tastings' ? <TastingsView recipeId={recipeId} canEdit={canEdit} /> : null}
-      {tab === 'scale' ? <ScaleView recipeId={recipeId} units={session.user.unitSystem} /> : null}
+      {tab === 'scale' ? <ScaleView recipe={recipe.data} units={session.user.unitSystem} /> : null}
       {tab === 'history' ? <HistoryView recipeId={recipeId} current={recipe.data.currentVersion} canEdit={canEdit} /> : null}
     </Screen>
   );

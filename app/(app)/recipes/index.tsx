@@ -24,7 +24,7 @@ export default function RecipesScreen() {
   return (
     <Screen title="Recipes" subtitle="Flavours of your brewery, kept per litre so every batch size is exact." actions={canEdit ? <Button label="New recipe" onPress={() => router.push('/recipes/new')} /> : null}>
       <Card>
-        <TextField label="Search recipes" value={text} onChangeText={setText} placeholder="Name" />
+        <TextField label="Search recipes" value={text} onChangeText={setText} placeholder="Name or flavour, e.g. rhubarb" />
         <Segmented label="Show" value={status} onChange={setStatus} options={[{ value: 'draft', label: 'Current' }, { value: 'archived', label: 'Archived' }, { value: 'all', label: 'All' }]} />
         {recipes.isError ? <Banner tone="danger">{recipes.error.message}</Banner> : null}
         {!recipes.data ? <Loading /> : recipes.data.length === 0 ? <EmptyState title="No recipes here" message={canEdit ? 'Start one with New recipe.' : 'Recipe developers add recipes here.'} /> : <Table label="Recipes" columns={columns} rows={recipes.data} rowKey={(r) => r.id} />}
