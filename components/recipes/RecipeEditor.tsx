@@ -171,7 +171,7 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
             <Text style={styles.lineName}>{line.name}</Text>
             <View style={styles.row}>
               <View style={styles.cell}><FormField name={`lines.${index}.amount`} label={`Amount of ${line.name}`} inputMode="decimal" /></View>
-              <View style={styles.cell}>
+              <View style={styles.wideCell}>
                 <Select compact label="Unit" value={line.unit} options={(Object.keys(AMOUNT_UNIT_LABELS) as (keyof typeof AMOUNT_UNIT_LABELS)[]).map((u) => ({ value: u, label: AMOUNT_UNIT_LABELS[u] }))} onChange={(u) => setFieldValue(`lines.${index}.unit`, u)} />
               </View>
               {steep ? <View style={styles.cell}><FormField name={`lines.${index}.extractionPct`} label="Sugar reaching the liquid" suffix="%" inputMode="decimal" /></View> : null}
@@ -188,9 +188,9 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
       </Card>
       <Card title="Added sugar">
         {values.sugars.map((sugar, index) => (
-          <View key={index} style={styles.row}>
-            <View style={styles.cell}><Select compact label={`Sugar ${index + 1}`} value={sugar.type} options={sugarOptions} onChange={(type) => setFieldValue(`sugars.${index}.type`, type)} /></View>
-            <View style={styles.cell}><FormField name={`sugars.${index}.gPerL`} label={`${SUGARS[sugar.type].label} per litre`} suffix="g/L" inputMode="decimal" /></View>
+          <View key={index} style={styles.line}>
+            <Select compact label={`Sugar ${index + 1}`} value={sugar.type} options={sugarOptions} onChange={(type) => setFieldValue(`sugars.${index}.type`, type)} />
+            <FormField name={`sugars.${index}.gPerL`} label={`${SUGARS[sugar.type].label} per litre`} suffix="g/L" inputMode="decimal" />
           </View>
         ))}
         <View style={styles.row}>
@@ -249,6 +249,7 @@ const styles = StyleSheet.create({
   results: { flex: 6, position: 'sticky' as never, top: space.lg },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-start' },
   cell: { flexGrow: 1, flexBasis: 150 },
+  wideCell: { flexGrow: 2, flexBasis: 280 },
   line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: '#EDE8DE' },
   lineName: { fontFamily: fonts.semibold },
   left: { alignSelf: 'flex-start' },
