@@ -14,12 +14,12 @@ import { Invitation } from './models/invitation';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
 import { PasswordReset } from './models/password-reset';
-import { Recipe, RecipeVersion, Tasting } from './models/recipe';
+import { Recipe, RecipeReview, RecipeVersion, Tasting } from './models/recipe';
 import { User } from './models/user';
 import { forgetBrewery } from './services/brewery-cache';
 import { forgetCachedUser } from './services/sessions';
 
-export { Attachment, BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, Recipe, RecipeVersion, Tasting, User };
+export { Attachment, BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, Recipe, RecipeReview, RecipeVersion, Tasting, User };
 
 function createSequelize(databasePath: string): Sequelize {
   if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
@@ -35,7 +35,7 @@ function createSequelize(databasePath: string): Sequelize {
 
 export const sequelize = createSequelize(config.databasePath);
 
-for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat, Ingredient, IngredientChange, Attachment, Recipe, RecipeVersion, Tasting]) model.initModel(sequelize);
+for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat, Ingredient, IngredientChange, Attachment, Recipe, RecipeVersion, Tasting, RecipeReview]) model.initModel(sequelize);
 
 Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
 User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -58,6 +58,8 @@ Recipe.hasMany(RecipeVersion, { foreignKey: 'recipeId', as: 'versions' });
 RecipeVersion.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
 Recipe.hasMany(Tasting, { foreignKey: 'recipeId', as: 'tastings' });
 Tasting.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Recipe.hasMany(RecipeReview, { foreignKey: 'recipeId', as: 'reviews' });
+RecipeReview.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
 // Any change to a user row (role, active, password) must reach the sign-in check at once.
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));

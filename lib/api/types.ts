@@ -21,6 +21,8 @@ export interface SessionUser {
   email: string;
   role: Role;
   unitSystem: UnitSystem;
+  /** Whether review e-mails reach this person. */
+  notifyReviews: boolean;
 }
 
 export interface Session {

@@ -24,7 +24,8 @@ export const profileSchema = yup.object({ name: personName() });
 export type ProfileInput = yup.InferType<typeof profileSchema>;
 
 export const preferencesSchema = yup.object({
-  unitSystem: yup.string().oneOf(UNIT_SYSTEMS, 'Choose metric or US units.').required('Choose metric or US units.') as yup.StringSchema<UnitSystem>,
+  unitSystem: yup.string().oneOf(UNIT_SYSTEMS, 'Choose metric or US units.').optional() as yup.StringSchema<UnitSystem | undefined>,
+  notifyReviews: yup.boolean().optional(),
 });
 export type PreferencesInput = yup.InferType<typeof preferencesSchema>;
 

@@ -42,3 +42,24 @@ export function passwordResetMail(input: { name: string; token: string }): Rende
     'This link works once and expires in 1 hour. If you did not ask for it, ignore this message: your password stays as it is.',
   );
 }
+
+export function reviewSubmittedMail(input: { recipeName: string; version: number; author: string; message: string; recipeId: number }): Rendered {
+  return render(
+    `Review: ${input.recipeName} v${input.version}`,
+    [`${input.author} submitted version ${input.version} of ${input.recipeName} for production.`, ...(input.message ? [`"${input.message}"`] : [])],
+    { url: `${config.appUrl}/recipes/${input.recipeId}`, label: 'Open the recipe' },
+    'You receive this because you are an owner of the brewery. Turn review e-mails off in Profile.',
+  );
+}
+
+export function reviewDecisionMail(input: { recipeName: string; version: number; owner: string; approved: boolean; comment: string; recipeId: number }): Rendered {
+  return render(
+    `${input.approved ? 'Approved' : 'Changes asked'}: ${input.recipeName} v${input.version}`,
+    [
+      input.approved ? `${input.owner} approved version ${input.version} of ${input.recipeName} for production.` : `${input.owner} returned version ${input.version} of ${input.recipeName} with changes to make.`,
+      ...(input.comment ? [`"${input.comment}"`] : []),
+    ],
+    { url: `${config.appUrl}/recipes/${input.recipeId}`, label: 'Open the recipe' },
+    'You receive this because you submitted the version. Turn review e-mails off in Profile.',
+  );
+}

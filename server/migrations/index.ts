@@ -5,6 +5,7 @@ import * as calculations from './0002-calculations';
 import * as ingredients from './0003-ingredients';
 import * as attachments from './0004-attachments';
 import * as recipes from './0005-recipes';
+import * as reviews from './0006-reviews';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -18,4 +19,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0003-ingredients', ...ingredients },
   { name: '0004-attachments', ...attachments },
   { name: '0005-recipes', ...recipes },
+  { name: '0006-reviews', ...reviews },
 ];

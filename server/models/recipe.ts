@@ -25,6 +25,10 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
   declare flavourNotes: CreationOptional<string>;
   declare status: CreationOptional<'draft'>;
   declare currentVersion: CreationOptional<number>;
+  /** The version waiting for an owner's decision, if any. */
+  declare submittedVersion: CreationOptional<number | null>;
+  /** The version approved for production, if any: production keeps using it while newer drafts are made. */
+  declare approvedVersion: CreationOptional<number | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -37,6 +41,8 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
         flavourNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft' },
         currentVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        submittedVersion: { type: DataTypes.INTEGER, allowNull: true },
+        approvedVersion: { type: DataTypes.INTEGER, allowNull: true },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
@@ -109,6 +115,39 @@ export class Tasting extends Model<InferAttributes<Tasting>, InferCreationAttrib
         updatedAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'tastings', underscored: true },
+    );
+  }
+}
+
+export type ReviewAction = 'submitted' | 'approved' | 'returned' | 'withdrawn';
+
+/** One step of a recipe's review: who did what to which version, when, and why. */
+export class RecipeReview extends Model<InferAttributes<RecipeReview>, InferCreationAttributes<RecipeReview>> {
+  declare id: CreationOptional<number>;
+  declare recipeId: ForeignKey<Recipe['id']>;
+  declare versionNumber: number;
+  declare action: ReviewAction;
+  declare userId: number | null;
+  declare comment: string;
+  declare overrideReason: string | null;
+  declare selfApproved: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    RecipeReview.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        versionNumber: { type: DataTypes.INTEGER, allowNull: false },
+        action: { type: DataTypes.STRING(20), allowNull: false },
+        userId: { type: DataTypes.INTEGER, allowNull: true },
+        comment: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        overrideReason: { type: DataTypes.TEXT, allowNull: true },
+        selfApproved: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'recipe_reviews', underscored: true },
     );
   }
 }

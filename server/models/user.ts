@@ -15,6 +15,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   /** Raised when a password changes: tokens signed with an older value stop working. */
   declare tokenVersion: CreationOptional<number>;
   declare unitSystem: CreationOptional<UnitSystem>;
+  /** Whether review e-mails (submitted, approved, returned) are sent to this person. */
+  declare notifyReviews: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +31,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         tokenVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         unitSystem: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'metric' },
+        notifyReviews: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -17,13 +17,18 @@ import {
 } from '../../lib/schemas/recipes';
 import { allow, authOf } from '../middleware/access';
 import { validate } from '../middleware/validate';
+import { approveSchema, returnSchema, submitSchema, withdrawSchema, type ApproveInput, type ReturnInput, type SubmitInput, type WithdrawInput } from '../../lib/schemas/reviews';
 import * as recipes from '../services/recipes';
+import * as reviews from '../services/reviews';
 
 export const recipesRouter = Router();
 
 const EDITORS = ['owner', 'developer'] as const;
 const id = (locals: { params?: unknown }) => (locals.params as { id: number }).id;
-const listQuery = yup.object({ q: yup.string().trim().max(100).default(''), status: yup.string().oneOf(['draft', 'archived', 'all'] as const, 'Choose draft, archived or all.').default('draft') });
+const listQuery = yup.object({
+  q: yup.string().trim().max(100).default(''),
+  status: yup.string().oneOf(['draft', 'archived', 'approved', 'all'] as const, 'Choose draft, archived, approved or all.').default('draft'),
+});
 const versionQuery = yup.object({ version: yup.number().typeError('Version must be a number.').integer().positive().optional() });
 const diffQuery = yup.object({
   from: yup.number().typeError('From must be a version number.').integer().positive().required('Give the version to compare from.'),
@@ -88,4 +93,24 @@ recipesRouter.get('/:id/tastings', allow('signed-in'), validate({ params: idPara
 
 recipesRouter.post('/:id/tastings', allow(EDITORS), validate({ params: idParam, body: tastingSchema }), async (_req, res) => {
   res.status(201).json(await recipes.addTasting(authOf(res), id(res.locals), res.locals.body as TastingInput));
+});
+
+recipesRouter.get('/:id/review', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
+  res.json(await reviews.reviewTimeline(authOf(res), id(res.locals)));
+});
+
+recipesRouter.post('/:id/submit', allow(EDITORS), validate({ params: idParam, body: submitSchema }), async (_req, res) => {
+  res.json(await reviews.submit(authOf(res), id(res.locals), res.locals.body as SubmitInput));
+});
+
+recipesRouter.post('/:id/approve', allow(['owner']), validate({ params: idParam, body: approveSchema }), async (_req, res) => {
+  res.json(await reviews.approve(authOf(res), id(res.locals), res.locals.body as ApproveInput));
+});
+
+recipesRouter.post('/:id/return', allow(['owner']), validate({ params: idParam, body: returnSchema }), async (_req, res) => {
+  res.json(await reviews.returnForChanges(authOf(res), id(res.locals), res.locals.body as ReturnInput));
+});
+
+recipesRouter.post('/:id/withdraw', allow(['owner']), validate({ params: idParam, body: withdrawSchema }), async (_req, res) => {
+  res.json(await reviews.withdraw(authOf(res), id(res.locals), res.locals.body as WithdrawInput));
 });

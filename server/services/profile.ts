@@ -11,7 +11,8 @@ export async function updateProfile(userId: number, input: ProfileInput): Promis
 }
 
 export async function updatePreferences(userId: number, input: PreferencesInput): Promise<Session> {
-  await User.update({ unitSystem: input.unitSystem }, { where: { id: userId }, individualHooks: true });
+  const changes = Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined));
+  if (Object.keys(changes).length > 0) await User.update(changes, { where: { id: userId }, individualHooks: true });
   return sessionFor(userId);
 }
 

@@ -16,6 +16,9 @@ export interface RecipeSummary {
   flavourNotes: string;
   status: 'draft' | 'archived';
   currentVersion: number;
+  submittedVersion: number | null;
+  /** The version production uses, if one is approved. */
+  approvedVersion: number | null;
   updatedAt: string;
 }
 
@@ -33,6 +36,8 @@ const summary = (r: Recipe): RecipeSummary => ({
   flavourNotes: r.flavourNotes,
   status: r.archivedAt ? 'archived' : 'draft',
   currentVersion: r.currentVersion,
+  submittedVersion: r.submittedVersion ?? null,
+  approvedVersion: r.approvedVersion ?? null,
   updatedAt: r.updatedAt.toISOString(),
 });
 
@@ -69,7 +74,7 @@ async function assertUsable(auth: AuthContext, content: RecipeContent): Promise<
   await ingredientFacts(auth, content, true);
 }
 
-export async function listRecipes(auth: AuthContext, q: string, status: 'draft' | 'archived' | 'all'): Promise<RecipeSummary[]> {
+export async function listRecipes(auth: AuthContext, q: string, status: 'draft' | 'archived' | 'approved' | 'all'): Promise<RecipeSummary[]> {
   const where: Record<string | symbol, unknown> = { organisationId: auth.organisationId };
   if (q) {
     const like = `%${q.replace(/[%_]/g, '')}%`;
@@ -77,6 +82,7 @@ export async function listRecipes(auth: AuthContext, q: string, status: 'draft' 
   }
   if (status === 'draft') where.archivedAt = { [Op.is]: null };
   if (status === 'archived') where.archivedAt = { [Op.not]: null };
+  if (status === 'approved') Object.assign(where, { archivedAt: { [Op.is]: null }, approvedVersion: { [Op.not]: null } });
   const rows = await Recipe.findAll({ where, order: [['updatedAt', 'DESC']] });
   return rows.map(summary);
 }

@@ -27,7 +27,7 @@ describe('POST /api/auth/sign-up', () => {
     const input = body();
     const res = await request(app).post('/api/auth/sign-up').send(input).expect(201);
     expect(res.body).toEqual({
-      user: { id: expect.any(Number), name: 'Tamsin Vale', email: input.email, role: 'owner', unitSystem: 'metric' },
+      user: { id: expect.any(Number), name: 'Tamsin Vale', email: input.email, role: 'owner', unitSystem: 'metric', notifyReviews: true },
       organisation: { id: expect.any(Number), name: 'Larkspur Ferments', abvLimitPercent: 0.5 },
     });
     expect(JSON.stringify(res.body)).not.toMatch(/hash|password/i);

@@ -1,0 +1,150 @@
+import { Op } from 'sequelize';
+
+import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
+import { Recipe, RecipeReview, RecipeVersion, sequelize, User } from '../db';
+import { forbidden, HttpError, notFound } from '../errors';
+import { mailer } from '../mail/mailer';
+import { reviewDecisionMail, reviewSubmittedMail } from '../mail/templates';
+import { evaluate } from './recipes';
+import type { AuthContext } from './sessions';
+
+const wrongState = (message: string) => new HttpError(409, 'wrong_state', message);
+
+/** Where a recipe's newest version stands. */
+export function reviewState(recipe: Pick<Recipe, 'currentVersion' | 'submittedVersion' | 'approvedVersion'>, lastActionOnCurrent: string | null): ReviewState {
+  if (recipe.approvedVersion === recipe.currentVersion) return 'approved';
+  if (recipe.submittedVersion === recipe.currentVersion) return 'submitted';
+  if (lastActionOnCurrent === 'returned') return 'returned';
+  return 'draft';
+}
+
+async function lastAction(recipe: Recipe): Promise<RecipeReview | null> {
+  return RecipeReview.findOne({ where: { recipeId: recipe.id, versionNumber: recipe.currentVersion }, order: [['id', 'DESC']] });
+}
+
+async function ownRecipe(auth: AuthContext, id: number): Promise<Recipe> {
+  const recipe = await Recipe.findOne({ where: { id, organisationId: auth.organisationId } });
+  if (!recipe) throw notFound('No such recipe in your brewery.');
+  if (recipe.archivedAt) throw wrongState('This recipe is archived.');
+  return recipe;
+}
+
+export async function reviewTimeline(auth: AuthContext, id: number) {
+  const recipe = await Recipe.findOne({ where: { id, organisationId: auth.organisationId } });
+  if (!recipe) throw notFound('No such recipe in your brewery.');
+  const events = await RecipeReview.findAll({ where: { recipeId: id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] });
+  const last = await lastAction(recipe);
+  return {
+    state: reviewState(recipe, last?.action ?? null),
+    currentVersion: recipe.currentVersion,
+    submittedVersion: recipe.submittedVersion,
+    approvedVersion: recipe.approvedVersion,
+    events: events.map((e) => ({
+      id: e.id,
+      version: e.versionNumber,
+      action: e.action,
+      by: (e as RecipeReview & { user?: User }).user?.name ?? null,
+      comment: e.comment,
+      overrideReason: e.overrideReason,
+      selfApproved: e.selfApproved,
+      at: e.createdAt.toISOString(),
+    })),
+  };
+}
+
+async function notify(userIds: number[], mail: { subject: string; text: string; html: string }, organisationId: number) {
+  const people = await User.findAll({ where: { id: userIds, active: true, notifyReviews: true } });
+  for (const person of people) await mailer.send({ ...mail, to: person.email, kind: 'review', organisationId, userId: person.id });
+}
+
+/** A developer (or owner) asks for the newest version to be approved for production. */
+export async function submit(auth: AuthContext, id: number, input: SubmitInput) {
+  const recipe = await ownRecipe(auth, id);
+  if (input.version !== recipe.currentVersion) throw wrongState(`Only the newest version (${recipe.currentVersion}) can be submitted.`);
+  const state = reviewState(recipe, (await lastAction(recipe))?.action ?? null);
+  if (state === 'submitted') throw wrongState('This version is already waiting for review.');
+  if (state === 'approved') throw wrongState('This version is already approved.');
+  await sequelize.transaction(async (transaction) => {
+    await recipe.update({ submittedVersion: recipe.currentVersion }, { transaction });
+    await RecipeReview.create({ recipeId: id, versionNumber: recipe.currentVersion, action: 'submitted', userId: auth.userId, comment: input.message, overrideReason: null }, { transaction });
+  });
+  const [author, owners] = await Promise.all([User.findByPk(auth.userId), User.findAll({ where: { organisationId: auth.organisationId, role: 'owner', id: { [Op.ne]: auth.userId } } })]);
+  await notify(owners.map((o) => o.id), reviewSubmittedMail({ recipeName: recipe.name, version: recipe.currentVersion, author: author?.name ?? 'Someone', message: input.message, recipeId: id }), auth.organisationId);
+  return reviewTimeline(auth, id);
+}
+
+async function submitter(recipe: Recipe): Promise<number | null> {
+  const event = await RecipeReview.findOne({ where: { recipeId: recipe.id, versionNumber: recipe.submittedVersion ?? 0, action: 'submitted' }, order: [['id', 'DESC']] });
+  return event?.userId ?? null;
+}
+
+function assertWaitingVersion(recipe: Recipe, version: number) {
+  if (recipe.submittedVersion === null) throw wrongState('No version of this recipe is waiting for review.');
+  if (recipe.currentVersion !== version || recipe.submittedVersion !== version) {
+    throw wrongState(`The recipe changed since you opened it: version ${recipe.currentVersion} is now the newest. Reload and look again.`);
+  }
+}
+
+/**
+ * An owner approves the submitted version. Nobody approves their own submission unless they are the brewery's
+ * only active owner (recorded). A danger finding blocks approval unless the owner writes why they override it.
+ */
+export async function approve(auth: AuthContext, id: number, input: ApproveInput) {
+  const recipe = await ownRecipe(auth, id);
+  assertWaitingVersion(recipe, input.version);
+  const author = await submitter(recipe);
+  let selfApproved = false;
+  if (author === auth.userId) {
+    const otherOwners = await User.count({ where: { organisationId: auth.organisationId, role: 'owner', active: true, id: { [Op.ne]: auth.userId } } });
+    if (otherOwners > 0) throw forbidden('You submitted this version: another owner must approve it.');
+    selfApproved = true;
+  }
+  const version = await RecipeVersion.findOne({ where: { recipeId: id, number: input.version } });
+  const result = await evaluate(auth, version!.content);
+  const dangers = result.carbonation.findings.filter((f) => f.level === 'danger');
+  if (dangers.length > 0 && !input.overrideReason) {
+    throw new HttpError(409, 'danger_finding', `Approval is blocked by a danger finding: ${dangers.map((d) => d.message).join(' ')} To approve anyway, write why.`, {
+      overrideReason: 'Write why you approve despite the danger finding.',
+    });
+  }
+  await sequelize.transaction(async (transaction) => {
+    await recipe.update({ approvedVersion: input.version, submittedVersion: null }, { transaction });
+    await RecipeReview.create(
+      { recipeId: id, versionNumber: input.version, action: 'approved', userId: auth.userId, comment: input.comment, overrideReason: dangers.length > 0 ? input.overrideReason : null, selfApproved },
+      { transaction },
+    );
+  });
+  const owner = await User.findByPk(auth.userId);
+  if (author && author !== auth.userId) {
+    await notify([author], reviewDecisionMail({ recipeName: recipe.name, version: input.version, owner: owner?.name ?? 'An owner', approved: true, comment: input.comment, recipeId: id }), auth.organisationId);
+  }
+  return reviewTimeline(auth, id);
+}
+
+/** An owner returns the submitted version with the changes to make. */
+export async function returnForChanges(auth: AuthContext, id: number, input: ReturnInput) {
+  const recipe = await ownRecipe(auth, id);
+  assertWaitingVersion(recipe, input.version);
+  const author = await submitter(recipe);
+  await sequelize.transaction(async (transaction) => {
+    await recipe.update({ submittedVersion: null }, { transaction });
+    await RecipeReview.create({ recipeId: id, versionNumber: input.version, action: 'returned', userId: auth.userId, comment: input.comment, overrideReason: null }, { transaction });
+  });
+  const owner = await User.findByPk(auth.userId);
+  if (author && author !== auth.userId) {
+    await notify([author], reviewDecisionMail({ recipeName: recipe.name, version: input.version, owner: owner?.name ?? 'An owner', approved: false, comment: input.comment, recipeId: id }), auth.organisationId);
+  }
+  return reviewTimeline(auth, id);
+}
+
+/** An owner takes an approval back; production has no approved version until one is approved again. */
+export async function withdraw(auth: AuthContext, id: number, input: WithdrawInput) {
+  const recipe = await ownRecipe(auth, id);
+  if (recipe.approvedVersion === null) throw wrongState('No version of this recipe is approved.');
+  const version = recipe.approvedVersion;
+  await sequelize.transaction(async (transaction) => {
+    await recipe.update({ approvedVersion: null }, { transaction });
+    await RecipeReview.create({ recipeId: id, versionNumber: version, action: 'withdrawn', userId: auth.userId, comment: input.reason, overrideReason: null }, { transaction });
+  });
+  return reviewTimeline(auth, id);
+}
