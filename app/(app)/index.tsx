@@ -1,4 +1,5 @@
 import { HomeActions } from '@/components/home/HomeActions';
+import { RecipeShortlist } from '@/components/home/RecipeShortlist';
 import { Badge, Card, Screen, Text } from '@/components/ui';
 import { useSessionQuery } from '@/lib/api/session';
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from '@/lib/roles';
@@ -12,6 +13,7 @@ export default function HomeScreen() {
       <Card title="Your role" aside={<Badge label={ROLE_LABELS[user.role]} tone="info" />}>
         <Text>{ROLE_DESCRIPTIONS[user.role]}</Text>
       </Card>
+      <RecipeShortlist role={user.role} />
       <HomeActions session={session} />
     </Screen>
   );

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useScaleQuery, type RecipeDetail } from '@/lib/api/recipes';
+import { useRecipeQuery, useScaleQuery, type RecipeDetail } from '@/lib/api/recipes';
 import { parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import type { Rounded } from '@/lib/recipes/scaling';
@@ -18,14 +18,18 @@ const digits = (r: Rounded) => Math.max(0, -Math.floor(Math.log10(r.resolution) 
 const show = (r: Rounded) => `${formatNumber(r.value, digits(r))} ${r.unit}`;
 
 /** The recipe at batch size: every amount rounded to what a scale reads, with the rounding shown. */
-export function ScaleView({ recipe, units }: { recipe: RecipeDetail; units: UnitSystem }) {
+export function ScaleView({ recipe, units, productionOnly = false }: { recipe: RecipeDetail; units: UnitSystem; productionOnly?: boolean }) {
   const recipeId = recipe.id;
+  // Brewers work from the version approved for production; developers scale the newest.
+  const version = productionOnly ? recipe.approvedVersion : null;
+  const approved = useRecipeQuery(recipeId, productionOnly ? recipe.approvedVersion : undefined);
   const [kind, setKind] = useState<Kind>('bottles');
   const [text, setText] = useState('120');
   const [system, setSystem] = useState<UnitSystem>(units);
   const value = parseNumber(text);
   const valid = value !== undefined && !Number.isNaN(value) && value > 0;
-  const request = useDebouncedValue(valid ? { batch: { kind, value: value! }, units: system, version: null } : undefined, 300);
+  const request = useDebouncedValue(valid && (!productionOnly || version) ? { batch: { kind, value: value! }, units: system, version } : undefined, 300);
+  const content = productionOnly ? approved.data?.content : recipe.content;
   const scaled = useScaleQuery(recipeId, request);
   const columns: Column<Row>[] = [
     { key: 'name', header: 'What', flex: 2, render: (r) => r.name },
@@ -35,6 +39,8 @@ export function ScaleView({ recipe, units }: { recipe: RecipeDetail; units: Unit
   ];
   return (
     <View style={styles.wrap}>
+      {productionOnly && !version ? <Banner tone="info">No version of this recipe is approved for production yet.</Banner> : null}
+      {productionOnly && version ? <Banner tone="success">{`Version ${version}, approved for production.`}</Banner> : null}
       <Card title="Batch size">
         <Segmented label="Batch given as" value={kind} onChange={setKind} options={[{ value: 'bottles', label: 'Bottles' }, { value: 'litres', label: 'Litres' }, { value: 'us-gallons', label: 'US gallons' }]} />
         <NumberField label={kind === 'bottles' ? 'Number of bottles' : kind === 'litres' ? 'Litres of finished drink' : 'US gallons of finished drink'} value={text} onChangeText={setText} error={valid ? (scaled.error?.message ?? undefined) : 'Enter a batch size above 0.'} />
@@ -48,7 +54,7 @@ export function ScaleView({ recipe, units }: { recipe: RecipeDetail; units: Unit
           </Text>
           <Table label="Scaled amounts" columns={columns} rows={[...scaled.data.lines, ...scaled.data.sugars]} rowKey={(r) => r.name} />
           <Text variant="subheading">Steps</Text>
-          {batchSteps(recipe.content, scaled.data, scaled.data.bottleName).map((step, i) => (
+          {content && batchSteps(content, scaled.data, scaled.data.bottleName).map((step, i) => (
             <Text key={i}>
               {i + 1}. {step}
             </Text>

@@ -4,6 +4,7 @@ import type { Change } from '../recipes/diff';
 import type { RecipeEvaluation } from '../recipes/evaluate';
 import type { ScaledRecipe } from '../recipes/scaling';
 import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../schemas/recipes';
+import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '../schemas/reviews';
 import { api } from './client';
 import { staleTimes } from './query-client';
 
@@ -13,10 +14,22 @@ export interface RecipeSummary {
   flavourNotes: string;
   status: 'draft' | 'archived';
   currentVersion: number;
+  submittedVersion: number | null;
+  approvedVersion: number | null;
+  reviewState: ReviewState;
   updatedAt: string;
 }
 
-export interface RecipeDetail extends RecipeSummary {
+export interface ReviewTimeline {
+  state: ReviewState;
+  currentVersion: number;
+  submittedVersion: number | null;
+  approvedVersion: number | null;
+  events: { id: number; version: number; action: string; by: string | null; comment: string; overrideReason: string | null; selfApproved: boolean; at: string }[];
+}
+
+export interface RecipeDetail extends Omit<RecipeSummary, 'reviewState'> {
+  version: number;
   content: RecipeContent;
   versionNote: string;
   savedBy: string | null;
@@ -46,7 +59,8 @@ export type { Change, RecipeEvaluation, ScaledRecipe };
 export const recipeKeys = {
   all: ['recipes'] as const,
   list: (q: string, status: string) => ['recipes', 'list', q, status] as const,
-  one: (id: number) => ['recipes', 'one', id] as const,
+  one: (id: number, version?: number) => ['recipes', 'one', id, version ?? 'current'] as const,
+  review: (id: number) => ['recipes', 'review', id] as const,
   versions: (id: number) => ['recipes', 'versions', id] as const,
   diff: (id: number, from: number, to: number) => ['recipes', 'diff', id, from, to] as const,
   tastings: (id: number) => ['recipes', 'tastings', id] as const,
@@ -54,7 +68,7 @@ export const recipeKeys = {
   scale: (id: number, request: ScaleRequest | undefined) => ['recipes', 'scale', id, request] as const,
 };
 
-export function useRecipesQuery(q: string, status: 'draft' | 'archived' | 'all') {
+export function useRecipesQuery(q: string, status: 'draft' | 'archived' | 'approved' | 'all') {
   return useQuery({
     queryKey: recipeKeys.list(q, status),
     staleTime: staleTimes.list,
@@ -63,8 +77,17 @@ export function useRecipesQuery(q: string, status: 'draft' | 'archived' | 'all')
   });
 }
 
-export function useRecipeQuery(id: number) {
-  return useQuery({ queryKey: recipeKeys.one(id), enabled: Number.isInteger(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<RecipeDetail>(`/recipes/${id}`, signal) });
+export function useRecipeQuery(id: number, version?: number | null) {
+  return useQuery({
+    queryKey: recipeKeys.one(id, version ?? undefined),
+    enabled: Number.isInteger(id) && version !== null,
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<RecipeDetail>(`/recipes/${id}${version ? `?version=${version}` : ''}`, signal),
+  });
+}
+
+export function useReviewQuery(id: number) {
+  return useQuery({ queryKey: recipeKeys.review(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<ReviewTimeline>(`/recipes/${id}/review`, signal) });
 }
 
 export function useRecipeVersionsQuery(id: number) {
@@ -117,3 +140,8 @@ export const useDuplicateRecipeMutation = (id: number) => useRecipeMutation(() =
 export const useArchiveRecipeMutation = (id: number) =>
   useRecipeMutation((archived: boolean) => api.post<RecipeSummary>(`/recipes/${id}/${archived ? 'archive' : 'restore-archived'}`));
 export const useAddTastingMutation = (id: number) => useRecipeMutation((input: TastingInput) => api.post<TastingEntry[]>(`/recipes/${id}/tastings`, input));
+
+export const useSubmitMutation = (id: number) => useRecipeMutation((input: SubmitInput) => api.post<ReviewTimeline>(`/recipes/${id}/submit`, input));
+export const useApproveMutation = (id: number) => useRecipeMutation((input: ApproveInput) => api.post<ReviewTimeline>(`/recipes/${id}/approve`, input));
+export const useReturnMutation = (id: number) => useRecipeMutation((input: ReturnInput) => api.post<ReviewTimeline>(`/recipes/${id}/return`, input));
+export const useWithdrawMutation = (id: number) => useRecipeMutation((input: WithdrawInput) => api.post<ReviewTimeline>(`/recipes/${id}/withdraw`, input));

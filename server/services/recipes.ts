@@ -5,9 +5,11 @@ import { evaluateRecipe, type IngredientFacts, type RecipeEvaluation } from '../
 import { scaleRecipe, type ScaledRecipe } from '../../lib/recipes/scaling';
 import { SUGARS } from '../../lib/chemistry/sugars';
 import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../../lib/schemas/recipes';
-import { Ingredient, Recipe, RecipeVersion, sequelize, Tasting, User } from '../db';
+import type { ReviewState } from '../../lib/schemas/reviews';
+import { Ingredient, Recipe, RecipeReview, RecipeVersion, sequelize, Tasting, User } from '../db';
 import { badRequest, HttpError, notFound } from '../errors';
 import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
+import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
 
 export interface RecipeSummary {
@@ -19,10 +21,14 @@ export interface RecipeSummary {
   submittedVersion: number | null;
   /** The version production uses, if one is approved. */
   approvedVersion: number | null;
+  /** Where the newest version stands in review. */
+  reviewState: ReviewState;
   updatedAt: string;
 }
 
 export interface RecipeDetail extends RecipeSummary {
+  /** The version this detail shows (the newest unless another was asked for). */
+  version: number;
   content: RecipeContent;
   versionNote: string;
   savedBy: string | null;
@@ -30,7 +36,7 @@ export interface RecipeDetail extends RecipeSummary {
   ingredientNames: Record<number, string>;
 }
 
-const summary = (r: Recipe): RecipeSummary => ({
+const summary = (r: Recipe, returnedCurrent = false): RecipeSummary => ({
   id: r.id,
   name: r.name,
   flavourNotes: r.flavourNotes,
@@ -38,6 +44,7 @@ const summary = (r: Recipe): RecipeSummary => ({
   currentVersion: r.currentVersion,
   submittedVersion: r.submittedVersion ?? null,
   approvedVersion: r.approvedVersion ?? null,
+  reviewState: reviewState(r, returnedCurrent ? 'returned' : null),
   updatedAt: r.updatedAt.toISOString(),
 });
 
@@ -84,7 +91,11 @@ export async function listRecipes(auth: AuthContext, q: string, status: 'draft' 
   if (status === 'archived') where.archivedAt = { [Op.not]: null };
   if (status === 'approved') Object.assign(where, { archivedAt: { [Op.is]: null }, approvedVersion: { [Op.not]: null } });
   const rows = await Recipe.findAll({ where, order: [['updatedAt', 'DESC']] });
-  return rows.map(summary);
+  const returned = rows.length
+    ? await RecipeReview.findAll({ where: { recipeId: rows.map((r) => r.id), action: 'returned' }, attributes: ['recipeId', 'versionNumber'] })
+    : [];
+  const returnedCurrent = new Set(returned.filter((e) => rows.find((r) => r.id === e.recipeId)?.currentVersion === e.versionNumber).map((e) => e.recipeId));
+  return rows.map((r) => summary(r, returnedCurrent.has(r.id)));
 }
 
 async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<RecipeDetail> {
@@ -94,6 +105,7 @@ async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<R
   const names = ids.length ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
   return {
     ...summary(recipe),
+    version: version.number,
     name: version.name,
     flavourNotes: version.flavourNotes,
     content: version.content,
@@ -193,7 +205,7 @@ export async function scale(auth: AuthContext, id: number, input: ScaleRequest):
       batch: input.batch,
       units: input.units,
     });
-    return { ...scaled, version: recipe.currentVersion, bottleName: format.name };
+    return { ...scaled, version: recipe.version, bottleName: format.name };
   } catch (error) {
     if (error instanceof RangeError) throw badRequest(error.message, { 'batch.value': error.message });
     throw error;

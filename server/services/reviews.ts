@@ -1,22 +1,16 @@
 import { Op } from 'sequelize';
 
-import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
+import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
 import { Recipe, RecipeReview, RecipeVersion, sequelize, User } from '../db';
 import { forbidden, HttpError, notFound } from '../errors';
 import { mailer } from '../mail/mailer';
 import { reviewDecisionMail, reviewSubmittedMail } from '../mail/templates';
 import { evaluate } from './recipes';
+import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
 
 const wrongState = (message: string) => new HttpError(409, 'wrong_state', message);
 
-/** Where a recipe's newest version stands. */
-export function reviewState(recipe: Pick<Recipe, 'currentVersion' | 'submittedVersion' | 'approvedVersion'>, lastActionOnCurrent: string | null): ReviewState {
-  if (recipe.approvedVersion === recipe.currentVersion) return 'approved';
-  if (recipe.submittedVersion === recipe.currentVersion) return 'submitted';
-  if (lastActionOnCurrent === 'returned') return 'returned';
-  return 'draft';
-}
 
 async function lastAction(recipe: Recipe): Promise<RecipeReview | null> {
   return RecipeReview.findOne({ where: { recipeId: recipe.id, versionNumber: recipe.currentVersion }, order: [['id', 'DESC']] });

@@ -2,6 +2,7 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { HistoryView } from '@/components/recipes/HistoryView';
+import { ReviewPanel } from '@/components/recipes/ReviewPanel';
 import { RecipeEditor } from '@/components/recipes/RecipeEditor';
 import { ScaleView } from '@/components/recipes/ScaleView';
 import { TastingsView } from '@/components/recipes/TastingsView';
@@ -10,7 +11,7 @@ import { useBottleFormatsQuery } from '@/lib/api/bottle-formats';
 import { useArchiveRecipeMutation, useDuplicateRecipeMutation, useRecipeQuery, useSaveRecipeMutation } from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
 
-type Tab = 'design' | 'tastings' | 'scale' | 'history';
+type Tab = 'design' | 'review' | 'tastings' | 'scale' | 'history';
 
 export default function RecipeScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -22,7 +23,8 @@ export default function RecipeScreen() {
   const save = useSaveRecipeMutation(recipeId);
   const duplicate = useDuplicateRecipeMutation(recipeId);
   const archive = useArchiveRecipeMutation(recipeId);
-  const [tab, setTab] = useState<Tab>('design');
+  const brewer = session?.user.role === 'brewer';
+  const [tab, setTab] = useState<Tab>(brewer ? 'scale' : 'design');
   if (recipe.isError) return <Screen title="Recipe"><Banner tone="danger">{recipe.error.message}</Banner></Screen>;
   if (!recipe.data || !formats.data || !session) return <Loading />;
   const archived = recipe.data.status === 'archived';
@@ -42,7 +44,7 @@ export default function RecipeScreen() {
       }
     >
       {archived ? <Banner tone="info">This recipe is archived: it can be read, duplicated or restored, not changed.</Banner> : null}
-      <Segmented label="Part of the recipe" showLabel={false} value={tab} onChange={setTab} options={[{ value: 'design', label: 'Design' }, { value: 'tastings', label: 'Tastings' }, { value: 'scale', label: 'Scale' }, { value: 'history', label: 'History' }]} />
+      <Segmented label="Part of the recipe" showLabel={false} value={tab} onChange={setTab} options={[{ value: 'design', label: 'Design' }, { value: 'review', label: 'Review' }, { value: 'tastings', label: 'Tastings' }, { value: 'scale', label: brewer ? 'Batch' : 'Scale' }, { value: 'history', label: 'History' }]} />
       {tab === 'design' ? (
         <RecipeEditor
           recipe={recipe.data}
@@ -59,7 +61,8 @@ export default function RecipeScreen() {
         />
       ) : null}
       {tab === 'tastings' ? <TastingsView recipeId={recipeId} canEdit={canEdit} /> : null}
-      {tab === 'scale' ? <ScaleView recipe={recipe.data} units={session.user.unitSystem} /> : null}
+      {tab === 'review' ? <ReviewPanel recipeId={recipeId} session={session} /> : null}
+      {tab === 'scale' ? <ScaleView recipe={recipe.data} units={session.user.unitSystem} productionOnly={brewer} /> : null}
       {tab === 'history' ? <HistoryView recipeId={recipeId} current={recipe.data.currentVersion} canEdit={canEdit} /> : null}
     </Screen>
   );

@@ -2,30 +2,41 @@ import { Link, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet } from 'react-native';
 
+import { STATE_TONE } from '@/components/recipes/ReviewPanel';
 import { Badge, Banner, Button, Card, EmptyState, Loading, Screen, Segmented, Table, TextField, type Column } from '@/components/ui';
 import { useRecipesQuery, type RecipeSummary } from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { colors, fonts } from '@/lib/theme';
 
 export default function RecipesScreen() {
   const router = useRouter();
   const { data: session } = useSessionQuery();
   const [text, setText] = useState('');
-  const [status, setStatus] = useState<'draft' | 'archived' | 'all'>('draft');
+  const [status, setStatus] = useState<'draft' | 'archived' | 'approved' | 'all'>(session?.user.role === 'brewer' ? 'approved' : 'draft');
   const recipes = useRecipesQuery(useDebouncedValue(text, 250), status);
   const canEdit = session?.user.role === 'owner' || session?.user.role === 'developer';
   const columns: Column<RecipeSummary>[] = [
     { key: 'name', header: 'Recipe', flex: 2, render: (r) => <Link href={`/recipes/${r.id}`} style={styles.link}>{r.name}</Link> },
     { key: 'notes', header: 'Flavour', flex: 2, render: (r) => r.flavourNotes || '—' },
-    { key: 'status', header: 'Status', render: (r) => <Badge label={r.status === 'archived' ? 'Archived' : `Draft · v${r.currentVersion}`} tone={r.status === 'archived' ? 'neutral' : 'info'} /> },
+    {
+      key: 'status',
+      header: 'Status',
+      render: (r) =>
+        r.status === 'archived' ? (
+          <Badge label="Archived" />
+        ) : (
+          <Badge label={`${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}${r.approvedVersion && r.reviewState !== 'approved' ? ` (v${r.approvedVersion} in production)` : ''}`} tone={STATE_TONE[r.reviewState]} />
+        ),
+    },
     { key: 'updated', header: 'Changed', render: (r) => new Date(r.updatedAt).toLocaleDateString() },
   ];
   return (
     <Screen title="Recipes" subtitle="Flavours of your brewery, kept per litre so every batch size is exact." actions={canEdit ? <Button label="New recipe" onPress={() => router.push('/recipes/new')} /> : null}>
       <Card>
         <TextField label="Search recipes" value={text} onChangeText={setText} placeholder="Name or flavour, e.g. rhubarb" />
-        <Segmented label="Show" value={status} onChange={setStatus} options={[{ value: 'draft', label: 'Current' }, { value: 'archived', label: 'Archived' }, { value: 'all', label: 'All' }]} />
+        <Segmented label="Show" value={status} onChange={setStatus} options={[{ value: 'draft', label: 'Current' }, { value: 'approved', label: 'For production' }, { value: 'archived', label: 'Archived' }, { value: 'all', label: 'All' }]} />
         {recipes.isError ? <Banner tone="danger">{recipes.error.message}</Banner> : null}
         {!recipes.data ? <Loading /> : recipes.data.length === 0 ? <EmptyState title="No recipes here" message={canEdit ? 'Start one with New recipe.' : 'Recipe developers add recipes here.'} /> : <Table label="Recipes" columns={columns} rows={recipes.data} rowKey={(r) => r.id} />}
       </Card>

@@ -1,0 +1,41 @@
+import { Link } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+
+import { useRecipesQuery, type RecipeSummary } from '@/lib/api/recipes';
+import type { Role } from '@/lib/roles';
+import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
+import { colors, fonts, space } from '@/lib/theme';
+
+import { STATE_TONE } from '../recipes/ReviewPanel';
+import { Badge, Card, Text } from '../ui';
+
+const VIEW: Record<Role, { title: string; empty: string; status: 'draft' | 'approved'; keep: (r: RecipeSummary) => boolean }> = {
+  owner: { title: 'Waiting for your review', empty: 'Nothing waits for review.', status: 'draft', keep: (r) => r.reviewState === 'submitted' },
+  developer: { title: 'Drafts and returned versions', empty: 'No drafts: start a recipe.', status: 'draft', keep: (r) => r.reviewState === 'draft' || r.reviewState === 'returned' },
+  brewer: { title: 'Approved for production', empty: 'No recipe is approved for production yet.', status: 'approved', keep: () => true },
+};
+
+/** The recipes that need this person now, by role. */
+export function RecipeShortlist({ role }: { role: Role }) {
+  const view = VIEW[role];
+  const recipes = useRecipesQuery('', view.status);
+  const items = (recipes.data ?? []).filter(view.keep);
+  return (
+    <Card title={view.title} aside={recipes.data ? String(items.length) : undefined}>
+      {recipes.data && items.length === 0 ? <Text variant="muted">{view.empty}</Text> : null}
+      {items.slice(0, 8).map((r) => (
+        <View key={r.id} style={styles.row}>
+          <Link href={`/recipes/${r.id}`} style={styles.link}>
+            {r.name}
+          </Link>
+          <Badge label={role === 'brewer' ? `v${r.approvedVersion}` : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`} tone={role === 'brewer' ? 'success' : STATE_TONE[r.reviewState]} />
+        </View>
+      ))}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm, minHeight: 36 },
+  link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
+});

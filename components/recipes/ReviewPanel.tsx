@@ -1,0 +1,129 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { useApproveMutation, useRecipeDiffQuery, useRecipeEvaluationQuery, useRecipeQuery, useReturnMutation, useReviewQuery, useSubmitMutation, useTastingsQuery, useWithdrawMutation } from '@/lib/api/recipes';
+import type { Session } from '@/lib/api/types';
+import { REVIEW_STATE_LABELS, type ReviewState } from '@/lib/schemas/reviews';
+import { space } from '@/lib/theme';
+
+import { FindingList } from '../calculations/FindingList';
+import { Badge, Banner, Button, Card, FormStatus, Loading, Text, TextField, type Tone } from '../ui';
+
+export const STATE_TONE: Record<ReviewState, Tone> = { draft: 'neutral', submitted: 'caution', approved: 'success', returned: 'danger' };
+const ACTION_LABELS: Record<string, string> = { submitted: 'Submitted', approved: 'Approved', returned: 'Returned with changes', withdrawn: 'Approval withdrawn' };
+
+/** The way to production: submit, and for owners what to look at before deciding, then the decision; and the record. */
+export function ReviewPanel({ recipeId, session }: { recipeId: number; session: Session }) {
+  const review = useReviewQuery(recipeId);
+  const owner = session.user.role === 'owner';
+  const editor = owner || session.user.role === 'developer';
+  if (!review.data) return <Loading />;
+  const { state, currentVersion, submittedVersion, approvedVersion, events } = review.data;
+  return (
+    <View style={styles.wrap}>
+      <Card title="Where it stands" aside={<Badge label={REVIEW_STATE_LABELS[state]} tone={STATE_TONE[state]} />}>
+        <Text>
+          Newest version {currentVersion}
+          {submittedVersion ? ` · version ${submittedVersion} waits for review` : ''}
+          {approvedVersion ? ` · version ${approvedVersion} is approved for production` : ' · nothing approved for production yet'}.
+        </Text>
+        {editor && (state === 'draft' || state === 'returned') ? <SubmitForm recipeId={recipeId} version={currentVersion} /> : null}
+        {owner && submittedVersion ? <Decision recipeId={recipeId} version={submittedVersion} approvedVersion={approvedVersion} /> : null}
+        {owner && approvedVersion ? <Withdraw recipeId={recipeId} /> : null}
+      </Card>
+      <Card title="Record">
+        {events.length === 0 ? <Text variant="muted">Nothing yet.</Text> : null}
+        {events.map((e) => (
+          <View key={e.id} style={styles.event}>
+            <Text>
+              {ACTION_LABELS[e.action] ?? e.action} · version {e.version} · {e.by ?? 'someone'} · {new Date(e.at).toLocaleString()}
+              {e.selfApproved ? ' · approved by the submitter, the brewery’s only owner' : ''}
+            </Text>
+            {e.comment ? <Text variant="muted">“{e.comment}”</Text> : null}
+            {e.overrideReason ? <Text variant="small">Danger finding overridden: {e.overrideReason}</Text> : null}
+          </View>
+        ))}
+      </Card>
+    </View>
+  );
+}
+
+function SubmitForm({ recipeId, version }: { recipeId: number; version: number }) {
+  const [message, setMessage] = useState('');
+  const submit = useSubmitMutation(recipeId);
+  return (
+    <View style={styles.form}>
+      <FormStatus error={submit.error} />
+      <TextField label="Message to the owners" value={message} onChangeText={setMessage} multiline placeholder="What changed, what to taste for" />
+      <Button label={`Submit version ${version} for review`} busy={submit.isPending} onPress={() => submit.mutate({ version, message })} style={styles.left} />
+    </View>
+  );
+}
+
+/** What an owner sees before deciding: the submitted version's numbers and findings, tastings, and what changed. */
+function Decision({ recipeId, version, approvedVersion }: { recipeId: number; version: number; approvedVersion: number | null }) {
+  const detail = useRecipeQuery(recipeId, version);
+  const evaluation = useRecipeEvaluationQuery(detail.data?.content);
+  const tastings = useTastingsQuery(recipeId);
+  const diff = useRecipeDiffQuery(recipeId, approvedVersion, version);
+  const approve = useApproveMutation(recipeId);
+  const giveBack = useReturnMutation(recipeId);
+  const [comment, setComment] = useState('');
+  const [override, setOverride] = useState('');
+  const dangers = evaluation.data?.carbonation.findings.filter((f) => f.level === 'danger') ?? [];
+  const error = approve.error ?? giveBack.error;
+  return (
+    <View style={styles.form}>
+      <Text variant="subheading">Version {version}, before you decide</Text>
+      {evaluation.data ? (
+        <>
+          <FindingList findings={evaluation.data.carbonation.findings} />
+          <Text variant="small">
+            Allergens: {evaluation.data.allergens.length ? evaluation.data.allergens.join(', ') : 'none recorded'} · cost per bottle:{' '}
+            {evaluation.data.cost.perBottle === null ? 'unknown' : evaluation.data.cost.perBottle.toFixed(3)} · tastings: {tastings.data?.length ?? 0}
+          </Text>
+        </>
+      ) : (
+        <Loading label="Working out its numbers…" />
+      )}
+      {approvedVersion !== null && diff.data ? (
+        <View>
+          <Text variant="label">Changed since approved version {approvedVersion}</Text>
+          {diff.data.length === 0 ? <Text variant="small">Nothing.</Text> : diff.data.map((c, i) => <Text key={i} variant="small">{c.what}: {c.before ?? '—'} → {c.after ?? '—'}</Text>)}
+        </View>
+      ) : null}
+      <FormStatus error={error} />
+      <TextField label="Comment" value={comment} onChangeText={setComment} multiline />
+      {dangers.length > 0 ? (
+        <>
+          <Banner tone="danger" title="A danger finding blocks approval">Approve only if you write why it is acceptable; the reason is recorded.</Banner>
+          <TextField label="Why you approve despite the danger finding" value={override} onChangeText={setOverride} multiline />
+        </>
+      ) : null}
+      <View style={styles.row}>
+        <Button label={`Approve version ${version}`} busy={approve.isPending} onPress={() => approve.mutate({ version, comment, overrideReason: override.trim() || null })} />
+        <Button label="Return with changes" variant="secondary" busy={giveBack.isPending} onPress={() => giveBack.mutate({ version, comment })} />
+      </View>
+    </View>
+  );
+}
+
+function Withdraw({ recipeId }: { recipeId: number }) {
+  const [reason, setReason] = useState('');
+  const withdraw = useWithdrawMutation(recipeId);
+  return (
+    <View style={styles.form}>
+      <FormStatus error={withdraw.error} />
+      <TextField label="Reason to withdraw the approval" value={reason} onChangeText={setReason} />
+      <Button label="Withdraw approval" variant="danger" busy={withdraw.isPending} onPress={() => withdraw.mutate({ reason })} style={styles.left} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  form: { gap: space.md, paddingTop: space.sm },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  event: { gap: space.xxs, paddingBottom: space.sm },
+  left: { alignSelf: 'flex-start' },
+});

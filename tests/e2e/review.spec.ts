@@ -1,0 +1,42 @@
+import { expect, test } from '@playwright/test';
+
+import { openNav, PHONE, shot, signIn, url, WIDE } from './helpers';
+
+test('a developer submits, the owner follows the e-mail and approves, the brewer scales the approved version', async ({ browser }) => {
+  const developer = await (await browser.newContext({ viewport: WIDE })).newPage();
+  await signIn(developer, 'rafi@wrenfield.example', 'wrenfield-developer');
+  await openNav(developer, 'Recipes');
+  await developer.getByRole('link', { name: 'Hedgerow Bramble' }).click();
+  await developer.getByRole('radio', { name: 'Review' }).click();
+  await developer.getByLabel('Message to the owners').fill('Fruit sugar alone gives a gentle fizz.');
+  await developer.getByRole('button', { name: /Submit version \d+ for review/ }).click();
+  await expect(developer.getByText('Waiting for review').first()).toBeVisible();
+
+  const owner = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(owner, 'imogen@wrenfield.example', 'wrenfield-owner');
+  await expect(owner.getByText('Waiting for your review')).toBeVisible();
+  await expect(owner.getByRole('link', { name: 'Hedgerow Bramble' })).toBeVisible();
+  // The owner reads the review e-mail (the outbox stands in for the mail server) and follows its link.
+  const outbox = await owner.request.get(url('/api/outbox'));
+  const { messages } = (await outbox.json()) as { messages: { subject: string; text: string }[] };
+  const mail = messages.find((m) => m.subject.startsWith('Review: Hedgerow Bramble'))!;
+  expect(mail.text).toContain('Fruit sugar alone gives a gentle fizz.');
+  const path = /http:\/\/[^/]+(\/recipes\/\d+)/.exec(mail.text)![1];
+  await owner.goto(url(path));
+  await owner.getByRole('radio', { name: 'Review' }).click();
+  await expect(owner.getByText(/before you decide/)).toBeVisible();
+  await shot(owner, 'phone-owner-review');
+  await owner.getByLabel('Comment').fill('Approved for the December run.');
+  await owner.getByRole('button', { name: /Approve version \d+/ }).click();
+  await expect(owner.getByText('Approved for production').first()).toBeVisible();
+
+  const brewer = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(brewer, 'juno@wrenfield.example', 'wrenfield-brewer');
+  await expect(brewer.getByText('Approved for production')).toBeVisible();
+  await brewer.getByRole('link', { name: 'Hedgerow Bramble' }).click();
+  await expect(brewer.getByText(/approved for production\.$/)).toBeVisible();
+  await brewer.getByLabel('Number of bottles').fill('150');
+  await expect(brewer.getByText(/Batch: 150 bottles of Glass crown cap 473 mL/)).toBeVisible();
+  await expect(brewer.getByText(/^1\. Steep /)).toBeVisible();
+  await shot(brewer, 'phone-brewer-batch');
+});
