@@ -18,6 +18,7 @@ import {
 import { allow, authOf } from '../middleware/access';
 import { validate } from '../middleware/validate';
 import { approveSchema, returnSchema, submitSchema, withdrawSchema, type ApproveInput, type ReturnInput, type SubmitInput, type WithdrawInput } from '../../lib/schemas/reviews';
+import { cardPdf, recipeCard } from '../services/cards';
 import * as recipes from '../services/recipes';
 import * as reviews from '../services/reviews';
 
@@ -113,4 +114,27 @@ recipesRouter.post('/:id/return', allow(['owner']), validate({ params: idParam, 
 
 recipesRouter.post('/:id/withdraw', allow(['owner']), validate({ params: idParam, body: withdrawSchema }), async (_req, res) => {
   res.json(await reviews.withdraw(authOf(res), id(res.locals), res.locals.body as WithdrawInput));
+});
+
+const cardQuery = yup.object({
+  version: yup.number().typeError('Version must be a number.').integer().positive().optional(),
+  kind: yup.string().oneOf(['litres', 'us-gallons', 'bottles'] as const, 'Choose litres, US gallons or bottles.').default('bottles'),
+  value: yup.number().typeError('The batch size must be a number.').positive('The batch size must be more than 0.').max(1000000).required('Give the batch size.'),
+  units: yup.string().oneOf(['metric', 'us'] as const, 'Choose metric or US units.').default('metric'),
+});
+type CardQuery = yup.InferType<typeof cardQuery>;
+const cardOf = (res: Parameters<Parameters<typeof recipesRouter.get>[1]>[1]) => {
+  const q = res.locals.query as CardQuery;
+  return recipeCard(authOf(res), id(res.locals), { version: q.version ?? null, batch: { kind: q.kind, value: q.value }, units: q.units });
+};
+
+recipesRouter.get('/:id/card', allow('signed-in'), validate({ params: idParam, query: cardQuery }), async (_req, res) => {
+  res.json(await cardOf(res));
+});
+
+recipesRouter.get('/:id/card.pdf', allow('signed-in'), validate({ params: idParam, query: cardQuery }), async (_req, res) => {
+  const card = await cardOf(res);
+  res.setHeader('Content-Type', 'application/pdf');
+  res.setHeader('Content-Disposition', `inline; filename="card-${card.code}.pdf"`);
+  cardPdf(card).pipe(res);
 });

@@ -1,0 +1,86 @@
+import { SAFETY_CAUTIONS } from '../chemistry/cautions';
+import { ALLERGEN_LABELS, type Allergen } from '../ingredients';
+import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '../units';
+import type { RecipeContent } from '../schemas/recipes';
+import type { RecipeEvaluation } from './evaluate';
+import type { BatchSize, ScaledRecipe } from './scaling';
+import { batchSteps, formatRounded } from './stages';
+
+/** Everything a printed recipe card or batch sheet shows, in the order it shows it; the web page and the PDF both render this. */
+export interface RecipeCard {
+  brewery: string;
+  recipeName: string;
+  version: number;
+  approval: { by: string | null; at: string; selfApproved: boolean } | null;
+  batch: string;
+  bottles: number;
+  base: string;
+  amounts: { name: string; amount: string }[];
+  steps: string[];
+  checkpoints: string[];
+  keyNumbers: { label: string; value: string }[];
+  allergens: string[];
+  cautions: string[];
+  code: string;
+}
+
+const KIND_LETTER: Record<BatchSize['kind'], string> = { bottles: 'b', litres: 'l', 'us-gallons': 'g' };
+
+/** The short code printed on a card: recipe, version and batch, e.g. "12-3-b150". */
+export function cardCode(recipeId: number, version: number, batch: BatchSize): string {
+  return `${recipeId}-${version}-${KIND_LETTER[batch.kind]}${batch.value}`;
+}
+
+/** Reads a short code back; null when it is not one. */
+export function parseCardCode(code: string): { recipeId: number; version: number; batch: BatchSize } | null {
+  const match = /^(\d+)-(\d+)-([blg])(\d+(?:\.\d+)?)$/i.exec(code.trim());
+  if (!match) return null;
+  const kind = ({ b: 'bottles', l: 'litres', g: 'us-gallons' } as const)[match[3].toLowerCase() as 'b' | 'l' | 'g'];
+  return { recipeId: Number(match[1]), version: Number(match[2]), batch: { kind, value: Number(match[4]) } };
+}
+
+export function buildCard(input: {
+  brewery: string;
+  recipeId: number;
+  recipeName: string;
+  version: number;
+  content: RecipeContent;
+  scaled: ScaledRecipe;
+  bottleName: string;
+  evaluation: RecipeEvaluation;
+  approval: RecipeCard['approval'];
+  batch: BatchSize;
+  units: UnitSystem;
+}): RecipeCard {
+  const { content, scaled, evaluation, units } = input;
+  const c = evaluation.carbonation;
+  const steeped = content.process.method === 'steep-strain';
+  const checkpoints = [
+    'pH of the base before flavouring (4.2 or below): ________',
+    ...(steeped ? ['Sugar reading after straining (°Bx or SG): ________'] : []),
+    'Gauge pressure of a test bottle before cold store: ________',
+    'Lot code: ________',
+    'Initials: ________',
+  ];
+  const temps = c.pressures.map((p, i) => `${evaluation.temperatureNames[i] ?? ''} ${formatTemp(p.tempC, units)}: ${formatPressure(c.cases.worst.gaugeBar[i], units)}`);
+  return {
+    brewery: input.brewery,
+    recipeName: input.recipeName,
+    version: input.version,
+    approval: input.approval,
+    batch: `${formatRounded(scaled.finishedLitres)} of finished drink, ${scaled.bottles} bottles of ${input.bottleName}`,
+    bottles: scaled.bottles,
+    base: `${formatRounded(scaled.baseLitres)} of ${content.baseBrew.name}${scaled.topUpLitres.exact > 0 ? ` (${formatRounded(scaled.topUpLitres)} of it to top up after straining)` : ''}`,
+    amounts: [...scaled.lines, ...scaled.sugars.filter((s) => s.value > 0)].map((r) => ({ name: r.name, amount: formatRounded(r) })),
+    steps: batchSteps(content, scaled, input.bottleName),
+    checkpoints,
+    keyNumbers: [
+      { label: 'Carbonation', value: `${formatNumber(c.cases.worst.co2.totalVolumes, 2)} volumes worst case, ${formatNumber(c.cases.expected.co2.totalVolumes, 2)} expected` },
+      { label: 'Gauge pressure (worst case)', value: temps.join(' · ') },
+      { label: 'Alcohol', value: `${formatNumber(c.cases.worst.alcohol.totalAbvPercent, 2)} % ABV worst case` },
+    ],
+    allergens: evaluation.allergens.map((a: Allergen) => ALLERGEN_LABELS[a]),
+    cautions: [...SAFETY_CAUTIONS],
+    code: cardCode(input.recipeId, input.version, input.batch),
+  };
+}

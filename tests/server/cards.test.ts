@@ -1,0 +1,115 @@
+import zlib from 'node:zlib';
+
+import type { Express } from 'express';
+
+import { cardCode, parseCardCode } from '@/lib/recipes/card';
+import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
+import { importDatasetIngredients } from '@/server/services/ingredients';
+
+import { addMember, signUpOwner, startApp, stopApp, type Agent } from './helpers';
+
+let app: Express;
+let owner: Agent;
+let developer: Agent;
+let brewer: Agent;
+let recipeId: number;
+
+/** The text a PDF shows: every content stream inflated, the hex strings of its TJ/Tj operators decoded. */
+function pdfText(pdf: Buffer): string {
+  const raw = pdf.toString('latin1');
+  const texts: string[] = [];
+  const streams = raw.matchAll(/stream\r?\n([\s\S]*?)\r?\nendstream/g);
+  for (const [, body] of streams) {
+    let content: string;
+    try {
+      content = zlib.inflateSync(Buffer.from(body, 'latin1')).toString('latin1');
+    } catch {
+      continue;
+    }
+    for (const [, ops] of content.matchAll(/\[(.*?)\]\s*TJ/g)) {
+      texts.push([...ops.matchAll(/<([0-9a-fA-F]+)>/g)].map(([, hex]) => Buffer.from(hex, 'hex').toString('latin1')).join(''));
+    }
+  }
+  return texts.join('\n');
+}
+
+beforeAll(async () => {
+  app = await startApp();
+  await importDatasetIngredients(loadStarterIngredients());
+  owner = (await signUpOwner(app)).agent;
+  developer = (await addMember(app, owner, 'developer', 'Dev Eloper')).agent;
+  brewer = (await addMember(app, owner, 'brewer')).agent;
+  const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
+  const strawberry = (await owner.get('/api/ingredients').query({ q: 'strawberries raw' }).expect(200)).body.items.find((i: { name: string }) => i.name === 'Strawberries, raw').id;
+  const content = {
+    baseBrew: { name: 'green tea base', residualSugarGPerL: 0.5, ph: 3.2, abvPercent: 0.05, residualCo2Volumes: null, lastOpenTempC: 21 },
+    lines: [{ ingredientId: strawberry, amount: 40, unit: 'g-per-l', extractionPct: 50 }],
+    sugars: [{ type: 'sucrose', gPerL: 1 }],
+    process: { method: 'steep-strain', steepHours: 24, steepTempC: 4, strainLossPct: 10, carbonateHours: 48, carbonateTempC: 20, coldStoreTempC: 4 },
+    bottleFormatId: formats.find((f) => f.name.includes('sparkling-wine'))!.id,
+    targetVolumes: 2,
+    sweetnessNote: '',
+    highestTempC: 25,
+  };
+  recipeId = (await developer.post('/api/recipes').send({ name: 'Strawberry field', content }).expect(201)).body.id;
+});
+afterAll(stopApp);
+
+describe('card codes', () => {
+  it('carry recipe, version and batch, and read back', () => {
+    expect(cardCode(12, 3, { kind: 'bottles', value: 150 })).toBe('12-3-b150');
+    expect(parseCardCode('12-3-b150')).toEqual({ recipeId: 12, version: 3, batch: { kind: 'bottles', value: 150 } });
+    expect(parseCardCode('12-3-l20.5')).toEqual({ recipeId: 12, version: 3, batch: { kind: 'litres', value: 20.5 } });
+    expect(parseCardCode('nonsense')).toBeNull();
+  });
+});
+
+describe('GET /api/recipes/:id/card', () => {
+  it('marks a draft as not approved, and an approved version with who and when', async () => {
+    const draft = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'bottles', value: 100 }).expect(200);
+    expect(draft.body).toMatchObject({ recipeName: 'Strawberry field', version: 1, approval: null, bottles: 100, code: `${recipeId}-1-b100` });
+    await developer.post(`/api/recipes/${recipeId}/submit`).send({ version: 1 }).expect(200);
+    await owner.post(`/api/recipes/${recipeId}/approve`).send({ version: 1 }).expect(200);
+    const card = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'bottles', value: 100 }).expect(200);
+    expect(card.body.approval).toMatchObject({ by: 'Olwen Test', selfApproved: false });
+    // 100 × 750 mL = 75 L; strawberries 40 g/L → 3000 g → 3.00 kg; sucrose 1 g/L → 75 g.
+    expect(card.body.amounts).toEqual([
+      { name: 'Strawberries, raw', amount: '3.00 kg' },
+      { name: 'Sucrose (table sugar)', amount: '75 g' },
+    ]);
+    expect(card.body.steps[0]).toMatch(/^Steep 3\.00 kg strawberries, raw in 75\.0 L of green tea base at 4 °C for 24 h\.$/);
+    expect(card.body.checkpoints[0]).toMatch(/4\.2 or below/);
+    expect(card.body.cautions.join(' ')).toMatch(/burst/);
+  });
+
+  it('refuses a batch outside sensible limits with a message', async () => {
+    const res = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'litres', value: 0 }).expect(400);
+    expect(res.body.error.fields.value).toBeDefined();
+    const huge = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'litres', value: 900000 }).expect(400);
+    expect(huge.body.error.message).toMatch(/at most 20000 L/);
+  });
+});
+
+describe('GET /api/recipes/:id/card.pdf', () => {
+  it('is a PDF with the same content', async () => {
+    const res = await brewer
+      .get(`/api/recipes/${recipeId}/card.pdf`)
+      .query({ kind: 'bottles', value: 100 })
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const pdf = res.body as Buffer;
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    const text = pdfText(pdf);
+    expect(text).toContain('Strawberry field, version 1');
+    expect(text).toContain('Approved for production by Olwen Test');
+    expect(text).toContain('3.00 kg');
+    expect(text).toContain('pH of the base before flavouring (4.2 or below)');
+    expect(text).toContain(`Card code ${recipeId}-1-b100`);
+  });
+});
