@@ -1,3 +1,4 @@
+import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
@@ -9,7 +10,7 @@ import { batchSteps } from '@/lib/recipes/stages';
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
-import { Banner, Card, NumberField, Segmented, Table, Text, type Column } from '../ui';
+import { Banner, Button, Card, NumberField, Segmented, Table, Text, type Column } from '../ui';
 
 type Kind = 'litres' | 'us-gallons' | 'bottles';
 type Row = Rounded & { name: string };
@@ -30,6 +31,7 @@ export function ScaleView({ recipe, units, productionOnly = false }: { recipe: R
   const valid = value !== undefined && !Number.isNaN(value) && value > 0;
   const request = useDebouncedValue(valid && (!productionOnly || version) ? { batch: { kind, value: value! }, units: system, version } : undefined, 300);
   const content = productionOnly ? approved.data?.content : recipe.content;
+  const router = useRouter();
   const scaled = useScaleQuery(recipeId, request);
   const columns: Column<Row>[] = [
     { key: 'name', header: 'What', flex: 2, render: (r) => r.name },
@@ -48,6 +50,12 @@ export function ScaleView({ recipe, units, productionOnly = false }: { recipe: R
       </Card>
       {scaled.data ? (
         <Card title={`Batch: ${scaled.data.bottles} bottles of ${scaled.data.bottleName}`} aside={<Text variant="small">version {scaled.data.version}</Text>}>
+          <Button
+            label="Print card"
+            variant="secondary"
+            style={styles.left}
+            onPress={() => router.push(`/print/${recipeId}?version=${scaled.data.version}&kind=${kind}&value=${value}&units=${system}`)}
+          />
           <Text>
             Finished drink {show(scaled.data.finishedLitres)} · base brew {show(scaled.data.baseLitres)}
             {scaled.data.topUpLitres.exact > 0 ? ` (of which ${show(scaled.data.topUpLitres)} to top up after straining)` : ''}
@@ -70,5 +78,6 @@ export function ScaleView({ recipe, units, productionOnly = false }: { recipe: R
 
 const styles = StyleSheet.create({
   wrap: { gap: space.lg },
+  left: { alignSelf: 'flex-start' },
   warn: { color: colors.caution, fontFamily: fonts.semibold },
 });

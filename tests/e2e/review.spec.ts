@@ -39,4 +39,23 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await expect(brewer.getByText(/Batch: 150 bottles of Glass crown cap 473 mL/)).toBeVisible();
   await expect(brewer.getByText(/^1\. Steep /)).toBeVisible();
   await shot(brewer, 'phone-brewer-batch');
+
+  // The printed card: the approved version, its approval, the amounts large; on paper only the card.
+  await brewer.getByRole('button', { name: 'Print card' }).click();
+  await expect(brewer.getByText(/Approved for production by Imogen Thale/)).toBeVisible();
+  await expect(brewer.getByText(/^Card code \d+-\d+-b150/)).toBeVisible();
+  const code = /Card code (\S+):/.exec((await brewer.getByText(/^Card code /).textContent())!)![1];
+  await brewer.setViewportSize({ width: 794, height: 1123 });
+  await brewer.emulateMedia({ media: 'print' });
+  await expect(brewer.getByRole('button', { name: 'Print' })).toBeHidden();
+  await expect(brewer.getByText('Checkpoints')).toBeVisible();
+  await shot(brewer, 'print-card-a4');
+  await brewer.emulateMedia({ media: 'screen' });
+
+  // The short code opens the same card on another phone.
+  const other = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(other, 'rafi@wrenfield.example', 'wrenfield-developer');
+  await expect(other.getByRole('heading', { name: 'Hello, Rafi' })).toBeVisible();
+  await other.goto(url(`/c/${code}`));
+  await expect(other.getByRole('heading', { name: /Hedgerow Bramble, version \d+/ })).toBeVisible();
 });

@@ -1,0 +1,89 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { RecipeCard } from '@/lib/recipes/card';
+import { colors, fonts, space } from '@/lib/theme';
+
+import { Text } from '../ui';
+
+/** The card on screen and on paper: large amounts, numbered steps, blanks to fill in by hand. */
+export function RecipeCardView({ card }: { card: RecipeCard }) {
+  return (
+    <View style={styles.card} dataSet={{ printCard: 'yes' }}>
+      <Text variant="small">{card.brewery}</Text>
+      <Text variant="title" level={1}>
+        {card.recipeName}, version {card.version}
+      </Text>
+      {card.approval ? (
+        <Text>
+          Approved for production by {card.approval.by ?? 'an owner'} on {card.approval.at.slice(0, 10)}
+          {card.approval.selfApproved ? ' (the brewery’s only owner, who also submitted it)' : ''}.
+        </Text>
+      ) : (
+        <Text style={styles.notApproved}>NOT APPROVED FOR PRODUCTION: development version.</Text>
+      )}
+      <Text>Batch: {card.batch}.</Text>
+      <Text>Base: {card.base}.</Text>
+      <Section title="Amounts">
+        {card.amounts.map((a) => (
+          <View key={a.name} style={styles.amount}>
+            <Text style={styles.amountValue}>{a.amount}</Text>
+            <Text style={styles.amountName}>{a.name}</Text>
+          </View>
+        ))}
+      </Section>
+      <Section title="Steps">
+        {card.steps.map((s, i) => (
+          <Text key={i}>
+            {i + 1}. {s}
+          </Text>
+        ))}
+      </Section>
+      <Section title="Checkpoints">
+        {card.checkpoints.map((c) => (
+          <Text key={c} style={styles.checkpoint}>
+            {c}
+          </Text>
+        ))}
+      </Section>
+      <Section title="Key numbers">
+        {card.keyNumbers.map((k) => (
+          <Text key={k.label}>
+            {k.label}: {k.value}
+          </Text>
+        ))}
+      </Section>
+      <Section title="Allergens">
+        <Text>{card.allergens.length ? card.allergens.join(', ') : 'None of the major allergens recorded for these ingredients.'}</Text>
+      </Section>
+      <Section title="Cautions">
+        {card.cautions.map((c) => (
+          <Text key={c} variant="small">
+            • {c}
+          </Text>
+        ))}
+      </Section>
+      <Text variant="small">Card code {card.code}: open it in Fizzwright at /c/{card.code}</Text>
+    </View>
+  );
+}
+
+function Section({ title, children }: { title: string; children: React.ReactNode }) {
+  return (
+    <View style={styles.section}>
+      <Text variant="subheading" level={2}>
+        {title}
+      </Text>
+      {children}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { backgroundColor: colors.surface, padding: space.xl, gap: space.sm, borderRadius: 12, borderWidth: 1, borderColor: '#E4DED2' },
+  notApproved: { fontFamily: fonts.bold, color: colors.danger, fontSize: 20 },
+  section: { gap: space.xs, paddingTop: space.md },
+  amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, flexWrap: 'wrap' },
+  amountValue: { fontFamily: fonts.bold, fontSize: 26, lineHeight: 32, minWidth: 130 },
+  amountName: { fontSize: 20, lineHeight: 26 },
+  checkpoint: { fontSize: 18, lineHeight: 32 },
+});

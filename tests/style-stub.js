@@ -1,0 +1,2 @@
+// CSS files are for the web bundle; Jest only needs something to import.
+module.exports = {};
