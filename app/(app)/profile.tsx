@@ -2,8 +2,8 @@ import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { PasswordForm, ProfileForm } from '@/components/profile/ProfileForms';
-import { Badge, Button, Card, Screen, Text } from '@/components/ui';
-import { useChangePasswordMutation, useSessionQuery, useSignOutMutation, useUpdateProfileMutation } from '@/lib/api/session';
+import { Badge, Button, Card, Screen, Segmented, Text } from '@/components/ui';
+import { useChangePasswordMutation, useSessionQuery, useSignOutMutation, useUpdatePreferencesMutation, useUpdateProfileMutation } from '@/lib/api/session';
 import { ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
@@ -13,6 +13,7 @@ export default function ProfileScreen() {
   const update = useUpdateProfileMutation();
   const changePassword = useChangePasswordMutation();
   const signOut = useSignOutMutation();
+  const preferences = useUpdatePreferencesMutation();
   if (!session) return null;
   return (
     <Screen title="Profile" subtitle={session.user.email} maxWidth={720}>
@@ -21,6 +22,17 @@ export default function ProfileScreen() {
       </Card>
       <Card title="Password">
         <PasswordForm error={changePassword.error} saved={changePassword.isSuccess} onSubmit={(values) => changePassword.mutateAsync(values)} />
+      </Card>
+      <Card title="E-mail">
+        <Segmented
+          label="Review e-mails (a recipe submitted for review; your submission approved or returned)"
+          value={session.user.notifyReviews ? 'on' : 'off'}
+          onChange={(value) => preferences.mutate({ notifyReviews: value === 'on' })}
+          options={[
+            { value: 'on', label: 'Send them' },
+            { value: 'off', label: 'Do not send' },
+          ]}
+        />
       </Card>
       <Card title="Session">
         <View style={styles.row}>
