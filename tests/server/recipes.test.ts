@@ -141,3 +141,31 @@ describe('tastings', () => {
     await brewer.post(`/api/recipes/${created.id}/tastings`).send({ tastedOn: '2026-11-30', sweetness: 3, sourness: 3, fizz: 3, flavour: 3 }).expect(403);
   });
 });
+
+describe('who may call the recipe routes', () => {
+  it('gives brewers 403 on every route that changes a recipe, and signed-out callers 401 everywhere', async () => {
+    const { id } = (await create(developer, 'Role table')).body;
+    const changing: [string, string, object][] = [
+      ['post', '/api/recipes', { name: 'x', content }],
+      ['put', `/api/recipes/${id}`, { name: 'x y', baseVersion: 1, content }],
+      ['post', `/api/recipes/${id}/restore`, { version: 1 }],
+      ['post', `/api/recipes/${id}/duplicate`, {}],
+      ['post', `/api/recipes/${id}/archive`, {}],
+      ['post', `/api/recipes/${id}/restore-archived`, {}],
+      ['post', `/api/recipes/${id}/tastings`, { tastedOn: '2026-12-01', sweetness: 3, sourness: 3, fizz: 3, flavour: 3 }],
+      ['post', `/api/recipes/${id}/submit`, { version: 1 }],
+    ];
+    for (const [method, path, body] of changing) {
+      const res = await (brewer as unknown as Record<string, (p: string) => request.Test>)[method](path).send(body);
+      expect([method, path, res.status]).toEqual([method, path, 403]);
+    }
+    const reading = [`/api/recipes`, `/api/recipes/${id}`, `/api/recipes/${id}/versions`, `/api/recipes/${id}/tastings`, `/api/recipes/${id}/review`];
+    for (const path of reading) {
+      expect([path, (await brewer.get(path)).status]).toEqual([path, 200]);
+      expect([path, (await request(app).get(path)).status]).toEqual([path, 401]);
+    }
+    const stranger = await signUpOwner(app);
+    await stranger.agent.get(`/api/recipes/${id}`).expect(404);
+    await stranger.agent.post(`/api/recipes/${id}/scale`).send({ batch: { kind: 'litres', value: 10 } }).expect(404);
+  });
+});
