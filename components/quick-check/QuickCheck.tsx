@@ -6,10 +6,11 @@ import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { useCarbonationQuery } from '@/lib/api/calculations';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { CHART_TEMPERATURES_C, convertQuickCheckValues, initialQuickCheckValues, toCarbonationRequest, type QuickCheckValues } from '@/lib/quick-check';
-import { breakpoints, colors, radius, space } from '@/lib/theme';
-import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
+import { breakpoints, space } from '@/lib/theme';
+import type { UnitSystem } from '@/lib/units';
 
-import { Badge, Banner, Card, Loading, Text } from '../ui';
+import { SummaryStrip } from '../calculations/SummaryStrip';
+import { Banner, Card, Loading } from '../ui';
 import { BrixCard } from './BrixCard';
 import { PrimingHelper } from './PrimingHelper';
 import { QuickCheckInputs } from './QuickCheckInputs';
@@ -51,7 +52,7 @@ function Layout({ units, formats, limitPercent }: Props) {
   useConvertOnUnitChange(units);
   return (
     <View style={[styles.layout, wide && styles.layoutWide]}>
-      {wide ? null : <SummaryStrip units={units} />}
+      {wide ? null : <PhoneSummary units={units} />}
       <View style={[styles.inputs, wide && styles.inputsWide]}>
         <QuickCheckInputs formats={formats} units={units} />
         <PrimingHelper units={units} />
@@ -87,22 +88,9 @@ function useQuickCheckAnswer(units: UnitSystem) {
 }
 
 /** On phones the inputs come first, so the key numbers ride along at the top while the person types. */
-function SummaryStrip({ units }: { units: UnitSystem }) {
+function PhoneSummary({ units }: { units: UnitSystem }) {
   const { answer } = useQuickCheckAnswer(units);
-  if (!answer.data) return null;
-  const worst = answer.data.cases.worst;
-  const temps = answer.data.pressures.map((p) => p.tempC);
-  const hottestIndex = temps.indexOf(Math.max(...temps));
-  const hottest = { tempC: temps[hottestIndex], gaugeBar: worst.gaugeBar[hottestIndex] };
-  const level = answer.data.findings.some((f) => f.level === 'danger') ? 'danger' : answer.data.findings.some((f) => f.level === 'caution') ? 'caution' : 'success';
-  return (
-    <View style={styles.strip} aria-live="polite" role="status">
-      <Badge label={level === 'danger' ? 'Danger' : level === 'caution' ? 'Caution' : 'OK'} tone={level} />
-      <Text style={styles.stripText}>
-        {formatNumber(worst.co2.totalVolumes, 2)} vol · {formatPressure(hottest.gaugeBar, units)} at {formatTemp(hottest.tempC, units)} · {formatNumber(worst.alcohol.totalAbvPercent, 2)} % ABV
-      </Text>
-    </View>
-  );
+  return answer.data ? <SummaryStrip result={answer.data} units={units} /> : null;
 }
 
 function LiveResults({ units, limitPercent }: { units: UnitSystem; limitPercent: number }) {
@@ -126,18 +114,4 @@ const styles = StyleSheet.create({
   inputsWide: { flex: 5, minWidth: 380 },
   results: { gap: space.lg },
   resultsWide: { flex: 6 },
-  strip: {
-    position: 'sticky' as never,
-    top: 0,
-    zIndex: 2,
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: space.sm,
-    padding: space.sm,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  stripText: { flex: 1, fontSize: 15, lineHeight: 20 },
 });

@@ -10,9 +10,10 @@ import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { toContent, toFormValues, type RecipeFormValues } from '@/lib/recipes/form';
 import { processStages } from '@/lib/recipes/stages';
 import { AMOUNT_UNIT_LABELS, METHOD_LABELS, METHODS } from '@/lib/schemas/recipes';
-import { breakpoints, colors, fonts, radius, space } from '@/lib/theme';
-import { formatNumber, formatPressure, type UnitSystem } from '@/lib/units';
+import { breakpoints, fonts, space } from '@/lib/theme';
+import { formatNumber, type UnitSystem } from '@/lib/units';
 
+import { SummaryStrip } from '../calculations/SummaryStrip';
 import { sugarOptions } from '../quick-check/QuickCheckInputs';
 import { Badge, Banner, Button, Card, FormField, Loading, Segmented, Select, Text } from '../ui';
 import { IngredientPicker } from './IngredientPicker';
@@ -71,7 +72,7 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
           <Button label="Save as new version" busy={isSubmitting} disabled={!dirty || !content} onPress={() => handleSubmit()} />
         </View>
       ) : null}
-      {!wide && evaluation.data ? <SummaryStrip evaluation={evaluation.data} units={units} /> : null}
+      {!wide && evaluation.data ? <SummaryStrip result={evaluation.data.carbonation} units={units} /> : null}
       <View style={[styles.layout, wide && styles.layoutWide]}>
         <View style={[styles.column, wide && styles.inputs]}>
           <Parts formats={formats} canEdit={canEdit} />
@@ -101,23 +102,6 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
         </View>
       </View>
       <Text variant="small">Last saved by {recipe.savedBy ?? 'someone'} on {new Date(recipe.savedAt).toLocaleString()}.</Text>
-    </View>
-  );
-}
-
-/** On phones the results come after the parts, so the key numbers ride along at the top. */
-function SummaryStrip({ evaluation, units }: { evaluation: NonNullable<ReturnType<typeof useRecipeEvaluationQuery>['data']>; units: UnitSystem }) {
-  const c = evaluation.carbonation;
-  const worst = c.cases.worst;
-  const temps = c.pressures.map((p) => p.tempC);
-  const hottest = temps.indexOf(Math.max(...temps));
-  const level = c.findings.some((f) => f.level === 'danger') ? 'danger' : c.findings.some((f) => f.level === 'caution') ? 'caution' : 'success';
-  return (
-    <View style={styles.strip} role="status" aria-live="polite">
-      <Badge label={level === 'danger' ? 'Danger' : level === 'caution' ? 'Caution' : 'OK'} tone={level} />
-      <Text style={styles.stripText}>
-        {formatNumber(worst.co2.totalVolumes, 2)} vol · {formatPressure(worst.gaugeBar[hottest], units)} at {formatNumber(temps[hottest], 0)} °C · {formatNumber(worst.alcohol.totalAbvPercent, 2)} % ABV
-      </Text>
     </View>
   );
 }
@@ -253,19 +237,5 @@ const styles = StyleSheet.create({
   line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: '#EDE8DE' },
   lineName: { fontFamily: fonts.semibold },
   left: { alignSelf: 'flex-start' },
-  strip: {
-    position: 'sticky' as never,
-    top: 0,
-    zIndex: 2,
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: space.sm,
-    padding: space.sm,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  stripText: { flex: 1, fontSize: 15, lineHeight: 20 },
   saveBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.md },
 });

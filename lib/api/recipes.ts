@@ -7,18 +7,9 @@ import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, T
 import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '../schemas/reviews';
 import { api } from './client';
 import { staleTimes } from './query-client';
+import type { RecipeDetail, RecipeSummary } from './types';
 
-export interface RecipeSummary {
-  id: number;
-  name: string;
-  flavourNotes: string;
-  status: 'draft' | 'archived';
-  currentVersion: number;
-  submittedVersion: number | null;
-  approvedVersion: number | null;
-  reviewState: ReviewState;
-  updatedAt: string;
-}
+export type { RecipeDetail, RecipeSummary };
 
 export interface ReviewTimeline {
   state: ReviewState;
@@ -26,15 +17,6 @@ export interface ReviewTimeline {
   submittedVersion: number | null;
   approvedVersion: number | null;
   events: { id: number; version: number; action: string; by: string | null; comment: string; overrideReason: string | null; selfApproved: boolean; at: string }[];
-}
-
-export interface RecipeDetail extends Omit<RecipeSummary, 'reviewState'> {
-  version: number;
-  content: RecipeContent;
-  versionNote: string;
-  savedBy: string | null;
-  savedAt: string;
-  ingredientNames: Record<number, string>;
 }
 
 export interface VersionEntry {

@@ -1,6 +1,8 @@
 import type { Allergen, Category, Measure } from '../ingredients';
 import type { Role } from '../roles';
 import type { BottleFormatInput } from '../schemas/bottle-formats';
+import type { RecipeContent } from '../schemas/recipes';
+import type { ReviewState } from '../schemas/reviews';
 import type { UnitSystem } from '../units';
 
 /** The uniform error body every API error carries. */
@@ -113,4 +115,28 @@ export interface Attachment {
   uploadedBy: string | null;
   createdAt: string;
   url: string;
+}
+
+export interface RecipeSummary {
+  id: number;
+  name: string;
+  flavourNotes: string;
+  status: 'draft' | 'archived';
+  currentVersion: number;
+  submittedVersion: number | null;
+  /** The version production uses, if one is approved. */
+  approvedVersion: number | null;
+  /** Where the newest version stands in review. */
+  reviewState: ReviewState;
+  updatedAt: string;
+}
+
+/** One version of a recipe with its content (the newest unless another was asked for). */
+export interface RecipeDetail extends Omit<RecipeSummary, 'reviewState'> {
+  version: number;
+  content: RecipeContent;
+  versionNote: string;
+  savedBy: string | null;
+  savedAt: string;
+  ingredientNames: Record<number, string>;
 }

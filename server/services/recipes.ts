@@ -5,36 +5,12 @@ import { evaluateRecipe, type IngredientFacts, type RecipeEvaluation } from '../
 import { scaleRecipe, type ScaledRecipe } from '../../lib/recipes/scaling';
 import { SUGARS } from '../../lib/chemistry/sugars';
 import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../../lib/schemas/recipes';
-import type { ReviewState } from '../../lib/schemas/reviews';
+import type { RecipeDetail, RecipeSummary } from '../../lib/api/types';
 import { Ingredient, Recipe, RecipeReview, RecipeVersion, sequelize, Tasting, User } from '../db';
 import { badRequest, HttpError, notFound } from '../errors';
 import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
 import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
-
-export interface RecipeSummary {
-  id: number;
-  name: string;
-  flavourNotes: string;
-  status: 'draft' | 'archived';
-  currentVersion: number;
-  submittedVersion: number | null;
-  /** The version production uses, if one is approved. */
-  approvedVersion: number | null;
-  /** Where the newest version stands in review. */
-  reviewState: ReviewState;
-  updatedAt: string;
-}
-
-export interface RecipeDetail extends RecipeSummary {
-  /** The version this detail shows (the newest unless another was asked for). */
-  version: number;
-  content: RecipeContent;
-  versionNote: string;
-  savedBy: string | null;
-  savedAt: string;
-  ingredientNames: Record<number, string>;
-}
 
 const summary = (r: Recipe, returnedCurrent = false): RecipeSummary => ({
   id: r.id,
@@ -103,8 +79,9 @@ async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<R
   if (!version) throw notFound('No such version of this recipe.');
   const ids = version.content.lines.map((l) => l.ingredientId);
   const names = ids.length ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
+  const { reviewState: _state, ...head } = summary(recipe);
   return {
-    ...summary(recipe),
+    ...head,
     version: version.number,
     name: version.name,
     flavourNotes: version.flavourNotes,
