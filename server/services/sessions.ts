@@ -65,14 +65,34 @@ export function signSessionToken(user: Pick<User, 'id' | 'tokenVersion'>): strin
   return jwt.sign(claims, signingKey, { algorithm: 'HS256', expiresIn: config.sessionTtlSeconds });
 }
 
-/** Checks a session token and the account behind it. Returns null for anything that is not a valid session. */
-export async function authenticateToken(token: string): Promise<AuthContext | null> {
-  let claims: TokenClaims;
+/**
+ * Tokens already verified, by their exact text: verifying the same string again can only give the same claims, so
+ * only the expiry is checked on a repeat. Bounded; the oldest entries go first.
+ */
+const verified = new Map<string, TokenClaims & { exp: number }>();
+const VERIFIED_MAX = 5000;
+
+function verifyToken(token: string): TokenClaims | null {
+  const known = verified.get(token);
+  if (known) {
+    if (known.exp * 1000 > Date.now()) return known;
+    verified.delete(token);
+    return null;
+  }
   try {
-    claims = jwt.verify(token, signingKey, { algorithms: ['HS256'] }) as TokenClaims;
+    const claims = jwt.verify(token, signingKey, { algorithms: ['HS256'] }) as TokenClaims & { exp: number };
+    if (verified.size >= VERIFIED_MAX) verified.delete(verified.keys().next().value as string);
+    verified.set(token, claims);
+    return claims;
   } catch {
     return null;
   }
+}
+
+/** Checks a session token and the account behind it. Returns null for anything that is not a valid session. */
+export async function authenticateToken(token: string): Promise<AuthContext | null> {
+  const claims = verifyToken(token);
+  if (!claims) return null;
   const userId = Number(claims.sub);
   if (!Number.isInteger(userId)) return null;
   const user = await lookUpUser(userId);
