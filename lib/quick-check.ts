@@ -1,6 +1,7 @@
 import * as yup from 'yup';
 
 import type { SugarType } from './chemistry/sugars';
+import { parseNumber as parse } from './forms';
 import { carbonationSchema, primingSchema, type CarbonationRequest, type PrimingRequest } from './schemas/calculations';
 import { convertUnit, displayUnits, type UnitSystem } from './units';
 
@@ -49,13 +50,6 @@ export function initialQuickCheckValues(units: UnitSystem): QuickCheckValues {
 }
 
 const formatInput = (value: number, digits: number) => String(Number(value.toFixed(digits)));
-
-/** Text to number: empty stays empty (the schema names it), a comma decimal is accepted, anything else is NaN. */
-function parse(text: string): number | undefined {
-  const trimmed = text.trim().replace(',', '.');
-  if (trimmed === '') return undefined;
-  return /^-?\d*\.?\d+$|^-?\d+\.$/.test(trimmed) ? Number(trimmed) : Number.NaN;
-}
 
 /** Where each API field's message shows in the form. */
 const FIELD_OF: Record<string, keyof QuickCheckValues | string> = {

@@ -6,7 +6,7 @@ import { useRecipeQuery, useScaleQuery, type RecipeDetail } from '@/lib/api/reci
 import { parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import type { Rounded } from '@/lib/recipes/scaling';
-import { batchSteps } from '@/lib/recipes/stages';
+import { batchSteps, formatRounded, resolutionDigits } from '@/lib/recipes/stages';
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
@@ -15,8 +15,7 @@ import { Banner, Button, Card, NumberField, Segmented, Table, Text, type Column 
 type Kind = 'litres' | 'us-gallons' | 'bottles';
 type Row = Rounded & { name: string };
 
-const digits = (r: Rounded) => Math.max(0, -Math.floor(Math.log10(r.resolution) + 1e-9));
-const show = (r: Rounded) => `${formatNumber(r.value, digits(r))} ${r.unit}`;
+const show = formatRounded;
 
 /** The recipe at batch size: every amount rounded to what a scale reads, with the rounding shown. */
 export function ScaleView({ recipe, units, productionOnly = false }: { recipe: RecipeDetail; units: UnitSystem; productionOnly?: boolean }) {
@@ -36,7 +35,7 @@ export function ScaleView({ recipe, units, productionOnly = false }: { recipe: R
   const columns: Column<Row>[] = [
     { key: 'name', header: 'What', flex: 2, render: (r) => r.name },
     { key: 'amount', header: 'Amount', render: (r) => <Text style={r.warn ? styles.warn : undefined}>{show(r)}</Text> },
-    { key: 'exact', header: 'Exact', render: (r) => `${formatNumber(r.exact, digits(r) + 2)} ${r.unit}` },
+    { key: 'exact', header: 'Exact', render: (r) => `${formatNumber(r.exact, resolutionDigits(r.resolution) + 2)} ${r.unit}` },
     { key: 'rounding', header: 'Rounded to', render: (r) => `${r.resolution} ${r.unit}${r.warn ? ` · ${formatNumber(r.offPct, 1)} % off` : ''}` },
   ];
   return (

@@ -16,6 +16,8 @@ export class ApiError extends Error {
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
+const NETWORK_MESSAGE = 'Cannot reach the Fizzwright server. Check your connection and try again.';
+
 /**
  * Calls the API. The session travels in an httpOnly cookie (`credentials: 'include'`), so scripts never hold it.
  * Resolves with the parsed JSON (undefined for 204) or throws an ApiError.
@@ -33,8 +35,13 @@ export async function apiRequest<T>(path: string, options: { method?: Method; bo
     });
   } catch (error) {
     if ((error as Error).name === 'AbortError') throw error;
-    throw new ApiError(0, 'network', 'Cannot reach the Fizzwright server. Check your connection and try again.');
+    throw new ApiError(0, 'network', NETWORK_MESSAGE);
   }
+  return readResponse<T>(response);
+}
+
+/** The body of an answer, or the ApiError its uniform error body describes. */
+async function readResponse<T>(response: Response): Promise<T> {
   if (response.status === 204) return undefined as T;
   const text = await response.text();
   let parsed: unknown;
@@ -50,6 +57,7 @@ export async function apiRequest<T>(path: string, options: { method?: Method; bo
   return parsed as T;
 }
 
+
 /** Sends one file as multipart form data (the browser sets the boundary). */
 async function upload<T>(path: string, file: Blob, name: string): Promise<T> {
   const form = new FormData();
@@ -58,14 +66,9 @@ async function upload<T>(path: string, file: Blob, name: string): Promise<T> {
   try {
     response = await fetch(`${env.apiUrl}/api${path}`, { method: 'POST', credentials: 'include', body: form, headers: { Accept: 'application/json' } });
   } catch {
-    throw new ApiError(0, 'network', 'Cannot reach the Fizzwright server. Check your connection and try again.');
+    throw new ApiError(0, 'network', NETWORK_MESSAGE);
   }
-  const parsed = (await response.json().catch(() => undefined)) as (T & ErrorBody) | undefined;
-  if (!response.ok) {
-    const error = parsed?.error;
-    throw new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.fields);
-  }
-  return parsed as T;
+  return readResponse<T>(response);
 }
 
 export const api = {

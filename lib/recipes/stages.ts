@@ -1,4 +1,5 @@
 import type { RecipeContent } from '../schemas/recipes';
+import { formatNumber } from '../units';
 
 export interface Stage {
   title: string;
@@ -31,21 +32,19 @@ export function processStages(content: RecipeContent): Stage[] {
   return stages;
 }
 
+/** The usual process: a two-day cold steep (when steeped), three days' carbonating at 22 °C, cold store at 4 °C. */
+export function defaultProcess(method: RecipeContent['process']['method'], strainLossPct = 10): RecipeContent['process'] {
+  const steep = method === 'steep-strain';
+  return { method, steepHours: steep ? 48 : 0, steepTempC: 4, strainLossPct: steep ? strainLossPct : 0, carbonateHours: 72, carbonateTempC: 22, coldStoreTempC: 4 };
+}
+
 /** A sensible new recipe: a 473 mL bottle's worth of defaults a developer then changes. */
 export function defaultContent(bottleFormatId: number, method: RecipeContent['process']['method']): RecipeContent {
   return {
     baseBrew: { name: 'House base', residualSugarGPerL: 0, ph: null, abvPercent: 0.1, residualCo2Volumes: null, lastOpenTempC: 22 },
     lines: [],
     sugars: [{ type: 'sucrose', gPerL: 0 }],
-    process: {
-      method,
-      steepHours: method === 'steep-strain' ? 48 : 0,
-      steepTempC: 4,
-      strainLossPct: method === 'steep-strain' ? 10 : 0,
-      carbonateHours: 72,
-      carbonateTempC: 22,
-      coldStoreTempC: 4,
-    },
+    process: defaultProcess(method),
     bottleFormatId,
     targetVolumes: 2.5,
     sweetnessNote: '',
@@ -53,10 +52,12 @@ export function defaultContent(bottleFormatId: number, method: RecipeContent['pr
   };
 }
 
+/** Decimals that show a rounding resolution: 0.01 → 2, 5 → 0. */
+export const resolutionDigits = (resolution: number) => Math.max(0, -Math.floor(Math.log10(resolution) + 1e-9));
+
 /** An amount as written on a batch sheet, e.g. "5.68 kg" (the rounding resolution decides the decimals). */
 export function formatRounded(r: { value: number; unit: string; resolution: number }): string {
-  const digits = Math.max(0, -Math.floor(Math.log10(r.resolution) + 1e-9));
-  return `${r.value.toFixed(digits)} ${r.unit}`;
+  return `${formatNumber(r.value, resolutionDigits(r.resolution))} ${r.unit}`;
 }
 
 interface ScaledParts {

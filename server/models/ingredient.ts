@@ -1,18 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 import type { Allergen, Category, Measure } from '../../lib/ingredients';
+import { jsonColumn } from './json-column';
 import type { Organisation } from './organisation';
-
-const jsonText = <T>(field: string) => ({
-  type: DataTypes.TEXT,
-  allowNull: false,
-  get(this: Model): T {
-    return JSON.parse((this.getDataValue(field as never) as string | null) ?? '[]') as T;
-  },
-  set(this: Model, value: T) {
-    this.setDataValue(field as never, JSON.stringify(value) as never);
-  },
-});
 
 /**
  * An ingredient with its composition per 100 g. Dataset rows (organisationId null) come from an open dataset and
@@ -57,8 +47,8 @@ export class Ingredient extends Model<InferAttributes<Ingredient>, InferCreation
         proteinG: { type: DataTypes.FLOAT, allowNull: true },
         fermentableShare: { type: DataTypes.FLOAT, allowNull: false },
         steepShare: { type: DataTypes.FLOAT, allowNull: false },
-        allergens: jsonText<Allergen[]>('allergens'),
-        measures: jsonText<Measure[]>('measures'),
+        allergens: jsonColumn<Allergen[]>('allergens', { empty: '[]' }),
+        measures: jsonColumn<Measure[]>('measures', { empty: '[]' }),
         costPerKg: { type: DataTypes.FLOAT, allowNull: true },
         notes: { type: DataTypes.TEXT, allowNull: true },
         sourceDataset: { type: DataTypes.STRING(60), allowNull: true },
@@ -88,16 +78,7 @@ export class IngredientChange extends Model<InferAttributes<IngredientChange>, I
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         userId: { type: DataTypes.INTEGER, allowNull: true },
         action: { type: DataTypes.STRING(20), allowNull: false },
-        changes: {
-          type: DataTypes.TEXT,
-          allowNull: false,
-          get(this: IngredientChange) {
-            return JSON.parse((this.getDataValue('changes') as unknown as string) ?? '{}') as Record<string, [unknown, unknown]>;
-          },
-          set(this: IngredientChange, value: Record<string, [unknown, unknown]>) {
-            this.setDataValue('changes', JSON.stringify(value) as never);
-          },
-        },
+        changes: jsonColumn<Record<string, [unknown, unknown]>>('changes', { empty: '{}' }),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

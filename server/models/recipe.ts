@@ -1,21 +1,8 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 import type { RecipeContent, TastingInput } from '../../lib/schemas/recipes';
+import { jsonColumn } from './json-column';
 import type { Organisation } from './organisation';
-
-function jsonColumn<T>(field: string, allowNull = false) {
-  return {
-    type: DataTypes.TEXT,
-    allowNull,
-    get(this: Model): T {
-      const raw = this.getDataValue(field as never) as string | null;
-      return (raw === null ? null : JSON.parse(raw)) as T;
-    },
-    set(this: Model, value: T) {
-      this.setDataValue(field as never, (value === null ? null : JSON.stringify(value)) as never);
-    },
-  };
-}
 
 /** A flavour of the brewery; its content lives in versions, the newest being `currentVersion`. */
 export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttributes<Recipe>> {
@@ -110,7 +97,7 @@ export class Tasting extends Model<InferAttributes<Tasting>, InferCreationAttrib
         sourness: { type: DataTypes.INTEGER, allowNull: false },
         fizz: { type: DataTypes.INTEGER, allowNull: false },
         flavour: { type: DataTypes.INTEGER, allowNull: false },
-        sugarAddition: jsonColumn<TastingInput['sugarAddition']>('sugarAddition', true),
+        sugarAddition: jsonColumn<TastingInput['sugarAddition']>('sugarAddition', { allowNull: true }),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

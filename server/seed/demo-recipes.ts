@@ -1,3 +1,4 @@
+import { defaultProcess } from '../../lib/recipes/stages';
 import type { RecipeContent, TastingInput } from '../../lib/schemas/recipes';
 import { BottleFormat, Ingredient, Organisation, Recipe, User } from '../db';
 import { logger } from '../logger';
@@ -38,15 +39,7 @@ const base = (over: Partial<RecipeContent['baseBrew']> = {}): RecipeContent['bas
   ...over,
 });
 
-const process = (method: 'in-bottle' | 'steep-strain'): RecipeContent['process'] => ({
-  method,
-  steepHours: method === 'steep-strain' ? 48 : 0,
-  steepTempC: 4,
-  strainLossPct: method === 'steep-strain' ? 12 : 0,
-  carbonateHours: 72,
-  carbonateTempC: 22,
-  coldStoreTempC: 4,
-});
+const process = (method: 'in-bottle' | 'steep-strain') => defaultProcess(method, 12);
 
 /** The invented Wrenfield flavours: two steeped, two flavoured in the bottle, at different stages of development. */
 const RECIPES: DemoRecipe[] = [
