@@ -1,12 +1,13 @@
 import cookieParser from 'cookie-parser';
 import cors from 'cors';
-import express, { Router, type Express } from 'express';
+import express, { Router, type Express, type RequestHandler } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 
 import { config } from './config';
 import { logger } from './logger';
-import { apiNotFound, errorHandler, requireJsonBody } from './middleware/errors';
+import { apiNotFound, errorHandler } from './middleware/errors';
+import { sameOriginOnly } from './middleware/same-origin';
 import { authRouter } from './routes/auth';
 import { benchRouter } from './routes/bench';
 import { bottleFormatsRouter } from './routes/bottle-formats';
@@ -37,13 +38,25 @@ export function apiRouter(): Router {
   return api;
 }
 
+/** Answers of the API are about one person at one moment: no browser or proxy keeps them. */
+const noStore: RequestHandler = (_req, res, next) => {
+  res.setHeader('Cache-Control', 'no-store');
+  next();
+};
+
+/** A request's URL for the logs, with one-time link tokens (in a query or an invitation path) hidden. */
+export function redactUrl(url: string): string {
+  return url.replace(/([?&]token=)[^&#]*/gi, '$1[hidden]').replace(/(\/invitations\/)(?!\d+(?:\/|$))[^/?#]+/g, '$1[hidden]');
+}
+
 /** Builds the Express app (API under /api plus the exported web app) without listening. */
 export function createApp(): Express {
   const app = express();
   app.disable('x-powered-by');
   // API answers are computed per request and never revalidated; hashing every body for an ETag is wasted work.
   app.set('etag', false);
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-* headers are believed only when TRUST_PROXY says which proxy sends them.
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       // The exported app loads its fonts and images from this origin; RN Web injects style rules at run time.
@@ -56,14 +69,16 @@ export function createApp(): Express {
       pinoHttp({
         logger,
         autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
+        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: redactUrl(req.url) }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
       }),
     );
   }
 
   const api = Router();
-  if (config.env === 'development') api.use(cors({ origin: config.corsOrigins, credentials: true }));
-  api.use(requireJsonBody);
+  // Only `npm run dev` names other origins (the Expo dev server); `npm start` answers its own pages only.
+  if (config.corsOrigins.length > 0) api.use(cors({ origin: config.corsOrigins, credentials: true }));
+  api.use(noStore);
+  api.use(sameOriginOnly);
   api.use(express.json({ limit: '200kb' }));
   api.use(cookieParser());
   api.use(apiRouter());

@@ -12,20 +12,24 @@ const envSchema = yup.object({
   PORT: yup.number().integer().min(0).max(65535).default(8080),
   HOST: yup.string().default('0.0.0.0'),
   DATABASE_PATH: yup.string().default('data/fizzwright.sqlite'),
-  JWT_SECRET: yup.string().min(16, 'JWT_SECRET must have at least 16 characters.'),
+  JWT_SECRET: yup.string().min(32, 'JWT_SECRET must have at least 32 characters (for example: openssl rand -hex 32).'),
   APP_URL: yup.string().url('APP_URL must be a URL such as http://localhost:8080.'),
   SMTP_URL: yup.string().default(''),
   MAIL_FROM: yup.string().default('Fizzwright <no-reply@fizzwright.local>'),
   BCRYPT_COST: yup.number().integer().min(4).max(15).default(12),
   AUTH_RATE_LIMIT: yup.number().integer().min(1).default(30),
-  OUTBOX_OPEN: yup.boolean(),
-  SEED_DEMO: yup.boolean().default(true),
+  AUTH_ACCOUNT_RATE_LIMIT: yup.number().integer().min(1).default(10),
+  AUTH_RESPONSE_FLOOR_MS: yup.number().integer().min(0).max(5000),
+  TRUST_PROXY: yup.string().default('false'),
+  OUTBOX_OPEN: yup.boolean().default(false),
+  SEED_DEMO: yup.boolean(),
   NUTRIENT_DATA_DIR: yup.string().default('../shared/data/usda-sr25'),
   LOG_LEVEL: yup.string().oneOf(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']),
-  CORS_ORIGINS: yup.string().default('http://localhost:8081'),
+  CORS_ORIGINS: yup.string().default(''),
   BENCH_ROUTES: yup.boolean().default(false),
   UPLOADS_DIR: yup.string().default('data/uploads'),
   UPLOAD_MAX_MB: yup.number().positive().max(100).default(10),
+  UPLOAD_QUOTA_MB: yup.number().positive().default(500),
 });
 
 export interface Config {
@@ -34,7 +38,10 @@ export interface Config {
   port: number;
   host: string;
   databasePath: string;
-  jwtSecret: string;
+  /** JWT_SECRET when set; otherwise the session secret is generated once and kept in `sessionSecretFile`. */
+  jwtSecret: string | null;
+  /** Where a generated session secret is kept: beside the database, mode 0600. */
+  sessionSecretFile: string;
   /** Session lifetime in seconds (12 h). */
   sessionTtlSeconds: number;
   /** Public address used in e-mail links. Without APP_URL it follows the port the server listens on. */
@@ -44,7 +51,16 @@ export interface Config {
   mailFrom: string;
   bcryptCost: number;
   authRateLimitPerMinute: number;
-  /** True when anyone may read the local outbox, signed in or not (development only). */
+  /** Attempts per account (e-mail address, link or signed-in person) in 15 minutes, on top of the per-address limit. */
+  authAccountRateLimit: number;
+  /**
+   * Sign-up and forgot-password answer no sooner than this, so the time taken does not tell whether an address has
+   * an account. Above the slowest path (a bcrypt hash at the configured cost plus the e-mail).
+   */
+  authResponseFloorMs: number;
+  /** Express's `trust proxy`: false (default) ignores X-Forwarded-* headers; true, a hop count or addresses trust them. */
+  trustProxy: boolean | number | string;
+  /** True when anyone may read the local outbox, signed in or not (`npm run dev` only). */
   outboxOpen: boolean;
   seedDemo: boolean;
   nutrientDataDir: string;
@@ -55,9 +71,17 @@ export interface Config {
   benchRoutes: boolean;
   uploadsDir: string;
   uploadMaxBytes: number;
+  /** What one brewery may keep in attached files, in bytes. */
+  uploadQuotaBytes: number;
 }
 
-const DEV_SECRET = 'fizzwright-development-secret-not-for-production';
+/** TRUST_PROXY as Express reads it: a boolean, a number of hops, or a list of addresses and subnets. */
+function parseTrustProxy(value: string): boolean | number | string {
+  if (/^(false|0|no|)$/i.test(value.trim())) return false;
+  if (/^(true|yes)$/i.test(value.trim())) return true;
+  if (/^\d+$/.test(value.trim())) return Number(value);
+  return value.trim();
+}
 
 /** Reads and validates the environment once. Throws with every problem listed when something is off. */
 export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
@@ -70,17 +94,16 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     throw new Error(`Configuration is not valid:\n  ${problems}`);
   }
   const nodeEnv = parsed.NODE_ENV as Config['env'];
-  if (nodeEnv === 'production' && !parsed.JWT_SECRET) {
-    throw new Error('Configuration is not valid:\n  JWT_SECRET is required when NODE_ENV=production.');
-  }
   const port = parsed.PORT;
+  const databasePath = path.resolve(ROOT_DIR, parsed.DATABASE_PATH);
   return {
     env: nodeEnv,
     version: pkg.version,
     port,
     host: parsed.HOST,
-    databasePath: path.resolve(ROOT_DIR, parsed.DATABASE_PATH),
-    jwtSecret: parsed.JWT_SECRET ?? DEV_SECRET,
+    databasePath,
+    jwtSecret: parsed.JWT_SECRET ?? null,
+    sessionSecretFile: path.join(path.dirname(databasePath), 'session-secret'),
     sessionTtlSeconds: 12 * 60 * 60,
     appUrl: (parsed.APP_URL ?? `http://localhost:${port}`).replace(/\/$/, ''),
     appUrlConfigured: Boolean(parsed.APP_URL),
@@ -88,8 +111,12 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     mailFrom: parsed.MAIL_FROM,
     bcryptCost: parsed.BCRYPT_COST,
     authRateLimitPerMinute: parsed.AUTH_RATE_LIMIT,
-    outboxOpen: parsed.OUTBOX_OPEN ?? nodeEnv === 'development',
-    seedDemo: parsed.SEED_DEMO,
+    authAccountRateLimit: parsed.AUTH_ACCOUNT_RATE_LIMIT,
+    authResponseFloorMs: parsed.AUTH_RESPONSE_FLOOR_MS ?? (parsed.BCRYPT_COST >= 12 ? 1000 : 250),
+    trustProxy: parseTrustProxy(parsed.TRUST_PROXY),
+    outboxOpen: parsed.OUTBOX_OPEN,
+    // Demo accounts have published passwords: never in production unless asked for by name.
+    seedDemo: parsed.SEED_DEMO ?? nodeEnv !== 'production',
     nutrientDataDir: path.resolve(ROOT_DIR, parsed.NUTRIENT_DATA_DIR),
     logLevel: parsed.LOG_LEVEL ?? (nodeEnv === 'test' ? 'silent' : 'info'),
     corsOrigins: parsed.CORS_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean),
@@ -97,6 +124,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     benchRoutes: parsed.BENCH_ROUTES,
     uploadsDir: path.resolve(ROOT_DIR, parsed.UPLOADS_DIR),
     uploadMaxBytes: Math.round(parsed.UPLOAD_MAX_MB * 1024 * 1024),
+    uploadQuotaBytes: Math.round(parsed.UPLOAD_QUOTA_MB * 1024 * 1024),
   };
 }
 

@@ -1,3 +1,4 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
 import fs from 'node:fs';
 import path from 'node:path';
 
@@ -14,12 +15,22 @@ import { Invitation } from './models/invitation';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
 import { PasswordReset } from './models/password-reset';
+import { PendingSignUp } from './models/pending-sign-up';
 import { Recipe, RecipeReview, RecipeVersion, Tasting } from './models/recipe';
+import { RevokedSession } from './models/revoked-session';
 import { User } from './models/user';
 import { forgetBrewery } from './services/brewery-cache';
 import { forgetCachedUser } from './services/sessions';
 
-export { Attachment, BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, Recipe, RecipeReview, RecipeVersion, Tasting, User };
+export { Attachment, BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, PendingSignUp, Recipe, RecipeReview, RecipeVersion, RevokedSession, Tasting, User };
+
+/** How long a connection waits for another one's write lock before SQLite gives up with SQLITE_BUSY. */
+const BUSY_TIMEOUT_MS = 10_000;
+
+interface SqliteHandle {
+  configure(option: 'busyTimeout', ms: number): void;
+  run(sql: string): void;
+}
 
 function createSequelize(databasePath: string): Sequelize {
   if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
@@ -35,7 +46,43 @@ function createSequelize(databasePath: string): Sequelize {
 
 export const sequelize = createSequelize(config.databasePath);
 
-for (const model of [Organisation, User, Invitation, PasswordReset, OutboxMessage, BottleFormat, Ingredient, IngredientChange, Attachment, Recipe, RecipeVersion, Tasting, RecipeReview]) model.initModel(sequelize);
+/**
+ * Sequelize's SQLite dialect opens a new connection for every transaction and sets nothing on it but foreign keys.
+ * Every connection it opens gets the busy timeout and the same journal settings here, so a write that meets another
+ * one's lock waits for its turn instead of failing at once with SQLITE_BUSY.
+ */
+const connections = sequelize.connectionManager as unknown as { getConnection(options?: object): Promise<SqliteHandle> };
+const openConnection = connections.getConnection.bind(connections);
+const configured = new WeakSet<SqliteHandle>();
+connections.getConnection = async (options?: object) => {
+  const connection = await openConnection(options);
+  if (!configured.has(connection)) {
+    connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+    connection.run('PRAGMA foreign_keys = ON');
+    connection.run('PRAGMA synchronous = NORMAL');
+    configured.add(connection);
+  }
+  return connection;
+};
+
+const inTurn = new AsyncLocalStorage<true>();
+let lastTurn: Promise<unknown> = Promise.resolve();
+
+/**
+ * Runs a write transaction when its turn comes: one at a time in this process, in the order asked. SQLite lets one
+ * writer in at a time anyway; queueing here means twenty people saving at once wait a few milliseconds each rather
+ * than race for the lock. Use this, never `sequelize.transaction`, for every write transaction. Not re-entrant:
+ * a transaction that starts another inside itself is a programming error and throws.
+ */
+export function transaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
+  if (inTurn.getStore()) return Promise.reject(new Error('A write transaction cannot start another one inside itself.'));
+  const run = () => inTurn.run(true, () => sequelize.transaction(work));
+  const result = lastTurn.then(run, run);
+  lastTurn = result.catch(() => undefined);
+  return result;
+}
+
+for (const model of [Organisation, User, Invitation, PasswordReset, PendingSignUp, RevokedSession, OutboxMessage, BottleFormat, Ingredient, IngredientChange, Attachment, Recipe, RecipeVersion, Tasting, RecipeReview]) model.initModel(sequelize);
 
 Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
 User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -76,7 +123,7 @@ BottleFormat.addHook('afterBulkUpdate', () => forgetBrewery());
 export async function prepareDatabase(): Promise<void> {
   await sequelize.query('PRAGMA foreign_keys = ON');
   await sequelize.query('PRAGMA journal_mode = WAL');
-  await sequelize.query('PRAGMA busy_timeout = 5000');
+  await sequelize.query(`PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`);
   await sequelize.query('PRAGMA synchronous = NORMAL');
   const umzug = new Umzug({
     migrations,

@@ -4,6 +4,8 @@ import { createApp } from './app';
 import { config } from './config';
 import { prepareDatabase } from './db';
 import { logger } from './logger';
+import { removeOrphanUploads } from './services/attachments';
+import { redactExpiredLinks } from './services/outbox';
 import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
 import { seedDemoRecipesIfEmpty } from './seed/demo-recipes';
 import { seedIngredientsIfEmpty } from './seed/ingredients';
@@ -11,6 +13,9 @@ import { seedIngredientsIfEmpty } from './seed/ingredients';
 /** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
 export async function main(): Promise<number> {
   await prepareDatabase();
+  await removeOrphanUploads();
+  await redactExpiredLinks();
+  // The demo passwords are published in the README: printed only when the accounts were just made.
   if (config.seedDemo && (await seedDemoIfEmpty())) console.log(`\n${demoAccountsText()}\n`);
   const ingredients = await seedIngredientsIfEmpty();
   if (ingredients) console.log(ingredients);

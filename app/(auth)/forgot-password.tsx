@@ -1,13 +1,15 @@
+import { useState } from 'react';
 import { View } from 'react-native';
 
 import { ForgotPasswordForm } from '@/components/auth/EmailForm';
-import { formStyles } from '@/components/auth/form-styles';
+import { NoMailNotice } from '@/components/auth/NoMailNotice';
 import { Banner, Text, TextLink } from '@/components/ui';
 import { useForgotPasswordMutation, useServerInfoQuery } from '@/lib/api/session';
 
 export default function ForgotPasswordScreen() {
   const request = useForgotPasswordMutation();
   const serverInfo = useServerInfoQuery();
+  const [email, setEmail] = useState('');
   return (
     <>
       <View>
@@ -21,16 +23,15 @@ export default function ForgotPasswordScreen() {
           {request.data.message}
         </Banner>
       ) : (
-        <ForgotPasswordForm error={request.error} onSubmit={(values) => request.mutateAsync(values)} />
+        <ForgotPasswordForm
+          error={request.error}
+          onSubmit={(values) => {
+            setEmail(values.email);
+            return request.mutateAsync(values);
+          }}
+        />
       )}
-      {request.isSuccess && serverInfo.data?.outboxOpen ? (
-        <Banner tone="info" title="No mail server here">
-          <View style={formStyles.row}>
-            <Text>This server keeps e-mail in its</Text>
-            <TextLink href="/outbox">Mail outbox</TextLink>
-          </View>
-        </Banner>
-      ) : null}
+      <NoMailNotice serverInfo={serverInfo.data} email={email} purpose="choose a new password" />
       <TextLink href="/sign-in">Back to sign in</TextLink>
     </>
   );

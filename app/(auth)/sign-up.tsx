@@ -1,26 +1,40 @@
-import { useRouter } from 'expo-router';
+import { useState } from 'react';
 import { View } from 'react-native';
 
 import { formStyles } from '@/components/auth/form-styles';
+import { NoMailNotice } from '@/components/auth/NoMailNotice';
 import { SignUpForm } from '@/components/auth/SignUpForm';
-import { Text, TextLink } from '@/components/ui';
-import { useSignUpMutation } from '@/lib/api/session';
+import { Banner, Text, TextLink } from '@/components/ui';
+import { useServerInfoQuery, useSignUpMutation } from '@/lib/api/session';
 
 export default function SignUpScreen() {
-  const router = useRouter();
   const signUp = useSignUpMutation();
+  const serverInfo = useServerInfoQuery();
+  const [email, setEmail] = useState('');
   return (
     <>
       <View>
         <Text variant="heading" level={1}>
           Create a brewery account
         </Text>
-        <Text variant="muted">You will be its owner, and can invite your team next.</Text>
+        <Text variant="muted">You will be its owner, and can invite your team next. We first confirm your e-mail address.</Text>
       </View>
-      <SignUpForm error={signUp.error} onSubmit={async (values) => {
-        await signUp.mutateAsync(values);
-        router.replace('/');
-      }} />
+      {signUp.isSuccess ? (
+        <>
+          <Banner tone="success" title="Check your e-mail">
+            {`${signUp.data.message} It went to ${email}.`}
+          </Banner>
+          <NoMailNotice serverInfo={serverInfo.data} email={email} purpose="confirm the sign-up" />
+        </>
+      ) : (
+        <SignUpForm
+          error={signUp.error}
+          onSubmit={(values) => {
+            setEmail(values.email);
+            return signUp.mutateAsync(values);
+          }}
+        />
+      )}
       <View style={formStyles.row}>
         <Text variant="muted">Already have an account?</Text>
         <TextLink href="/sign-in">Sign in</TextLink>

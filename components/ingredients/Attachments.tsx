@@ -1,7 +1,8 @@
 import * as DocumentPicker from 'expo-document-picker';
+import { useState } from 'react';
 import { Linking, StyleSheet, View } from 'react-native';
 
-import { useAttachmentsQuery, useUploadAttachmentMutation } from '@/lib/api/ingredients';
+import { useAttachmentsQuery, useDeleteAttachmentMutation, useUploadAttachmentMutation } from '@/lib/api/ingredients';
 import { env } from '@/lib/env';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
@@ -14,6 +15,9 @@ const ACCEPTED = ['application/pdf', 'image/jpeg', 'image/png'];
 export function Attachments({ ingredientId, canUpload }: { ingredientId: number; canUpload: boolean }) {
   const list = useAttachmentsQuery(ingredientId, true);
   const upload = useUploadAttachmentMutation(ingredientId);
+  const remove = useDeleteAttachmentMutation(ingredientId);
+  // Deleting asks once more, on the same row: the file cannot be brought back.
+  const [confirming, setConfirming] = useState<number | null>(null);
   const pick = async () => {
     const result = await DocumentPicker.getDocumentAsync({ type: ACCEPTED, multiple: false, base64: false, copyToCacheDirectory: false });
     const asset = result.canceled ? null : result.assets[0];
@@ -23,7 +27,7 @@ export function Attachments({ ingredientId, canUpload }: { ingredientId: number;
   };
   return (
     <Card title="Spec sheets and label photos">
-      <FormStatus error={upload.error} />
+      <FormStatus error={upload.error ?? remove.error} />
       {list.data && list.data.length === 0 ? <Text variant="muted">No files yet.</Text> : null}
       {list.data?.map((a) => (
         <View key={a.id} style={styles.row}>
@@ -31,6 +35,21 @@ export function Attachments({ ingredientId, canUpload }: { ingredientId: number;
           <Text variant="small">
             {formatNumber(a.sizeBytes / 1024, 0)} KB · {a.uploadedBy ?? 'someone'} · {new Date(a.createdAt).toLocaleDateString()}
           </Text>
+          {canUpload && confirming !== a.id ? (
+            <Button label="Delete" accessibleName={`Delete ${a.name}`} variant="quiet" onPress={() => setConfirming(a.id)} />
+          ) : null}
+          {canUpload && confirming === a.id ? (
+            <>
+              <Button
+                label="Delete for good"
+                accessibleName={`Delete ${a.name} for good`}
+                variant="danger"
+                busy={remove.isPending}
+                onPress={() => remove.mutate(a.id, { onSettled: () => setConfirming(null) })}
+              />
+              <Button label="Keep" variant="quiet" onPress={() => setConfirming(null)} />
+            </>
+          ) : null}
         </View>
       ))}
       {canUpload ? (

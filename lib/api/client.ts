@@ -77,5 +77,6 @@ export const api = {
   post: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'POST', body: body ?? {} }),
   patch: <T>(path: string, body: unknown) => apiRequest<T>(path, { method: 'PATCH', body }),
   put: <T>(path: string, body: unknown) => apiRequest<T>(path, { method: 'PUT', body }),
-  delete: <T>(path: string) => apiRequest<T>(path, { method: 'DELETE' }),
+  // The server takes only JSON bodies on requests that change something, an empty one included.
+  delete: <T>(path: string) => apiRequest<T>(path, { method: 'DELETE', body: {} }),
 };

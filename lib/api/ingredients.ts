@@ -85,3 +85,12 @@ export function useUploadAttachmentMutation(ingredientId: number) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['ingredients', 'attachments', ingredientId] }),
   });
 }
+
+/** Deletes an attached file (owners and developers); the file itself goes too. */
+export function useDeleteAttachmentMutation(ingredientId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (attachmentId: number) => api.delete<void>(`/attachments/${attachmentId}`),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['ingredients', 'attachments', ingredientId] }),
+  });
+}

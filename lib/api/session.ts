@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { AcceptInvitationInput, ForgotPasswordInput, ResetPasswordInput, SignInInput, SignUpInput } from '../schemas/auth';
+import type { AcceptInvitationInput, ConfirmSignUpInput, ForgotPasswordInput, ResetPasswordInput, SignInInput, SignUpInput } from '../schemas/auth';
 import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '../schemas/team';
 import { api, ApiError } from './client';
 import { staleTimes } from './query-client';
@@ -50,9 +50,14 @@ export function useSignInMutation() {
   return useMutation({ mutationFn: (input: SignInInput) => api.post<Session>('/auth/sign-in', input), onSuccess: start });
 }
 
+/** Starts a sign-up; the account exists once the link e-mailed to the address is followed. */
 export function useSignUpMutation() {
+  return useMutation({ mutationFn: (input: SignUpInput) => api.post<{ message: string }>('/auth/sign-up', input) });
+}
+
+export function useConfirmSignUpMutation() {
   const start = useReplaceSession();
-  return useMutation({ mutationFn: (input: SignUpInput) => api.post<Session>('/auth/sign-up', input), onSuccess: start });
+  return useMutation({ mutationFn: (input: ConfirmSignUpInput) => api.post<Session>('/auth/confirm-sign-up', input), onSuccess: start });
 }
 
 export function useSignOutMutation() {

@@ -21,6 +21,9 @@ export const signUpSchema = yup.object({
 });
 export type SignUpInput = yup.InferType<typeof signUpSchema>;
 
+export const confirmSignUpSchema = yup.object({ token: token() });
+export type ConfirmSignUpInput = yup.InferType<typeof confirmSignUpSchema>;
+
 export const forgotPasswordSchema = yup.object({ email: email() });
 export type ForgotPasswordInput = yup.InferType<typeof forgotPasswordSchema>;
 

@@ -13,6 +13,8 @@ export interface MailMessage {
   kind: string;
   organisationId: number | null;
   userId?: number | null;
+  /** The one-time link the message carries: its text is redacted in the outbox once the link no longer works. */
+  link?: { tokenHash: string; expiresAt: Date };
 }
 
 /**
@@ -37,6 +39,8 @@ class Mailer {
         subject: message.subject,
         text: message.text,
         html: message.html ?? null,
+        linkTokenHash: message.link?.tokenHash ?? null,
+        linkExpiresAt: message.link?.expiresAt ?? null,
       });
       logger.info({ kind: message.kind, outbox: true }, 'mail stored in the local outbox');
       return;

@@ -10,12 +10,12 @@ interface Rendered {
 const escapeHtml = (value: string) =>
   value.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
 
-function render(subject: string, paragraphs: string[], link: { url: string; label: string }, footer: string): Rendered {
-  const text = [...paragraphs, '', `${link.label}: ${link.url}`, '', footer, '', '— Fizzwright'].join('\n');
+function render(subject: string, paragraphs: string[], link: { url: string; label: string } | null, footer: string): Rendered {
+  const text = [...paragraphs, ...(link ? ['', `${link.label}: ${link.url}`] : []), '', footer, '', '— Fizzwright'].join('\n');
   const html = [
     '<div style="font-family:sans-serif;color:#1B2422;max-width:560px">',
     ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
-    `<p><a href="${escapeHtml(link.url)}" style="background:#1E4A43;color:#fff;padding:10px 16px;border-radius:8px;text-decoration:none">${escapeHtml(link.label)}</a></p>`,
+    ...(link ? [`<p><a href="${escapeHtml(link.url)}" style="background:#1E4A43;color:#fff;padding:10px 16px;border-radius:8px;text-decoration:none">${escapeHtml(link.label)}</a></p>`] : []),
     `<p style="color:#4E5A57;font-size:13px">${escapeHtml(footer)}</p>`,
     '</div>',
   ].join('\n');
@@ -33,8 +33,40 @@ export function invitationMail(input: { breweryName: string; inviterName: string
   );
 }
 
+/** The link that finishes a sign-up: the brewery and its owner exist only once the address is confirmed. */
+export function confirmSignUpUrl(token: string): string {
+  return `${config.appUrl}/confirm-sign-up?token=${encodeURIComponent(token)}`;
+}
+
+export function resetPasswordUrl(token: string): string {
+  return `${config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
+}
+
+export function signUpConfirmationMail(input: { name: string; breweryName: string; token: string }): Rendered {
+  return render(
+    `Confirm your address to create ${input.breweryName} on Fizzwright`,
+    [`Hello ${input.name},`, `Follow the link to confirm this address and create the brewery account for ${input.breweryName}. You will be its owner.`],
+    { url: confirmSignUpUrl(input.token), label: 'Confirm and create the account' },
+    'This link works once and expires in 24 hours. If you did not sign up, ignore this message: nothing is created.',
+  );
+}
+
+/** Sent instead of a confirmation when the address already has an account, so a sign-up never tells who has one. */
+export function signUpAttemptMail(input: { name: string }): Rendered {
+  return render(
+    'Someone tried to sign up with your address',
+    [
+      `Hello ${input.name},`,
+      'Someone (perhaps you) tried to create a new Fizzwright brewery account with this e-mail address. It already has an account, so nothing was created.',
+      'If it was you, sign in instead; if you forgot your password, ask for a reset link on the sign-in page.',
+    ],
+    { url: `${config.appUrl}/sign-in`, label: 'Sign in' },
+    'If it was not you, you can ignore this message: your account is unchanged.',
+  );
+}
+
 export function passwordResetMail(input: { name: string; token: string }): Rendered {
-  const url = `${config.appUrl}/reset-password?token=${encodeURIComponent(input.token)}`;
+  const url = resetPasswordUrl(input.token);
   return render(
     'Reset your Fizzwright password',
     [`Hello ${input.name},`, 'Someone (we hope you) asked to reset the password of your Fizzwright account.'],

@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 
 import type { Role } from '../../lib/roles';
-import { forbidden, unauthorized } from '../errors';
+import { forbidden, HttpError, unauthorized } from '../errors';
 import { authenticateToken, SESSION_COOKIE, type AuthContext } from '../services/sessions';
 
 /** Who may call a route: anyone, any signed-in member, or members with one of the listed roles. */
@@ -18,19 +18,36 @@ declare global {
 /** Marks the middleware made by `allow`, so a test can prove every route declares its access. */
 export const ACCESS = Symbol('access');
 
-function tokenFrom(req: Parameters<RequestHandler>[0]): string | undefined {
+export function tokenFrom(req: Parameters<RequestHandler>[0]): string | undefined {
   const cookie = (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
   if (cookie) return cookie;
   const header = req.headers.authorization;
   return header?.startsWith('Bearer ') ? header.slice(7) : undefined;
 }
 
+const CHANGES = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
 /**
- * The first handler of every API route. Checks the session (signature, expiry, account still active, password
- * not changed since) and the role, and puts who is asking on `res.locals.auth`.
+ * What a state-changing route takes as its body: JSON everywhere, multipart only where a route says so. A body
+ * of any other type is refused, even an empty one, so a plain HTML form on another site can never reach a route.
  */
-export function allow(access: Access): RequestHandler {
+function assertBodyType(req: Parameters<RequestHandler>[0], accepts: 'json' | 'multipart'): void {
+  if (!CHANGES.has(req.method)) return;
+  if (accepts === 'multipart' ? req.is('multipart/form-data') : req.is('application/json')) return;
+  throw new HttpError(
+    415,
+    'unsupported_media_type',
+    accepts === 'multipart' ? 'Send the file as multipart/form-data.' : 'Send the request body as JSON (Content-Type: application/json), even when it is empty ({}).',
+  );
+}
+
+/**
+ * The first handler of every API route. Checks the body's type, the session (signature, expiry, not signed out,
+ * account still active, password not changed since) and the role, and puts who is asking on `res.locals.auth`.
+ */
+export function allow(access: Access, options: { accepts?: 'json' | 'multipart' } = {}): RequestHandler {
   const handler: RequestHandler = async (req, res, next) => {
+    assertBodyType(req, options.accepts ?? 'json');
     if (access === 'public') return next();
     const token = tokenFrom(req);
     const auth = token ? await authenticateToken(token) : null;

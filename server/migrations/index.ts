@@ -6,6 +6,7 @@ import * as ingredients from './0003-ingredients';
 import * as attachments from './0004-attachments';
 import * as recipes from './0005-recipes';
 import * as reviews from './0006-reviews';
+import * as secureDefaults from './0007-secure-defaults';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -20,4 +21,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0004-attachments', ...attachments },
   { name: '0005-recipes', ...recipes },
   { name: '0006-reviews', ...reviews },
+  { name: '0007-secure-defaults', ...secureDefaults },
 ];

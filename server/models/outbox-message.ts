@@ -15,6 +15,9 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare subject: string;
   declare text: string;
   declare html: string | null;
+  /** SHA-256 of the token of the one-time link the message carries, so its text can be redacted once it no longer works. */
+  declare linkTokenHash: CreationOptional<string | null>;
+  declare linkExpiresAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -28,6 +31,8 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         subject: { type: DataTypes.STRING(200), allowNull: false },
         text: { type: DataTypes.TEXT, allowNull: false },
         html: { type: DataTypes.TEXT, allowNull: true },
+        linkTokenHash: { type: DataTypes.STRING(64), allowNull: true },
+        linkExpiresAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,54 +1,79 @@
+import { setTimeout as sleep } from 'node:timers/promises';
+
 import { Router, type Response } from 'express';
-import { rateLimit } from 'express-rate-limit';
 
 import {
   acceptInvitationSchema,
+  confirmSignUpSchema,
   forgotPasswordSchema,
   invitationTokenParams,
   resetPasswordSchema,
   signInSchema,
   signUpSchema,
   type AcceptInvitationInput,
+  type ConfirmSignUpInput,
   type ForgotPasswordInput,
   type ResetPasswordInput,
   type SignInInput,
   type SignUpInput,
 } from '../../lib/schemas/auth';
 import { config } from '../config';
-import { HttpError } from '../errors';
-import { allow, authOf } from '../middleware/access';
+import { allow, authOf, tokenFrom } from '../middleware/access';
+import { accountKeys, perAccountLimit, perAddressLimit } from '../middleware/rate-limits';
 import { validate } from '../middleware/validate';
 import * as auth from '../services/auth';
-import { SESSION_COOKIE, sessionCookieOptions, signSessionToken } from '../services/sessions';
+import { revokeToken, SESSION_COOKIE, sessionCookieOptions, signSessionToken } from '../services/sessions';
 import type { User } from '../models/user';
 
 export const authRouter = Router();
 
-const limiter = rateLimit({
-  windowMs: 60_000,
-  limit: config.authRateLimitPerMinute,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many attempts. Wait a minute and try again.')),
-});
+const byAddress = perAddressLimit();
+const limits = {
+  signIn: perAccountLimit('sign-in', accountKeys.email, { countSuccess: false }),
+  signUp: perAccountLimit('sign-up', accountKeys.email),
+  forgot: perAccountLimit('forgot', accountKeys.email),
+  reset: perAccountLimit('reset', accountKeys.bodyToken),
+  confirm: perAccountLimit('confirm', accountKeys.bodyToken),
+  accept: perAccountLimit('accept', accountKeys.bodyToken),
+  preview: perAccountLimit('preview', accountKeys.paramToken),
+};
 
 function startSession(res: Response, user: User): void {
   res.cookie(SESSION_COOKIE, signSessionToken(user), sessionCookieOptions());
 }
 
-authRouter.post('/sign-up', allow('public'), limiter, validate({ body: signUpSchema }), async (_req, res) => {
-  const { user, session } = await auth.signUp(res.locals.body as SignUpInput);
+/** Runs work and answers no sooner than the floor, so the time taken does not tell whether an address has an account. */
+async function atLeastFloor<T>(work: () => Promise<T>): Promise<T> {
+  const started = Date.now();
+  try {
+    return await work();
+  } finally {
+    const left = config.authResponseFloorMs - (Date.now() - started);
+    if (left > 0) await sleep(left);
+  }
+}
+
+authRouter.post('/sign-up', allow('public'), byAddress, limits.signUp, validate({ body: signUpSchema }), async (_req, res) => {
+  await atLeastFloor(() => auth.signUp(res.locals.body as SignUpInput));
+  res.status(202).json({ message: 'Check your e-mail: we sent a link to finish creating the brewery account. It works for 24 hours.' });
+});
+
+authRouter.post('/confirm-sign-up', allow('public'), byAddress, limits.confirm, validate({ body: confirmSignUpSchema }), async (_req, res) => {
+  const { user, session } = await auth.confirmSignUp((res.locals.body as ConfirmSignUpInput).token);
   startSession(res, user);
   res.status(201).json(session);
 });
 
-authRouter.post('/sign-in', allow('public'), limiter, validate({ body: signInSchema }), async (_req, res) => {
+authRouter.post('/sign-in', allow('public'), byAddress, limits.signIn, validate({ body: signInSchema }), async (_req, res) => {
   const { user, session } = await auth.signIn(res.locals.body as SignInInput);
   startSession(res, user);
   res.json(session);
 });
 
-authRouter.post('/sign-out', allow('public'), (_req, res) => {
+/** Ends this session on the server too: the same token is refused from now on, even if someone kept a copy. */
+authRouter.post('/sign-out', allow('public'), async (req, res) => {
+  const token = tokenFrom(req);
+  if (token) await revokeToken(token);
   const { maxAge: _maxAge, ...options } = sessionCookieOptions();
   res.clearCookie(SESSION_COOKIE, options);
   res.status(204).end();
@@ -58,22 +83,22 @@ authRouter.get('/session', allow('signed-in'), async (_req, res) => {
   res.json(await auth.sessionFor(authOf(res).userId));
 });
 
-authRouter.post('/forgot-password', allow('public'), limiter, validate({ body: forgotPasswordSchema }), async (_req, res) => {
-  await auth.requestPasswordReset((res.locals.body as ForgotPasswordInput).email);
+authRouter.post('/forgot-password', allow('public'), byAddress, limits.forgot, validate({ body: forgotPasswordSchema }), async (_req, res) => {
+  await atLeastFloor(() => auth.requestPasswordReset((res.locals.body as ForgotPasswordInput).email));
   res.status(202).json({ message: 'If an account uses this address, a reset link is on its way. It works for 1 hour.' });
 });
 
-authRouter.post('/reset-password', allow('public'), limiter, validate({ body: resetPasswordSchema }), async (_req, res) => {
+authRouter.post('/reset-password', allow('public'), byAddress, limits.reset, validate({ body: resetPasswordSchema }), async (_req, res) => {
   const { user, session } = await auth.resetPassword(res.locals.body as ResetPasswordInput);
   startSession(res, user);
   res.json(session);
 });
 
-authRouter.get('/invitations/:token', allow('public'), limiter, validate({ params: invitationTokenParams }), async (_req, res) => {
+authRouter.get('/invitations/:token', allow('public'), byAddress, limits.preview, validate({ params: invitationTokenParams }), async (_req, res) => {
   res.json(await auth.previewInvitation((res.locals.params as { token: string }).token));
 });
 
-authRouter.post('/accept-invitation', allow('public'), limiter, validate({ body: acceptInvitationSchema }), async (_req, res) => {
+authRouter.post('/accept-invitation', allow('public'), byAddress, limits.accept, validate({ body: acceptInvitationSchema }), async (_req, res) => {
   const { user, session } = await auth.acceptInvitation(res.locals.body as AcceptInvitationInput);
   startSession(res, user);
   res.status(201).json(session);

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import * as yup from 'yup';
 
@@ -48,13 +48,25 @@ ingredientsRouter.post('/:id/restore', allow(EDITORS), validate({ params: idPara
   res.json(await ingredients.setHouseIngredientArchived(authOf(res), id(res.locals), false));
 });
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.uploadMaxBytes, files: 1 } });
+/**
+ * One file in the field "file" and nothing much else: every part, field and header is bounded, so a request of
+ * hundreds of large text fields is refused before it fills memory.
+ */
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: config.uploadMaxBytes, files: 1, fields: 5, fieldSize: 8 * 1024, fieldNameSize: 100, parts: 6, headerPairs: 50 },
+});
+
+/** Multer's and busboy's errors (limits, a truncated body, no boundary) are the sender's: never a 500. */
+const receiveFile: RequestHandler = (req, res, next) => {
+  upload.single('file')(req, res, (error: unknown) => next(error ? attachments.uploadError(error) : undefined));
+};
 
 ingredientsRouter.get('/:id/attachments', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
   res.json(await attachments.listAttachments(authOf(res), id(res.locals)));
 });
 
-ingredientsRouter.post('/:id/attachments', allow(EDITORS), validate({ params: idParam }), upload.single('file'), async (req, res) => {
+ingredientsRouter.post('/:id/attachments', allow(EDITORS, { accepts: 'multipart' }), validate({ params: idParam }), receiveFile, async (req, res) => {
   res.status(201).json(await attachments.addAttachment(authOf(res), id(res.locals), req.file));
 });
 
@@ -65,6 +77,10 @@ attachmentsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }),
   const file = await attachments.attachmentFile(authOf(res), id(res.locals));
   res.setHeader('Content-Type', file.mimeType);
   res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/"/g, '')}"`);
-  res.setHeader('Cache-Control', 'private, max-age=3600');
   res.sendFile(file.path);
+});
+
+attachmentsRouter.delete('/:id', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
+  await attachments.deleteAttachment(authOf(res), id(res.locals));
+  res.status(204).end();
 });

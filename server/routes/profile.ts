@@ -11,6 +11,7 @@ import {
   type ProfileInput,
 } from '../../lib/schemas/team';
 import { allow, authOf } from '../middleware/access';
+import { accountKeys, perAccountLimit, perAddressLimit } from '../middleware/rate-limits';
 import { validate } from '../middleware/validate';
 import { sessionFor } from '../services/auth';
 import { changePassword, updateOrganisation, updatePreferences, updateProfile } from '../services/profile';
@@ -34,7 +35,9 @@ organisationRouter.patch('/', allow(['owner']), validate({ body: organisationSch
   res.json(await updateOrganisation(auth.organisationId, auth.userId, res.locals.body as OrganisationInput));
 });
 
-profileRouter.post('/password', allow('signed-in'), validate({ body: changePasswordSchema }), async (_req, res) => {
+const passwordChanges = [perAddressLimit(), perAccountLimit('password-change', accountKeys.signedIn)];
+
+profileRouter.post('/password', allow('signed-in'), ...passwordChanges, validate({ body: changePasswordSchema }), async (_req, res) => {
   const user = await changePassword(authOf(res).userId, res.locals.body as ChangePasswordInput);
   // Other sessions end with the password change; this one goes on with a fresh token.
   res.cookie(SESSION_COOKIE, signSessionToken(user), sessionCookieOptions());

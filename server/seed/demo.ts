@@ -1,4 +1,4 @@
-import { Organisation, sequelize, User } from '../db';
+import { Organisation, transaction, User } from '../db';
 import { logger } from '../logger';
 import { seedStarterFormats } from '../services/bottle-formats';
 import { hashPassword } from '../services/passwords';
@@ -18,7 +18,7 @@ export const DEMO_ACCOUNTS = [
 export async function seedDemoIfEmpty(): Promise<boolean> {
   if ((await Organisation.count()) > 0) return false;
   const hashes = await Promise.all(DEMO_ACCOUNTS.map((account) => hashPassword(account.password)));
-  await sequelize.transaction(async (transaction) => {
+  await transaction(async (transaction) => {
     const brewery = await Organisation.create({ name: DEMO_BREWERY }, { transaction });
     await seedStarterFormats(brewery.id, transaction);
     for (const [i, account] of DEMO_ACCOUNTS.entries()) {

@@ -4,8 +4,9 @@ import path from 'node:path';
 
 import type { Attachment } from '../../lib/api/types';
 import { config } from '../config';
-import { Attachment as AttachmentRow, User } from '../db';
-import { badRequest, forbidden, notFound } from '../errors';
+import { Attachment as AttachmentRow, transaction, User } from '../db';
+import { badRequest, forbidden, HttpError, notFound } from '../errors';
+import { logger } from '../logger';
 import { visibleIngredient } from './ingredients';
 import type { AuthContext } from './sessions';
 
@@ -40,24 +41,82 @@ export async function addAttachment(auth: AuthContext, ingredientId: number, fil
   const type = sniffFileType(file.buffer);
   if (!type) throw badRequest('Attach a PDF, JPEG or PNG file.', { file: 'This file is not a PDF, JPEG or PNG (checked by its content, not its name).' });
   const storedName = `${crypto.randomBytes(16).toString('hex')}.${type.ext}`;
-  fs.mkdirSync(config.uploadsDir, { recursive: true });
-  await fs.promises.writeFile(path.join(config.uploadsDir, storedName), file.buffer, { flag: 'wx' });
   const originalName = path.basename(file.originalname).replace(/[^\w .()-]+/g, '_').slice(0, 200) || `file.${type.ext}`;
+  const filePath = path.join(config.uploadsDir, storedName);
   try {
-    const created = await AttachmentRow.create({
-      organisationId: auth.organisationId,
-      ingredientId: ingredient.id,
-      uploadedById: auth.userId,
-      storedName,
-      originalName,
-      mimeType: type.mime,
-      sizeBytes: file.buffer.length,
+    // The quota is checked and the row written in one write transaction, so two uploads at once cannot both pass.
+    const created = await transaction(async (t) => {
+      const used = (await AttachmentRow.sum('sizeBytes', { where: { organisationId: auth.organisationId }, transaction: t })) ?? 0;
+      if (used + file.buffer.length > config.uploadQuotaBytes) throw quotaFull(used);
+      fs.mkdirSync(config.uploadsDir, { recursive: true });
+      await fs.promises.writeFile(filePath, file.buffer, { flag: 'wx' });
+      return AttachmentRow.create(
+        {
+          organisationId: auth.organisationId,
+          ingredientId: ingredient.id,
+          uploadedById: auth.userId,
+          storedName,
+          originalName,
+          mimeType: type.mime,
+          sizeBytes: file.buffer.length,
+        },
+        { transaction: t },
+      );
     });
     return toDto(await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }));
   } catch (error) {
-    await fs.promises.rm(path.join(config.uploadsDir, storedName), { force: true });
+    await fs.promises.rm(filePath, { force: true });
     throw error;
   }
+}
+
+const megabytes = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+
+function quotaFull(usedBytes: number): HttpError {
+  return new HttpError(
+    413,
+    'quota_full',
+    `Your brewery's file storage is full: ${megabytes(usedBytes)} of ${megabytes(config.uploadQuotaBytes)} used. Delete files you no longer need, or ask whoever runs the server to raise UPLOAD_QUOTA_MB.`,
+    { file: 'No room left for this file.' },
+  );
+}
+
+/** Turns an error of the multipart reader into the sender's error: 413 past a limit, 400 otherwise, naming the file. */
+export function uploadError(error: unknown): HttpError {
+  if (error instanceof HttpError) return error;
+  const code = (error as { code?: string }).code;
+  if (code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'too_large', `The file is too large: at most ${megabytes(config.uploadMaxBytes)}.`, { file: 'This file is too large.' });
+  if (code?.startsWith('LIMIT_')) return new HttpError(413, 'too_large', 'Send one file, in the field "file", with no other large fields.', { file: 'Too many or too large parts.' });
+  return new HttpError(400, 'invalid_upload', 'The upload could not be read (it may have been cut off). Send one file, in the field "file".', { file: 'Send one file.' });
+}
+
+/** Deletes an attached file of the brewery: its row and the file itself. */
+export async function deleteAttachment(auth: AuthContext, id: number): Promise<void> {
+  const storedName = await transaction(async (t) => {
+    const attachment = await AttachmentRow.findOne({ where: { id, organisationId: auth.organisationId }, transaction: t });
+    if (!attachment) throw notFound('No such file.');
+    await attachment.destroy({ transaction: t });
+    return attachment.storedName;
+  });
+  await fs.promises.rm(path.join(config.uploadsDir, storedName), { force: true });
+}
+
+/**
+ * Removes files in the uploads folder that no row points at (left by a crash between writing the file and its
+ * row). Run at start, before any upload can be in flight. Answers how many it removed.
+ */
+export async function removeOrphanUploads(): Promise<number> {
+  let names: string[];
+  try {
+    names = await fs.promises.readdir(config.uploadsDir);
+  } catch {
+    return 0;
+  }
+  const known = new Set((await AttachmentRow.findAll({ attributes: ['storedName'] })).map((a) => a.storedName));
+  const orphans = names.filter((name) => /^[0-9a-f]{32}\.(pdf|png|jpg)$/.test(name) && !known.has(name));
+  for (const name of orphans) await fs.promises.rm(path.join(config.uploadsDir, name), { force: true });
+  if (orphans.length > 0) logger.info({ removed: orphans.length }, 'uploads without a record removed');
+  return orphans.length;
 }
 
 export async function listAttachments(auth: AuthContext, ingredientId: number): Promise<AttachmentDto[]> {

@@ -2,46 +2,71 @@ import { Op } from 'sequelize';
 
 import type { InvitationPreview, Session } from '../../lib/api/types';
 import type { AcceptInvitationInput, ResetPasswordInput, SignInInput, SignUpInput } from '../../lib/schemas/auth';
-import { Invitation, Organisation, PasswordReset, sequelize, User } from '../db';
+import { Invitation, Organisation, PasswordReset, PendingSignUp, transaction, User } from '../db';
 import { conflict, gone, HttpError, notFound } from '../errors';
 import { mailer } from '../mail/mailer';
-import { passwordResetMail } from '../mail/templates';
+import { confirmSignUpUrl, passwordResetMail, resetPasswordUrl, signUpAttemptMail, signUpConfirmationMail } from '../mail/templates';
 import { seedStarterFormats } from './bottle-formats';
+import { redactUsedLink } from './outbox';
 import { checkPassword, decoyPasswordHash, hashPassword } from './passwords';
 import { invitationStatus, toSession } from './serialize';
 import { hashToken, HOUR_MS, newOneTimeToken } from './tokens';
 
-const WRONG_CREDENTIALS = 'That e-mail and password do not match an account.';
+/** One answer for an unknown address, a wrong password and a deactivated account, so none can be told apart. */
+const WRONG_CREDENTIALS = 'That e-mail and password do not match an account. If your account was deactivated, ask an owner of your brewery.';
 
-async function emailTaken(email: string): Promise<boolean> {
-  return (await User.count({ where: { email } })) > 0;
-}
+/** How long a sign-up confirmation link works. */
+const SIGN_UP_TTL_MS = 24 * HOUR_MS;
 
-/** Creates a brewery and its first user, its owner. Returns the new user for signing in. */
-export async function signUp(input: SignUpInput): Promise<{ user: User; session: Session }> {
-  if (await emailTaken(input.email)) {
-    throw conflict('An account with this e-mail already exists. Sign in instead.', { email: 'An account with this e-mail already exists.' });
-  }
+/**
+ * Starts a sign-up. The brewery and its owner are created when the address is confirmed (`confirmSignUp`). When the
+ * address already has an account, that address is told by e-mail instead and nothing is created; the caller's answer
+ * is the same either way, and so is the work (one password hash, one stored message).
+ */
+export async function signUp(input: SignUpInput): Promise<void> {
   const passwordHash = await hashPassword(input.password);
-  return sequelize.transaction(async (transaction) => {
-    const organisation = await Organisation.create({ name: input.breweryName }, { transaction });
-    await seedStarterFormats(organisation.id, transaction);
-    const user = await User.create(
-      { organisationId: organisation.id, email: input.email, name: input.name, role: 'owner', passwordHash },
-      { transaction },
-    );
-    await user.reload({ transaction });
-    await organisation.reload({ transaction });
-    return { user, session: toSession(user, organisation) };
-  });
+  const existing = await User.findOne({ where: { email: input.email } });
+  if (existing) {
+    const mail = signUpAttemptMail({ name: existing.name });
+    await mailer.send({ ...mail, to: existing.email, kind: 'sign-up-attempt', organisationId: existing.organisationId, userId: existing.id });
+    return;
+  }
+  const { token, tokenHash } = newOneTimeToken();
+  const expiresAt = new Date(Date.now() + SIGN_UP_TTL_MS);
+  await PendingSignUp.create({ email: input.email, name: input.name, breweryName: input.breweryName, passwordHash, tokenHash, expiresAt });
+  const mail = signUpConfirmationMail({ name: input.name, breweryName: input.breweryName, token });
+  await mailer.send({ ...mail, to: input.email, kind: 'sign-up', organisationId: null, link: { tokenHash, expiresAt } });
 }
 
-/** Checks e-mail and password. A wrong password and an unknown e-mail get the same answer. */
+/** Follows a sign-up confirmation link: creates the brewery and its owner, once. */
+export async function confirmSignUp(token: string): Promise<{ user: User; session: Session }> {
+  const tokenHash = hashToken(token);
+  const pending = await PendingSignUp.findOne({ where: { tokenHash } });
+  if (!pending) throw notFound('This confirmation link is not valid. Sign up again to get a new one.');
+  if (pending.usedAt) throw gone('This confirmation link has already been used. Sign in instead.');
+  if (pending.expiresAt.getTime() <= Date.now()) throw gone('This confirmation link has expired (links last 24 hours). Sign up again.');
+  const user = await transaction(async (t) => {
+    const [claimed] = await PendingSignUp.update({ usedAt: new Date() }, { where: { id: pending.id, usedAt: { [Op.is]: null } }, transaction: t });
+    if (claimed !== 1) throw gone('This confirmation link has already been used. Sign in instead.');
+    if ((await User.count({ where: { email: pending.email }, transaction: t })) > 0) {
+      throw conflict('An account with this e-mail already exists. Sign in instead.');
+    }
+    const organisation = await Organisation.create({ name: pending.breweryName }, { transaction: t });
+    await seedStarterFormats(organisation.id, t);
+    return User.create(
+      { organisationId: organisation.id, email: pending.email, name: pending.name, role: 'owner', passwordHash: pending.passwordHash },
+      { transaction: t },
+    );
+  });
+  await redactUsedLink(tokenHash);
+  return { user, session: await sessionFor(user.id) };
+}
+
+/** Checks e-mail and password. An unknown e-mail, a wrong password and a deactivated account get the same answer. */
 export async function signIn(input: SignInInput): Promise<{ user: User; session: Session }> {
   const user = await User.findOne({ where: { email: input.email }, include: [{ model: Organisation, as: 'organisation' }] });
   const matches = await checkPassword(input.password, user?.passwordHash ?? (await decoyPasswordHash()));
-  if (!user || !matches) throw new HttpError(401, 'wrong_credentials', WRONG_CREDENTIALS);
-  if (!user.active) throw new HttpError(403, 'deactivated', 'This account has been deactivated. Ask an owner of your brewery.');
+  if (!user || !matches || !user.active) throw new HttpError(401, 'wrong_credentials', WRONG_CREDENTIALS);
   const organisation = (user as User & { organisation: Organisation }).organisation;
   return { user, session: toSession(user, organisation) };
 }
@@ -52,14 +77,37 @@ export async function sessionFor(userId: number): Promise<Session> {
   return toSession(user, (user as User & { organisation: Organisation }).organisation);
 }
 
+async function newPasswordReset(user: User): Promise<{ token: string; tokenHash: string; expiresAt: Date }> {
+  const { token, tokenHash } = newOneTimeToken();
+  const expiresAt = new Date(Date.now() + HOUR_MS);
+  await PasswordReset.create({ userId: user.id, tokenHash, expiresAt });
+  return { token, tokenHash, expiresAt };
+}
+
 /** Sends a reset link when the address belongs to an active account; says nothing either way. */
 export async function requestPasswordReset(email: string): Promise<void> {
   const user = await User.findOne({ where: { email, active: true } });
   if (!user) return;
-  const { token, tokenHash } = newOneTimeToken();
-  await PasswordReset.create({ userId: user.id, tokenHash, expiresAt: new Date(Date.now() + HOUR_MS) });
+  const { token, tokenHash, expiresAt } = await newPasswordReset(user);
   const mail = passwordResetMail({ name: user.name, token });
-  await mailer.send({ ...mail, to: user.email, kind: 'password-reset', organisationId: user.organisationId, userId: user.id });
+  await mailer.send({ ...mail, to: user.email, kind: 'password-reset', organisationId: user.organisationId, userId: user.id, link: { tokenHash, expiresAt } });
+}
+
+/**
+ * For the server's own console (`npm run reset-link`), where nobody can read e-mail: a fresh one-time link for an
+ * address. A reset link (1 hour) for an active account; for a sign-up still waiting, a new confirmation link (the
+ * old one stops working). Null when the address has neither.
+ */
+export async function consoleLink(email: string): Promise<{ kind: 'reset' | 'sign-up'; url: string } | null> {
+  const user = await User.findOne({ where: { email, active: true } });
+  if (user) return { kind: 'reset', url: resetPasswordUrl((await newPasswordReset(user)).token) };
+  if ((await User.count({ where: { email } })) > 0) return null;
+  const pending = await PendingSignUp.findOne({ where: { email, usedAt: { [Op.is]: null } }, order: [['id', 'DESC']] });
+  if (!pending) return null;
+  const { token, tokenHash } = newOneTimeToken();
+  await redactUsedLink(pending.tokenHash);
+  await pending.update({ tokenHash, expiresAt: new Date(Date.now() + SIGN_UP_TTL_MS) });
+  return { kind: 'sign-up', url: confirmSignUpUrl(token) };
 }
 
 /** Sets a new password from a reset link. The link works once; every session of the account ends. */
@@ -69,7 +117,7 @@ export async function resetPassword(input: ResetPasswordInput): Promise<{ user: 
   if (reset.usedAt) throw gone('This reset link has already been used. Ask for a new one.');
   if (reset.expiresAt.getTime() <= Date.now()) throw gone('This reset link has expired (links last 1 hour). Ask for a new one.');
   const passwordHash = await hashPassword(input.password);
-  const user = await sequelize.transaction(async (transaction) => {
+  const user = await transaction(async (transaction) => {
     const owner = await User.findByPk(reset.userId, { transaction, rejectOnEmpty: true });
     if (!owner.active) throw new HttpError(403, 'deactivated', 'This account has been deactivated. Ask an owner of your brewery.');
     await owner.update({ passwordHash, tokenVersion: owner.tokenVersion + 1 }, { transaction });
@@ -78,6 +126,8 @@ export async function resetPassword(input: ResetPasswordInput): Promise<{ user: 
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: owner.id, usedAt: { [Op.is]: null } }, transaction });
     return owner;
   });
+  const voided = await PasswordReset.findAll({ where: { userId: user.id }, attributes: ['tokenHash'] });
+  for (const row of voided) await redactUsedLink(row.tokenHash);
   return { user, session: await sessionFor(user.id) };
 }
 
@@ -110,9 +160,9 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
 /** Turns an invitation into an account with the invited role. The link works once. */
 export async function acceptInvitation(input: AcceptInvitationInput): Promise<{ user: User; session: Session }> {
   const invitation = await usableInvitation(input.token);
-  if (await emailTaken(invitation.email)) throw conflict('An account with this e-mail already exists. Sign in instead.');
+  if ((await User.count({ where: { email: invitation.email } })) > 0) throw conflict('An account with this e-mail already exists. Sign in instead.');
   const passwordHash = await hashPassword(input.password);
-  const user = await sequelize.transaction(async (transaction) => {
+  const user = await transaction(async (transaction) => {
     const [claimed] = await Invitation.update(
       { acceptedAt: new Date() },
       { where: { id: invitation.id, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } }, transaction },
@@ -123,5 +173,6 @@ export async function acceptInvitation(input: AcceptInvitationInput): Promise<{ 
       { transaction },
     );
   });
+  await redactUsedLink(invitation.tokenHash);
   return { user, session: await sessionFor(user.id) };
 }

@@ -3,7 +3,7 @@ import { Op, QueryTypes, type Transaction } from 'sequelize';
 import type { Ingredient as IngredientDtoShape } from '../../lib/api/types';
 import type { Measure } from '../../lib/ingredients';
 import { per100g, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
-import { Ingredient, IngredientChange, sequelize, User } from '../db';
+import { Ingredient, IngredientChange, sequelize, transaction, User } from '../db';
 import { conflict, forbidden, notFound } from '../errors';
 import type { DatasetIngredient } from '../usda/sr-files';
 import type { AuthContext } from './sessions';
@@ -52,7 +52,7 @@ export interface ImportReport {
  */
 export async function importDatasetIngredients(rows: DatasetIngredient[], onProgress?: (done: number) => void): Promise<ImportReport> {
   const report: ImportReport = { created: 0, updated: 0, unchanged: 0 };
-  await sequelize.transaction(async (transaction) => {
+  await transaction(async (transaction) => {
     const existing = new Map(
       (await Ingredient.findAll({ where: { organisationId: null }, transaction })).map((i) => [`${i.sourceDataset}|${i.sourceRecord}`, i]),
     );
@@ -158,7 +158,7 @@ async function assertNameFree(auth: AuthContext, name: string, exceptId?: number
 }
 
 export async function createHouseIngredient(auth: AuthContext, input: HouseIngredientInput, measures: Measure[] = []): Promise<IngredientDto> {
-  return sequelize.transaction(async (transaction) => {
+  return transaction(async (transaction) => {
     await assertNameFree(auth, input.name, undefined, transaction);
     const values = { ...fromLabel(input), measures, sourceDataset: null, sourceRecord: null };
     const created = await Ingredient.create({ ...values, organisationId: auth.organisationId }, { transaction });
@@ -168,7 +168,7 @@ export async function createHouseIngredient(auth: AuthContext, input: HouseIngre
 }
 
 export async function updateHouseIngredient(auth: AuthContext, id: number, input: HouseIngredientInput): Promise<IngredientDto> {
-  return sequelize.transaction(async (transaction) => {
+  return transaction(async (transaction) => {
     const ingredient = await ownHouseIngredient(auth, id, transaction);
     await assertNameFree(auth, input.name, id, transaction);
     const next = fromLabel(input);
@@ -187,7 +187,7 @@ export async function updateHouseIngredient(auth: AuthContext, id: number, input
 
 /** Archived house ingredients leave search but stay readable wherever they are used. */
 export async function setHouseIngredientArchived(auth: AuthContext, id: number, archived: boolean): Promise<IngredientDto> {
-  return sequelize.transaction(async (transaction) => {
+  return transaction(async (transaction) => {
     const ingredient = await ownHouseIngredient(auth, id, transaction);
     await ingredient.update({ archivedAt: archived ? new Date() : null }, { transaction });
     await IngredientChange.create({ ingredientId: id, userId: auth.userId, action: archived ? 'archived' : 'restored', changes: {} }, { transaction });
@@ -198,7 +198,7 @@ export async function setHouseIngredientArchived(auth: AuthContext, id: number, 
 /** A copy of any visible ingredient as a new house ingredient, to adjust. */
 export async function copyToHouse(auth: AuthContext, id: number, name: string): Promise<IngredientDto> {
   const source = await visibleIngredient(auth, id);
-  return sequelize.transaction(async (transaction) => {
+  return transaction(async (transaction) => {
     await assertNameFree(auth, name, undefined, transaction);
     const values = {
       name,

@@ -6,7 +6,7 @@ import { scaleRecipe, type ScaledRecipe } from '../../lib/recipes/scaling';
 import { SUGARS } from '../../lib/chemistry/sugars';
 import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../../lib/schemas/recipes';
 import type { RecipeDetail, RecipeSummary } from '../../lib/api/types';
-import { Ingredient, Recipe, RecipeReview, RecipeVersion, sequelize, Tasting, User } from '../db';
+import { Ingredient, Recipe, RecipeReview, RecipeVersion, Tasting, transaction, User } from '../db';
 import { badRequest, HttpError, notFound } from '../errors';
 import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
 import { reviewState } from './review-state';
@@ -99,7 +99,7 @@ export async function getRecipe(auth: AuthContext, id: number, version?: number)
 
 export async function createRecipe(auth: AuthContext, input: CreateRecipeInput): Promise<RecipeDetail> {
   await assertUsable(auth, input.content);
-  const recipe = await sequelize.transaction(async (transaction) => {
+  const recipe = await transaction(async (transaction) => {
     const created = await Recipe.create({ organisationId: auth.organisationId, name: input.name, flavourNotes: input.flavourNotes, currentVersion: 1 }, { transaction });
     await RecipeVersion.create({ recipeId: created.id, number: 1, name: input.name, flavourNotes: input.flavourNotes, content: input.content, note: 'First version', createdById: auth.userId }, { transaction });
     return created;
@@ -113,7 +113,7 @@ export async function createRecipe(auth: AuthContext, input: CreateRecipeInput):
  */
 export async function saveRecipe(auth: AuthContext, id: number, input: SaveRecipeInput): Promise<RecipeDetail> {
   await assertUsable(auth, input.content);
-  const recipe = await sequelize.transaction(async (transaction) => {
+  const recipe = await transaction(async (transaction) => {
     const found = await Recipe.findOne({ where: { id, organisationId: auth.organisationId }, transaction });
     if (!found) throw notFound('No such recipe in your brewery.');
     if (found.archivedAt) throw new HttpError(409, 'archived', 'This recipe is archived. Restore it or duplicate it to change it.');

@@ -1,7 +1,7 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction, type WhereOptions } from 'sequelize';
 
 import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
-import { Recipe, RecipeReview, RecipeVersion, sequelize, User } from '../db';
+import { Recipe, RecipeReview, RecipeVersion, transaction, User } from '../db';
 import { forbidden, HttpError, notFound } from '../errors';
 import { mailer } from '../mail/mailer';
 import { reviewDecisionMail, reviewSubmittedMail } from '../mail/templates';
@@ -11,6 +11,18 @@ import type { AuthContext } from './sessions';
 
 const wrongState = (message: string) => new HttpError(409, 'wrong_state', message);
 
+const DECIDED = 'Someone decided on this version a moment ago. Reload to see where it stands.';
+
+/**
+ * Moves a recipe from one review state to the next only if it is still in the state the checks saw: a conditional
+ * update inside the transaction, so ten identical requests at once make one event and nine 409s.
+ */
+async function claim(changes: Partial<Pick<Recipe, 'submittedVersion' | 'approvedVersion'>>, where: WhereOptions<Recipe>, t: Transaction, message: string): Promise<void> {
+  const [moved] = await Recipe.update(changes, { where, transaction: t });
+  if (moved !== 1) throw wrongState(message);
+}
+
+const waitingVersion = (id: number, version: number): WhereOptions<Recipe> => ({ id, archivedAt: null, currentVersion: version, submittedVersion: version });
 
 async function lastAction(recipe: Recipe): Promise<RecipeReview | null> {
   return RecipeReview.findOne({ where: { recipeId: recipe.id, versionNumber: recipe.currentVersion }, order: [['id', 'DESC']] });
@@ -58,8 +70,15 @@ export async function submit(auth: AuthContext, id: number, input: SubmitInput) 
   const state = reviewState(recipe, (await lastAction(recipe))?.action ?? null);
   if (state === 'submitted') throw wrongState('This version is already waiting for review.');
   if (state === 'approved') throw wrongState('This version is already approved.');
-  await sequelize.transaction(async (transaction) => {
-    await recipe.update({ submittedVersion: recipe.currentVersion }, { transaction });
+  await transaction(async (transaction) => {
+    const v = recipe.currentVersion;
+    const notAlready = (field: 'submittedVersion' | 'approvedVersion') => ({ [Op.or]: [{ [field]: null }, { [field]: { [Op.ne]: v } }] });
+    await claim(
+      { submittedVersion: v },
+      { id, archivedAt: null, currentVersion: v, [Op.and]: [notAlready('submittedVersion'), notAlready('approvedVersion')] },
+      transaction,
+      'This version was submitted or changed a moment ago. Reload to see where it stands.',
+    );
     await RecipeReview.create({ recipeId: id, versionNumber: recipe.currentVersion, action: 'submitted', userId: auth.userId, comment: input.message, overrideReason: null }, { transaction });
   });
   const [author, owners] = await Promise.all([User.findByPk(auth.userId), User.findAll({ where: { organisationId: auth.organisationId, role: 'owner', id: { [Op.ne]: auth.userId } } })]);
@@ -101,8 +120,8 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
       overrideReason: 'Write why you approve despite the danger finding.',
     });
   }
-  await sequelize.transaction(async (transaction) => {
-    await recipe.update({ approvedVersion: input.version, submittedVersion: null }, { transaction });
+  await transaction(async (transaction) => {
+    await claim({ approvedVersion: input.version, submittedVersion: null }, waitingVersion(id, input.version), transaction, DECIDED);
     await RecipeReview.create(
       { recipeId: id, versionNumber: input.version, action: 'approved', userId: auth.userId, comment: input.comment, overrideReason: dangers.length > 0 ? input.overrideReason : null, selfApproved },
       { transaction },
@@ -120,8 +139,8 @@ export async function returnForChanges(auth: AuthContext, id: number, input: Ret
   const recipe = await ownRecipe(auth, id);
   assertWaitingVersion(recipe, input.version);
   const author = await submitter(recipe);
-  await sequelize.transaction(async (transaction) => {
-    await recipe.update({ submittedVersion: null }, { transaction });
+  await transaction(async (transaction) => {
+    await claim({ submittedVersion: null }, waitingVersion(id, input.version), transaction, DECIDED);
     await RecipeReview.create({ recipeId: id, versionNumber: input.version, action: 'returned', userId: auth.userId, comment: input.comment, overrideReason: null }, { transaction });
   });
   const owner = await User.findByPk(auth.userId);
@@ -136,8 +155,8 @@ export async function withdraw(auth: AuthContext, id: number, input: WithdrawInp
   const recipe = await ownRecipe(auth, id);
   if (recipe.approvedVersion === null) throw wrongState('No version of this recipe is approved.');
   const version = recipe.approvedVersion;
-  await sequelize.transaction(async (transaction) => {
-    await recipe.update({ approvedVersion: null }, { transaction });
+  await transaction(async (transaction) => {
+    await claim({ approvedVersion: null }, { id, approvedVersion: version }, transaction, 'This approval was withdrawn a moment ago. Reload to see where it stands.');
     await RecipeReview.create({ recipeId: id, versionNumber: version, action: 'withdrawn', userId: auth.userId, comment: input.reason, overrideReason: null }, { transaction });
   });
   return reviewTimeline(auth, id);

@@ -1,10 +1,14 @@
 import crypto from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
 
 import type { CookieOptions } from 'express';
 import jwt from 'jsonwebtoken';
+import { Op } from 'sequelize';
 
 import type { Role } from '../../lib/roles';
 import { config } from '../config';
+import { RevokedSession } from '../models/revoked-session';
 import { User } from '../models/user';
 
 export const SESSION_COOKIE = 'fw_session';
@@ -19,6 +23,8 @@ export interface AuthContext {
 interface TokenClaims {
   sub: string;
   tv: number;
+  /** This token's own id, so that signing out can end this one session and no other. */
+  jti: string;
 }
 
 interface CachedUser extends AuthContext {
@@ -54,15 +60,47 @@ async function lookUpUser(userId: number): Promise<CachedUser | null> {
 }
 
 /**
+ * The secret that signs sessions: JWT_SECRET when set, otherwise 32 random bytes made at first start and kept
+ * beside the database (mode 0600), so that no secret is written in the source and a restart keeps people signed in.
+ * Never printed or logged.
+ */
+export function readOrCreateSecretFile(file: string): Buffer {
+  try {
+    const existing = fs.readFileSync(file, 'utf8').trim();
+    if (existing.length >= 64) {
+      if ((fs.statSync(file).mode & 0o077) !== 0) fs.chmodSync(file, 0o600);
+      return Buffer.from(existing, 'hex');
+    }
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code !== 'ENOENT') throw error;
+  }
+  fs.mkdirSync(path.dirname(file), { recursive: true });
+  const secret = crypto.randomBytes(32).toString('hex');
+  try {
+    fs.writeFileSync(file, `${secret}\n`, { flag: 'wx', mode: 0o600 });
+  } catch (error) {
+    // Another process made it first (two test files, or two starts at once): use theirs.
+    if ((error as NodeJS.ErrnoException).code === 'EEXIST') return readOrCreateSecretFile(file);
+    throw error;
+  }
+  return Buffer.from(secret, 'hex');
+}
+
+let signingKey: crypto.KeyObject | null = null;
+
+/**
  * The signing key as a KeyObject made once: given a string, jsonwebtoken builds a KeyObject on every call, which
  * was a fifth of the server's time under load.
  */
-const signingKey = crypto.createSecretKey(Buffer.from(config.jwtSecret, 'utf8'));
+export function sessionSigningKey(): crypto.KeyObject {
+  signingKey ??= crypto.createSecretKey(config.jwtSecret ? Buffer.from(config.jwtSecret, 'utf8') : readOrCreateSecretFile(config.sessionSecretFile));
+  return signingKey;
+}
 
 /** Signs a session token for a user (HS256, expires after the configured lifetime). */
 export function signSessionToken(user: Pick<User, 'id' | 'tokenVersion'>): string {
-  const claims: TokenClaims = { sub: String(user.id), tv: user.tokenVersion };
-  return jwt.sign(claims, signingKey, { algorithm: 'HS256', expiresIn: config.sessionTtlSeconds });
+  const claims: TokenClaims = { sub: String(user.id), tv: user.tokenVersion, jti: crypto.randomBytes(12).toString('base64url') };
+  return jwt.sign(claims, sessionSigningKey(), { algorithm: 'HS256', expiresIn: config.sessionTtlSeconds });
 }
 
 /**
@@ -72,7 +110,7 @@ export function signSessionToken(user: Pick<User, 'id' | 'tokenVersion'>): strin
 const verified = new Map<string, TokenClaims & { exp: number }>();
 const VERIFIED_MAX = 5000;
 
-function verifyToken(token: string): TokenClaims | null {
+function verifyToken(token: string): (TokenClaims & { exp: number }) | null {
   const known = verified.get(token);
   if (known) {
     if (known.exp * 1000 > Date.now()) return known;
@@ -80,7 +118,8 @@ function verifyToken(token: string): TokenClaims | null {
     return null;
   }
   try {
-    const claims = jwt.verify(token, signingKey, { algorithms: ['HS256'] }) as TokenClaims & { exp: number };
+    const claims = jwt.verify(token, sessionSigningKey(), { algorithms: ['HS256'] }) as TokenClaims & { exp: number };
+    if (typeof claims.jti !== 'string' || typeof claims.tv !== 'number') return null;
     if (verified.size >= VERIFIED_MAX) verified.delete(verified.keys().next().value as string);
     verified.set(token, claims);
     return claims;
@@ -89,10 +128,45 @@ function verifyToken(token: string): TokenClaims | null {
   }
 }
 
+/**
+ * Sessions ended by signing out, by token id, until the token would have expired anyway. Kept in the database so a
+ * restart does not bring them back, and in memory (loaded once) so the check costs no query.
+ */
+let revoked: Promise<Map<string, number>> | null = null;
+
+function revokedSessions(): Promise<Map<string, number>> {
+  revoked ??= (async () => {
+    await RevokedSession.destroy({ where: { expiresAt: { [Op.lt]: new Date() } } });
+    const rows = await RevokedSession.findAll();
+    return new Map(rows.map((row) => [row.jti, row.expiresAt.getTime()]));
+  })().catch((error: unknown) => {
+    revoked = null;
+    throw error;
+  });
+  return revoked;
+}
+
+/** Forgets what was loaded, for a new database (tests). */
+export function forgetRevokedSessions(): void {
+  revoked = null;
+  verified.clear();
+}
+
+/** Ends the session of this token (sign-out): the same token is refused from now on, even after a restart. */
+export async function revokeToken(token: string): Promise<void> {
+  const claims = verifyToken(token);
+  if (!claims) return;
+  const expiresAt = new Date(claims.exp * 1000);
+  await RevokedSession.findOrCreate({ where: { jti: claims.jti }, defaults: { jti: claims.jti, expiresAt } });
+  (await revokedSessions()).set(claims.jti, expiresAt.getTime());
+  verified.delete(token);
+}
+
 /** Checks a session token and the account behind it. Returns null for anything that is not a valid session. */
 export async function authenticateToken(token: string): Promise<AuthContext | null> {
   const claims = verifyToken(token);
   if (!claims) return null;
+  if ((await revokedSessions()).has(claims.jti)) return null;
   const userId = Number(claims.sub);
   if (!Number.isInteger(userId)) return null;
   const user = await lookUpUser(userId);

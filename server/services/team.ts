@@ -3,11 +3,12 @@ import { Op } from 'sequelize';
 import type { Invitation as InvitationDto, Member, Team } from '../../lib/api/types';
 import type { Role } from '../../lib/roles';
 import type { InviteInput } from '../../lib/schemas/team';
-import { Invitation, Organisation, sequelize, User } from '../db';
+import { Invitation, Organisation, transaction, User } from '../db';
 import { badRequest, conflict, gone, notFound } from '../errors';
 import { mailer } from '../mail/mailer';
 import { invitationMail } from '../mail/templates';
 import type { AuthContext } from './sessions';
+import { redactUsedLink } from './outbox';
 import { invitationStatus, toInvitation, toMember } from './serialize';
 import { DAY_MS, newOneTimeToken } from './tokens';
 
@@ -26,32 +27,36 @@ export async function listTeam(organisationId: number): Promise<Team> {
 }
 
 async function sendInvitation(invitation: Invitation, token: string, inviter: AuthContext): Promise<void> {
+  const link = { tokenHash: invitation.tokenHash, expiresAt: invitation.expiresAt };
   const [organisation, invitedBy] = await Promise.all([
     Organisation.findByPk(inviter.organisationId, { rejectOnEmpty: true }),
     User.findByPk(inviter.userId, { attributes: ['name'] }),
   ]);
   const mail = invitationMail({ breweryName: organisation.name, inviterName: invitedBy?.name ?? null, role: invitation.role, token });
-  await mailer.send({ ...mail, to: invitation.email, kind: 'invitation', organisationId: inviter.organisationId });
+  await mailer.send({ ...mail, to: invitation.email, kind: 'invitation', organisationId: inviter.organisationId, link });
 }
 
-/** Invites a person by e-mail with a role. One open invitation per address and brewery. */
+/**
+ * Invites a person by e-mail with a role. One open invitation per address and brewery (a unique index holds it
+ * against races). An address with an account in another brewery is invited like any other, so the answer never
+ * tells that it has one; accepting then says to sign in instead.
+ */
 export async function invite(inviter: AuthContext, input: InviteInput): Promise<InvitationDto> {
-  if ((await User.count({ where: { email: input.email } })) > 0) {
-    throw conflict('This person already has a Fizzwright account.', { email: 'This person already has a Fizzwright account.' });
+  if ((await User.count({ where: { email: input.email, organisationId: inviter.organisationId } })) > 0) {
+    throw conflict('This person is already a member of your brewery.', { email: 'Already a member of your brewery.' });
   }
-  const open = await Invitation.findAll({
-    where: { organisationId: inviter.organisationId, email: input.email, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } },
-  });
-  if (open.some((inv) => invitationStatus(inv) === 'pending')) {
-    throw conflict('This address already has an open invitation. Resend it from the list instead.', {
-      email: 'Already invited: resend the invitation from the list.',
-    });
-  }
+  const alreadyInvited = () =>
+    conflict('This address already has an open invitation. Resend it from the list instead.', { email: 'Already invited: resend the invitation from the list.' });
   const { token, tokenHash } = newOneTimeToken();
-  const invitation = await sequelize.transaction(async (transaction) => {
+  const { invitation, closed } = await transaction(async (t) => {
+    const open = await Invitation.findAll({
+      where: { organisationId: inviter.organisationId, email: input.email, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } },
+      transaction: t,
+    });
+    if (open.some((inv) => invitationStatus(inv) === 'pending')) throw alreadyInvited();
     // Expired invitations to the same address are closed so that only the new link can be used.
-    await Invitation.update({ revokedAt: new Date() }, { where: { id: open.map((inv) => inv.id) }, transaction });
-    return Invitation.create(
+    await Invitation.update({ revokedAt: new Date() }, { where: { id: open.map((inv) => inv.id) }, transaction: t });
+    const created = await Invitation.create(
       {
         organisationId: inviter.organisationId,
         invitedById: inviter.userId,
@@ -60,9 +65,11 @@ export async function invite(inviter: AuthContext, input: InviteInput): Promise<
         tokenHash,
         expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
       },
-      { transaction },
+      { transaction: t },
     );
+    return { invitation: created, closed: open };
   });
+  for (const old of closed) await redactUsedLink(old.tokenHash);
   await sendInvitation(invitation, token, inviter);
   return toInvitation(await invitation.reload({ include: [{ model: User, as: 'invitedBy', attributes: ['name'] }] }));
 }
@@ -79,6 +86,7 @@ async function openInvitation(organisationId: number, id: number): Promise<Invit
 export async function resendInvitation(inviter: AuthContext, id: number): Promise<InvitationDto> {
   const invitation = await openInvitation(inviter.organisationId, id);
   const { token, tokenHash } = newOneTimeToken();
+  await redactUsedLink(invitation.tokenHash);
   await invitation.update({ tokenHash, expiresAt: new Date(Date.now() + INVITATION_TTL_MS), invitedById: inviter.userId });
   await sendInvitation(invitation, token, inviter);
   return toInvitation(await invitation.reload({ include: [{ model: User, as: 'invitedBy', attributes: ['name'] }] }));
@@ -87,6 +95,7 @@ export async function resendInvitation(inviter: AuthContext, id: number): Promis
 export async function revokeInvitation(organisationId: number, id: number): Promise<void> {
   const invitation = await openInvitation(organisationId, id);
   await invitation.update({ revokedAt: new Date() });
+  await redactUsedLink(invitation.tokenHash);
 }
 
 async function memberOf(organisationId: number, id: number): Promise<User> {
@@ -107,11 +116,14 @@ export async function changeRole(actor: AuthContext, memberId: number, role: Rol
   return toMember(member);
 }
 
-/** Deactivated members can no longer sign in, and their open sessions stop at once. */
+/**
+ * Deactivated members can no longer sign in, and their open sessions stop at once. Deactivation also raises the
+ * token version, so reactivating someone later does not bring back the sessions they had before.
+ */
 export async function setMemberActive(actor: AuthContext, memberId: number, active: boolean): Promise<Member> {
   const member = await memberOf(actor.organisationId, memberId);
   if (!active && member.id === actor.userId) throw badRequest('You cannot deactivate yourself.');
   if (!active && member.role === 'owner') await assertAnotherActiveOwner(actor.organisationId, member.id);
-  await member.update({ active });
+  await member.update(active ? { active } : { active, tokenVersion: member.tokenVersion + 1 });
   return toMember(member);
 }

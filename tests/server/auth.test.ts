@@ -4,6 +4,7 @@ import request from 'supertest';
 
 import { config } from '@/server/config';
 import { Organisation, OutboxMessage, PasswordReset, User } from '@/server/db';
+import { sessionSigningKey } from '@/server/services/sessions';
 import { hashToken } from '@/server/services/tokens';
 
 import { linkFromOutbox, signUpOwner, startApp, stopApp, uniqueEmail } from './helpers';
@@ -23,9 +24,17 @@ const body = (overrides: Record<string, unknown> = {}) => ({
 });
 
 describe('POST /api/auth/sign-up', () => {
-  it('creates a brewery and its owner, and signs them in with an httpOnly cookie', async () => {
+  it('creates nothing until the e-mailed link is followed; the link then creates the brewery and its owner and signs them in', async () => {
     const input = body();
-    const res = await request(app).post('/api/auth/sign-up').send(input).expect(201);
+    const breweries = await Organisation.count();
+    const started = await request(app).post('/api/auth/sign-up').send(input).expect(202);
+    expect(started.headers['set-cookie']).toBeUndefined();
+    expect(await Organisation.count()).toBe(breweries);
+    expect(await User.count({ where: { email: input.email } })).toBe(0);
+
+    const { path, token } = await linkFromOutbox(input.email);
+    expect(path).toBe('/confirm-sign-up');
+    const res = await request(app).post('/api/auth/confirm-sign-up').send({ token }).expect(201);
     expect(res.body).toEqual({
       user: { id: expect.any(Number), name: 'Tamsin Vale', email: input.email, role: 'owner', unitSystem: 'metric', notifyReviews: true },
       organisation: { id: expect.any(Number), name: 'Larkspur Ferments', abvLimitPercent: 0.5 },
@@ -42,14 +51,21 @@ describe('POST /api/auth/sign-up', () => {
     expect(user?.passwordHash).toMatch(/^\$2[aby]\$/);
     expect(user?.passwordHash).not.toContain(input.password);
     expect((await Organisation.findByPk(user!.organisationId))?.name).toBe('Larkspur Ferments');
+    // The link works once.
+    await request(app).post('/api/auth/confirm-sign-up').send({ token }).expect(410);
   });
 
-  it('answers 409 for an e-mail already used, naming the field, and creates nothing', async () => {
-    const input = body();
-    await request(app).post('/api/auth/sign-up').send(input).expect(201);
+  it('answers a sign-up with an address that has an account exactly like any other, e-mails that address instead, and creates nothing', async () => {
+    const taken = body();
+    await signUpOwner(app, { email: taken.email });
     const breweries = await Organisation.count();
-    const res = await request(app).post('/api/auth/sign-up').send({ ...input, email: input.email.toUpperCase() }).expect(409);
-    expect(res.body.error).toMatchObject({ code: 'conflict', fields: { email: expect.any(String) } });
+    const fresh = await request(app).post('/api/auth/sign-up').send(body()).expect(202);
+    const again = await request(app).post('/api/auth/sign-up').send({ ...taken, email: taken.email.toUpperCase() }).expect(202);
+    expect(again.body).toEqual(fresh.body);
+    expect(again.headers['set-cookie']).toBeUndefined();
+    const told = await OutboxMessage.findOne({ where: { to: taken.email }, order: [['id', 'DESC']] });
+    expect(told?.subject).toBe('Someone tried to sign up with your address');
+    expect(told?.text).not.toMatch(/token=/);
     expect(await Organisation.count()).toBe(breweries);
   });
 
@@ -60,7 +76,7 @@ describe('POST /api/auth/sign-up', () => {
   });
 
   it('answers 400, never 500, for a missing, malformed or non-object body', async () => {
-    await request(app).post('/api/auth/sign-up').expect(400);
+    await request(app).post('/api/auth/sign-up').send({}).expect(400);
     const malformed = await request(app).post('/api/auth/sign-up').set('Content-Type', 'application/json').send('{"email":').expect(400);
     expect(malformed.body.error.code).toBe('invalid_json');
     const array = await request(app).post('/api/auth/sign-up').send([1, 2]).expect(400);
@@ -95,7 +111,7 @@ describe('GET /api/auth/session', () => {
   it('refuses an expired token, a token signed with another secret, and a token with another algorithm', async () => {
     const { session } = await signUpOwner(app);
     const sub = String(session.user.id);
-    const expired = jwt.sign({ sub, tv: 0, exp: Math.floor(Date.now() / 1000) - 10 }, config.jwtSecret, { algorithm: 'HS256' });
+    const expired = jwt.sign({ sub, tv: 0, jti: 'expired-one', exp: Math.floor(Date.now() / 1000) - 10 }, sessionSigningKey(), { algorithm: 'HS256' });
     const forged = jwt.sign({ sub, tv: 0 }, 'another-secret-entirely', { algorithm: 'HS256' });
     const unsigned = jwt.sign({ sub, tv: 0 }, '', { algorithm: 'none' });
     for (const token of [expired, forged, unsigned]) {
@@ -107,7 +123,7 @@ describe('GET /api/auth/session', () => {
 describe('POST /api/auth/sign-out', () => {
   it('clears the cookie', async () => {
     const { agent } = await signUpOwner(app);
-    const res = await agent.post('/api/auth/sign-out').expect(204);
+    const res = await agent.post('/api/auth/sign-out').send({}).expect(204);
     expect(String(res.headers['set-cookie'])).toMatch(/fw_session=;/);
     await agent.get('/api/auth/session').expect(401);
   });

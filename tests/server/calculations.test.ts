@@ -138,7 +138,7 @@ describe('/api/bottle-formats', () => {
     const edited = await owner.put(`/api/bottle-formats/${created.body.id}`).send({ ...input, maxWorkingPressureBar: 4 }).expect(200);
     expect(edited.body.maxWorkingPressureBar).toBe(4);
     await brewer.put(`/api/bottle-formats/${created.body.id}`).send(input).expect(403);
-    await owner.post(`/api/bottle-formats/${created.body.id}/archive`).expect(200);
+    await owner.post(`/api/bottle-formats/${created.body.id}/archive`).send({}).expect(200);
     const names = (await owner.get('/api/bottle-formats').expect(200)).body.map((f: { name: string }) => f.name);
     expect(names).not.toContain('Squat glass 250 mL');
     const all = (await owner.get('/api/bottle-formats?archived=true').expect(200)).body.map((f: { name: string }) => f.name);

@@ -21,11 +21,13 @@ export async function stopApp(): Promise<void> {
 let counter = 0;
 export const uniqueEmail = (prefix = 'person') => `${prefix}-${++counter}-${Math.random().toString(36).slice(2, 7)}@brewery.test`;
 
-/** Signs up a new brewery and returns an agent carrying its owner's session cookie. */
+/** Signs up a new brewery, follows the confirmation link from the outbox, and returns an agent carrying its owner's session cookie. */
 export async function signUpOwner(app: Express, overrides: Partial<{ breweryName: string; name: string; email: string; password: string }> = {}) {
   const agent = request.agent(app);
   const body = { breweryName: 'Test Ferments', name: 'Olwen Test', email: uniqueEmail('owner'), password: 'correct-horse-1', ...overrides };
-  const res = await agent.post('/api/auth/sign-up').send(body).expect(201);
+  await agent.post('/api/auth/sign-up').send(body).expect(202);
+  const { token } = await linkFromOutbox(body.email);
+  const res = await agent.post('/api/auth/confirm-sign-up').send({ token }).expect(201);
   return { agent, session: res.body as Session, email: body.email, password: body.password };
 }
 

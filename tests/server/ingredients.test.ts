@@ -108,7 +108,7 @@ describe('PUT, archive and copy', () => {
     await owner.put(`/api/ingredients/${created.body.id}`).send({ ...label, name: 'Plum purée lot 7', sugarsG: 7 }).expect(200);
     const changes = await developer.get(`/api/ingredients/${created.body.id}/changes`).expect(200);
     expect(changes.body[0]).toMatchObject({ action: 'updated', by: 'Olwen Test', changes: { sugarsG: [13, 14] } });
-    await developer.post(`/api/ingredients/${created.body.id}/archive`).expect(200);
+    await developer.post(`/api/ingredients/${created.body.id}/archive`).send({}).expect(200);
     const after = await developer.get('/api/ingredients').query({ q: 'plum purée lot' }).expect(200);
     expect(after.body.items.map((i: { id: number }) => i.id)).not.toContain(created.body.id);
     const archived = await developer.get('/api/ingredients').query({ q: 'plum', archived: true }).expect(200);
@@ -119,7 +119,7 @@ describe('PUT, archive and copy', () => {
   it('keeps dataset ingredients read-only, but lets them be copied to the house', async () => {
     const honey = (await developer.get('/api/ingredients').query({ q: 'honey' }).expect(200)).body.items.find((i: { name: string }) => i.name === 'Honey');
     await developer.put(`/api/ingredients/${honey.id}`).send({ ...label, name: 'Honey' }).expect(403);
-    await developer.post(`/api/ingredients/${honey.id}/archive`).expect(403);
+    await developer.post(`/api/ingredients/${honey.id}/archive`).send({}).expect(403);
     const copy = await developer.post(`/api/ingredients/${honey.id}/copy`).send({ name: 'Wildflower honey, local' }).expect(201);
     // USDA SR25, NDB 19296 (honey): 82.12 g total sugars per 100 g.
     expect(copy.body).toMatchObject({ scope: 'house', per100g: { sugarsG: 82.12 }, notes: expect.stringContaining('Copied from Honey') });

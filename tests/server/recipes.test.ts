@@ -93,14 +93,14 @@ describe('PUT /api/recipes/:id (a new version per save)', () => {
 
   it('duplicates, archives (never deletes) and refuses edits to archived recipes', async () => {
     const created = (await create(developer, 'Elderflower spritz')).body;
-    const copy = await developer.post(`/api/recipes/${created.id}/duplicate`).expect(201);
+    const copy = await developer.post(`/api/recipes/${created.id}/duplicate`).send({}).expect(201);
     expect(copy.body).toMatchObject({ name: 'Elderflower spritz (variation)', currentVersion: 1 });
-    await developer.post(`/api/recipes/${created.id}/archive`).expect(200);
+    await developer.post(`/api/recipes/${created.id}/archive`).send({}).expect(200);
     const edit = await developer.put(`/api/recipes/${created.id}`).send({ name: 'x y', baseVersion: 1, content }).expect(409);
     expect(edit.body.error.code).toBe('archived');
     const archived = await developer.get('/api/recipes').query({ status: 'archived' }).expect(200);
     expect(archived.body.map((r: { id: number }) => r.id)).toContain(created.id);
-    await brewer.post(`/api/recipes/${created.id}/archive`).expect(403);
+    await brewer.post(`/api/recipes/${created.id}/archive`).send({}).expect(403);
   });
 });
 

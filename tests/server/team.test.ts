@@ -76,7 +76,7 @@ describe('POST /api/auth/accept-invitation', () => {
     const revokedEmail = uniqueEmail();
     const created = await agent.post('/api/team/invitations').send({ email: revokedEmail, role: 'brewer' }).expect(201);
     const revoked = await linkFromOutbox(revokedEmail);
-    await agent.delete(`/api/team/invitations/${created.body.id}`).expect(204);
+    await agent.delete(`/api/team/invitations/${created.body.id}`).send({}).expect(204);
     const gone = await request(app).get(`/api/auth/invitations/${revoked.token}`).expect(410);
     expect(gone.body.error.message).toMatch(/withdrawn/);
   });
@@ -88,7 +88,7 @@ describe('POST /api/team/invitations/:id/resend', () => {
     const email = uniqueEmail();
     const created = await agent.post('/api/team/invitations').send({ email, role: 'brewer' }).expect(201);
     const first = await linkFromOutbox(email);
-    await agent.post(`/api/team/invitations/${created.body.id}/resend`).expect(200);
+    await agent.post(`/api/team/invitations/${created.body.id}/resend`).send({}).expect(200);
     const second = await linkFromOutbox(email);
     expect(second.token).not.toBe(first.token);
     await request(app).get(`/api/auth/invitations/${first.token}`).expect(404);
@@ -109,18 +109,24 @@ describe('PATCH /api/team/members/:id and deactivation', () => {
     const owner = await signUpOwner(app);
     const res = await owner.agent.patch(`/api/team/members/${owner.session.user.id}`).send({ role: 'brewer' }).expect(400);
     expect(res.body.error.message).toMatch(/at least one active owner/);
-    await owner.agent.post(`/api/team/members/${owner.session.user.id}/deactivate`).expect(400);
+    await owner.agent.post(`/api/team/members/${owner.session.user.id}/deactivate`).send({}).expect(400);
   });
 
-  it('deactivating a member ends their session at once and stops sign-in; reactivating restores it', async () => {
+  it('deactivating a member ends their session at once and stops sign-in; reactivating lets them sign in again but not revive old sessions', async () => {
     const owner = await signUpOwner(app);
     const dev = await addMember(app, owner.agent, 'developer');
     await dev.agent.get('/api/auth/session').expect(200);
-    await owner.agent.post(`/api/team/members/${dev.session.user.id}/deactivate`).expect(200);
+    await owner.agent.post(`/api/team/members/${dev.session.user.id}/deactivate`).send({}).expect(200);
     await dev.agent.get('/api/auth/session').expect(401);
-    const signIn = await request(app).post('/api/auth/sign-in').send({ email: dev.email, password: dev.password }).expect(403);
-    expect(signIn.body.error.code).toBe('deactivated');
-    await owner.agent.post(`/api/team/members/${dev.session.user.id}/reactivate`).expect(200);
+    // A deactivated account answers a right and a wrong password alike, and like an unknown address.
+    const right = await request(app).post('/api/auth/sign-in').send({ email: dev.email, password: dev.password }).expect(401);
+    const wrong = await request(app).post('/api/auth/sign-in').send({ email: dev.email, password: 'not-the-password' }).expect(401);
+    const unknown = await request(app).post('/api/auth/sign-in').send({ email: uniqueEmail('nobody'), password: dev.password }).expect(401);
+    expect(right.body).toEqual(wrong.body);
+    expect(right.body).toEqual(unknown.body);
+    await owner.agent.post(`/api/team/members/${dev.session.user.id}/reactivate`).send({}).expect(200);
+    // The session from before the deactivation stays ended.
+    await dev.agent.get('/api/auth/session').expect(401);
     await request(app).post('/api/auth/sign-in').send({ email: dev.email, password: dev.password }).expect(200);
   });
 });
@@ -148,7 +154,7 @@ describe('who may call the team routes', () => {
   it.each(['developer', 'brewer'] as const)('a %s gets 403 on every team route', async (role) => {
     for (const [method, path, payload] of routes(targetId)) {
       const call = (members[role] as unknown as Record<string, (p: string) => request.Test>)[method](path);
-      const res = await (payload ? call.send(payload) : call);
+      const res = await (method === 'get' ? call : call.send(payload ?? {}));
       expect([method, path, res.status]).toEqual([method, path, 403]);
     }
   });
@@ -156,7 +162,7 @@ describe('who may call the team routes', () => {
   it('a signed-out caller gets 401 on every team route', async () => {
     for (const [method, path, payload] of routes(targetId)) {
       const call = (request(app) as unknown as Record<string, (p: string) => request.Test>)[method](path);
-      const res = await (payload ? call.send(payload) : call);
+      const res = await (method === 'get' ? call : call.send(payload ?? {}));
       expect([method, path, res.status]).toEqual([method, path, 401]);
     }
   });
@@ -166,9 +172,9 @@ describe('who may call the team routes', () => {
     const team = await stranger.agent.get('/api/team').expect(200);
     expect(team.body.members.map((m: { id: number }) => m.id)).toEqual([stranger.session.user.id]);
     await stranger.agent.patch(`/api/team/members/${targetId}`).send({ role: 'owner' }).expect(404);
-    await stranger.agent.post(`/api/team/members/${targetId}/deactivate`).expect(404);
+    await stranger.agent.post(`/api/team/members/${targetId}/deactivate`).send({}).expect(404);
     const invitation = await owner.agent.post('/api/team/invitations').send({ email: uniqueEmail(), role: 'brewer' }).expect(201);
-    await stranger.agent.delete(`/api/team/invitations/${invitation.body.id}`).expect(404);
+    await stranger.agent.delete(`/api/team/invitations/${invitation.body.id}`).send({}).expect(404);
     expect((await User.findByPk(targetId))?.role).toBe('brewer');
   });
 });
