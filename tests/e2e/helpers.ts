@@ -1,3 +1,6 @@
+import { execFileSync } from 'node:child_process';
+import path from 'node:path';
+
 import type { Page } from '@playwright/test';
 
 export const PHONE = { width: 390, height: 844 };
@@ -25,4 +28,19 @@ export async function openNav(page: Page, label: string) {
   }
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'More', exact: true }).click();
   await page.getByRole('button', { name: label, exact: true }).click();
+}
+
+/**
+ * The one-time link for an address, printed the way whoever runs a server without SMTP gets it:
+ * `npm run reset-link -- <email>` against the server's database. Answers the path of the link.
+ */
+export function consoleLink(email: string): string {
+  const out = execFileSync(process.execPath, ['--import', 'tsx', 'server/cli/reset-link.ts', email], {
+    cwd: path.resolve(__dirname, '../..'),
+    env: { ...process.env, NODE_ENV: 'test', DATABASE_PATH: path.join(process.env.E2E_DATA_DIR!, 'e2e.sqlite'), LOG_LEVEL: 'warn', SEED_DEMO: 'false', APP_URL: process.env.E2E_BASE_URL },
+    encoding: 'utf8',
+  });
+  const match = /https?:\/\/[^/\s]+(\/\S+)/.exec(out);
+  if (!match) throw new Error(`no link printed for ${email}:\n${out}`);
+  return match[1];
 }

@@ -2,7 +2,6 @@ import type { Express } from 'express';
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
 
-import { config } from '@/server/config';
 import { Organisation, OutboxMessage, PasswordReset, User } from '@/server/db';
 import { sessionSigningKey } from '@/server/services/sessions';
 import { hashToken } from '@/server/services/tokens';
