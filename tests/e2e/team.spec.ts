@@ -20,7 +20,7 @@ test('an owner signs up, invites a brewer through the outbox, and the brewer can
   await owner.getByLabel('Password', { exact: true }).fill('owner-pass-123');
   await owner.getByRole('button', { name: 'Create brewery account' }).click();
   // Nothing exists until the address is confirmed; this server has no SMTP, so the screen says how to get the link.
-  await expect(owner.getByText('Check your e-mail')).toBeVisible();
+  await expect(owner.getByText('Check your e-mail', { exact: true })).toBeVisible();
   await expect(owner.getByText(`npm run reset-link -- ${ownerEmail}`)).toBeVisible();
   await shot(owner, 'phone-sign-up-check-mail');
   await owner.goto(url(consoleLink(ownerEmail)));
