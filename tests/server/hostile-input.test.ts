@@ -73,9 +73,10 @@ beforeAll(async () => {
   };
   const recipe = await owner.post('/api/recipes').send({ name: 'Target', content });
   const foreign = await stranger.post('/api/recipes').send({ name: 'Foreign', content: { ...content, bottleFormatId: ((await stranger.get('/api/bottle-formats')).body as { id: number }[])[0].id } });
-  const ingredient = await owner.post('/api/ingredients').send({ name: 'House syrup', category: 'sugar', servingSize: 100, sugarsG: 60, fermentableSharePct: 100, steepSharePct: 100 });
-  ownIds = { recipe: recipe.body.id ?? 1, ingredient: ingredient.body.id ?? 1, format: formats[0].id };
-  strangerRecipeId = foreign.body.id ?? 2;
+  const ingredient = await owner.post('/api/ingredients').send({ name: 'House syrup', category: 'puree', servingSize: 100, sugarsG: 60, fermentableSharePct: 100, steepSharePct: 100 });
+  expect([recipe.status, foreign.status, ingredient.status]).toEqual([201, 201, 201]);
+  ownIds = { recipe: recipe.body.id, ingredient: ingredient.body.id, format: formats[0].id };
+  strangerRecipeId = foreign.body.id;
 });
 afterAll(stopApp);
 

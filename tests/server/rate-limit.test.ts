@@ -20,4 +20,11 @@ describe('auth rate limit', () => {
     expect(res.body.error.code).toBe('too_many_requests');
     expect(res.headers.ratelimit).toBeDefined();
   });
+
+  it('ignores X-Forwarded-For unless TRUST_PROXY is set, so a client cannot pick a fresh address per attempt', async () => {
+    for (let i = 0; i < 2; i++) {
+      const res = await request(app).post('/api/auth/sign-in').set('X-Forwarded-For', `203.0.113.${i + 1}`).send({ email: 'y@brewery.test', password: 'whatever-1' });
+      expect(res.status).toBe(429);
+    }
+  });
 });
