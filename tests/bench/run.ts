@@ -32,12 +32,12 @@ async function startServer(): Promise<{ child: ChildProcess; url: string; dir: s
     env: {
       ...process.env,
       NODE_ENV: 'production',
-      JWT_SECRET: 'bench-secret-not-used-anywhere-else',
       PORT: '0',
       HOST: '127.0.0.1',
       DATABASE_PATH: path.join(dir, 'bench.sqlite'),
       BENCH_ROUTES: 'true',
       AUTH_RATE_LIMIT: '100000',
+      AUTH_ACCOUNT_RATE_LIMIT: '100000',
       LOG_LEVEL: 'warn',
       SEED_DEMO: 'true',
     },
@@ -140,6 +140,100 @@ async function searchLatency(url: string, cookie: string): Promise<void> {
   console.log(`${p(0.95) < 20 ? 'meets' : 'MISSES'}  search p95 = ${p(0.95).toFixed(1)} ms  (goal < 20 ms)`);
 }
 
+const WRITER_SECONDS = Number(process.env.BENCH_WRITER_SECONDS ?? 30);
+
+interface WriterRun {
+  saves: number;
+  statuses: Map<number, number>;
+  latenciesMs: number[];
+}
+
+/** Writers each saving their own recipe again and again for a while: each save is a new version. */
+async function writers(url: string, json: Record<string, string>, recipes: { id: number; body: Record<string, unknown> }[], seconds: number): Promise<WriterRun> {
+  const run: WriterRun = { saves: 0, statuses: new Map(), latenciesMs: [] };
+  const until = Date.now() + seconds * 1000;
+  await Promise.all(
+    recipes.map(async (recipe) => {
+      let baseVersion = recipe.body.baseVersion as number;
+      while (Date.now() < until) {
+        const started = performance.now();
+        const res = await fetch(`${url}/api/recipes/${recipe.id}`, { method: 'PUT', headers: json, body: JSON.stringify({ ...recipe.body, baseVersion }) });
+        const answer = (await res.json()) as { currentVersion?: number };
+        run.latenciesMs.push(performance.now() - started);
+        run.statuses.set(res.status, (run.statuses.get(res.status) ?? 0) + 1);
+        if (res.ok) {
+          run.saves += 1;
+          baseVersion = answer.currentVersion!;
+        }
+      }
+      recipe.body.baseVersion = baseVersion;
+    }),
+  );
+  return run;
+}
+
+const percentile = (values: number[], share: number) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(share * values.length))] ?? 0;
+const fiveXx = (statuses: Map<number, number>) => [...statuses].filter(([code]) => code >= 500).reduce((sum, [, n]) => sum + n, 0);
+const statusList = (statuses: Map<number, number>) => [...statuses].sort(([a], [b]) => a - b).map(([code, n]) => `${n}×${code}`).join(', ');
+
+/**
+ * Many writers at once: 1 and then 20 people each saving their own recipe for a while; 20 saves of one version at
+ * once (exactly one may win); 50 sign-ups at once. No 5xx anywhere, and 20 writers at least as fast as one.
+ */
+async function writerFigures(url: string, cookie: string): Promise<void> {
+  const json = { 'content-type': 'application/json', cookie };
+  const list = (await (await fetch(`${url}/api/recipes`, { headers: { cookie } })).json()) as { id: number }[];
+  const template = (await (await fetch(`${url}/api/recipes/${list[0].id}`, { headers: { cookie } })).json()) as { content: Record<string, unknown> };
+  const recipes = await Promise.all(
+    Array.from({ length: 20 }, async (_, i) => {
+      const body = { name: `Bench writer ${i + 1}`, flavourNotes: '', note: 'bench save', content: template.content };
+      const res = await fetch(`${url}/api/recipes`, { method: 'POST', headers: json, body: JSON.stringify(body) });
+      if (res.status !== 201) throw new Error(`creating a bench recipe answered ${res.status}`);
+      const created = (await res.json()) as { id: number; currentVersion: number };
+      return { id: created.id, body: { ...body, baseVersion: created.currentVersion } };
+    }),
+  );
+  const one = await writers(url, json, recipes.slice(0, 1), Math.max(5, WRITER_SECONDS / 3));
+  const oneRate = one.saves / Math.max(5, WRITER_SECONDS / 3);
+  const crowd = await writers(url, json, recipes, WRITER_SECONDS);
+  const crowdRate = crowd.saves / WRITER_SECONDS;
+
+  const target = recipes[0];
+  const current = ((await (await fetch(`${url}/api/recipes/${target.id}`, { headers: { cookie } })).json()) as { currentVersion: number }).currentVersion;
+  const race = await Promise.all(
+    Array.from({ length: 20 }, () => fetch(`${url}/api/recipes/${target.id}`, { method: 'PUT', headers: json, body: JSON.stringify({ ...target.body, baseVersion: current }) }).then((r) => r.status)),
+  );
+  const raceStatuses = new Map<number, number>();
+  for (const status of race) raceStatuses.set(status, (raceStatuses.get(status) ?? 0) + 1);
+
+  const stamp = Date.now();
+  const signUps = await Promise.all(
+    Array.from({ length: 50 }, (_, i) =>
+      fetch(`${url}/api/auth/sign-up`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ breweryName: `Bench brewery ${i}`, name: 'Bench Person', email: `bench-${stamp}-${i}@bench.example`, password: 'bench-password-1' }),
+      }).then((r) => r.status),
+    ),
+  );
+  const signUpStatuses = new Map<number, number>();
+  for (const status of signUps) signUpStatuses.set(status, (signUpStatuses.get(status) ?? 0) + 1);
+
+  console.log(`
+Writers: each saves its own recipe (a new version per save), ${WRITER_SECONDS} s for 20 writers`);
+  console.log(`1 writer:   ${oneRate.toFixed(1)} saves/s · p50 ${percentile(one.latenciesMs, 0.5).toFixed(0)} ms · p99 ${percentile(one.latenciesMs, 0.99).toFixed(0)} ms · ${statusList(one.statuses)}`);
+  console.log(`20 writers: ${crowdRate.toFixed(1)} saves/s · p50 ${percentile(crowd.latenciesMs, 0.5).toFixed(0)} ms · p99 ${percentile(crowd.latenciesMs, 0.99).toFixed(0)} ms · ${statusList(crowd.statuses)}`);
+  console.log(`20 saves of one version at once: ${statusList(raceStatuses)}`);
+  console.log(`50 sign-ups at once: ${statusList(signUpStatuses)}`);
+  const checks = [
+    [`20 writers: ${fiveXx(crowd.statuses)} × 5xx`, fiveXx(crowd.statuses) === 0 && fiveXx(one.statuses) === 0, 'goal 0'],
+    [`20 writers / 1 writer throughput = ${(crowdRate / oneRate).toFixed(2)}`, crowdRate >= oneRate, 'goal ≥ 1.00'],
+    [`20 saves of one version: ${raceStatuses.get(200) ?? 0} × 200, ${raceStatuses.get(409) ?? 0} × 409`, raceStatuses.get(200) === 1 && raceStatuses.get(409) === 19, 'goal 1 and 19, 0 × 5xx'],
+    [`50 sign-ups at once: ${fiveXx(signUpStatuses)} × 5xx`, fiveXx(signUpStatuses) === 0, 'goal 0 (429 is fine)'],
+  ] as const;
+  for (const [text, ok, goal] of checks) console.log(`${ok ? 'meets' : 'MISSES'}  ${text}  (${goal})`);
+}
+
 async function main(): Promise<void> {
   const { child, url, dir } = await startServer();
   try {
@@ -172,6 +266,7 @@ async function main(): Promise<void> {
     console.log('');
     for (const [text, ok, goal] of checks) console.log(`${ok ? 'meets' : 'MISSES'}  ${text}  (${goal})`);
     await searchLatency(url, cookie);
+    await writerFigures(url, cookie);
     if (results.some((r) => r.errors + r.non2xx > 0)) console.log('\nSome requests failed: the figures above are not valid.');
   } finally {
     child.kill('SIGTERM');
