@@ -55,7 +55,7 @@ async function atLeastFloor<T>(work: () => Promise<T>): Promise<T> {
 
 authRouter.post('/sign-up', allow('public'), byAddress, limits.signUp, validate({ body: signUpSchema }), async (_req, res) => {
   await atLeastFloor(() => auth.signUp(res.locals.body as SignUpInput));
-  res.status(202).json({ message: 'Check your e-mail: we sent a link to finish creating the brewery account. It works for 24 hours.' });
+  res.status(202).json({ message: 'We sent a link to finish creating the brewery account. It works for 24 hours.' });
 });
 
 authRouter.post('/confirm-sign-up', allow('public'), byAddress, limits.confirm, validate({ body: confirmSignUpSchema }), async (_req, res) => {
