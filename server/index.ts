@@ -6,6 +6,7 @@ import { prepareDatabase } from './db';
 import { logger } from './logger';
 import { removeOrphanUploads } from './services/attachments';
 import { redactExpiredLinks } from './services/outbox';
+import { sessionSigningKey } from './services/sessions';
 import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
 import { seedDemoRecipesIfEmpty } from './seed/demo-recipes';
 import { seedIngredientsIfEmpty } from './seed/ingredients';
@@ -13,6 +14,8 @@ import { seedIngredientsIfEmpty } from './seed/ingredients';
 /** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
 export async function main(): Promise<number> {
   await prepareDatabase();
+  // Made (or read) now, so the first start leaves the secret beside the database rather than at the first sign-in.
+  sessionSigningKey();
   await removeOrphanUploads();
   await redactExpiredLinks();
   // The demo passwords are published in the README: printed only when the accounts were just made.
