@@ -99,11 +99,32 @@ function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients
   return { portions, addedG, fromIngredientsG, sweetOnlyG };
 }
 
-/** Volumes of CO2 in the liquid when it is sealed, from the given value or from the temperature it was last open at. */
-export function residualVolumes(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC'>): number {
+/** True when neither the residual CO2 nor the temperature the base was last open at is given. */
+export function residualCo2Unknown(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC'>): boolean {
+  return (input.residualCo2Volumes === undefined || input.residualCo2Volumes === null) && (input.lastOpenTempC === undefined || input.lastOpenTempC === null);
+}
+
+/**
+ * Volumes of CO2 in the liquid when it is sealed: the given value, or saturation under 1 atm at the temperature it
+ * was last open at. When neither is known it is never taken as zero: a fermented base holds CO2, and counting more of
+ * it gives the higher pressure, so it is taken as saturated under 1 atm at the sealing temperature (and said so).
+ */
+export function residualVolumes(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC' | 'sealedTempC'>): number {
   if (input.residualCo2Volumes !== undefined && input.residualCo2Volumes !== null) return input.residualCo2Volumes;
   if (input.lastOpenTempC !== undefined && input.lastOpenTempC !== null) return residualVolumesAfterOpen(input.lastOpenTempC);
-  return 0;
+  return residualVolumesAfterOpen(input.sealedTempC);
+}
+
+/** The assumption shown with every answer whose residual CO2 was not given. */
+export function residualAssumption(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC' | 'sealedTempC'>): CarbonationResult['assumptions'] {
+  if (!residualCo2Unknown(input)) return [];
+  return [
+    {
+      name: 'Residual CO2 of the base (not given)',
+      value: `${round(residualVolumes(input), 2)} volumes: saturated under 1 atm at the sealing temperature, ${input.sealedTempC} °C. Enter a measured value or the temperature the base was last open at to replace it.`,
+      source: 'taken high on purpose, so that pressure is not underestimated',
+    },
+  ];
 }
 
 function caseResult(input: CarbonationInput, container: Container, portions: FermentableSugar[], which: YieldCase): CaseResult {
@@ -226,7 +247,7 @@ export function computeCarbonation(input: CarbonationInput): CarbonationResult {
       ...alcoholFindings(worst, expected, input.abvLimitPercent),
       ...inputFindings(input, fermentableGPerL),
     ],
-    assumptions: ASSUMPTIONS,
+    assumptions: [...residualAssumption(input), ...ASSUMPTIONS],
   };
 }
 
@@ -257,6 +278,8 @@ export interface PrimingResult {
   /** Worst-case gauge pressure at highestTempC with sugarG. */
   worstGaugeBarAtHighest: number;
   findings: Finding[];
+  /** What was taken for inputs that were not given (the residual CO2 of the base). */
+  assumptions: CarbonationResult['assumptions'];
 }
 
 /** Sugar for a target carbonation, the alcohol it brings, and the most sugar the bottle's rating allows. */
@@ -307,5 +330,6 @@ export function computePriming(input: PrimingInput): PrimingResult {
     maxSafeSugarG,
     worstGaugeBarAtHighest: worstGauge,
     findings,
+    assumptions: residualAssumption(input),
   };
 }

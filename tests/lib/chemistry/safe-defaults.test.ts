@@ -1,0 +1,50 @@
+import { computeCarbonation, computePriming, residualVolumes, type CarbonationInput } from '@/lib/chemistry/carbonation';
+
+// A 500 mL bottle with 2.5 g of sucrose, sealed at 20 °C, nothing said about the CO2 already in the base.
+const bottle: CarbonationInput = {
+  liquidMl: 500,
+  headspaceMl: 25,
+  sugars: [{ type: 'sucrose', grams: 2.5 }],
+  ingredients: [],
+  residualCo2Volumes: null,
+  lastOpenTempC: null,
+  sealedTempC: 20,
+  temperaturesC: [4, 20, 35],
+  maxWorkingPressureBar: 3,
+  baseAbvPercent: 0,
+  yield: 'worst',
+  abvLimitPercent: 0.5,
+};
+
+describe('residual CO2 of the base when it is not given', () => {
+  it('is saturation under 1 atm at the sealing temperature, never zero', () => {
+    // Bunsen coefficient of CO2 in water at 20 °C: 0.878 L/L (Lange's Handbook of Chemistry, from memory);
+    // at 4 °C about 1.50 L/L (same table, between 0 °C 1.713 and 5 °C 1.424).
+    expect(residualVolumes(bottle)).toBeCloseTo(0.878, 1);
+    expect(residualVolumes({ ...bottle, sealedTempC: 4 })).toBeGreaterThan(1.4);
+    expect(residualVolumes({ ...bottle, residualCo2Volumes: 0 })).toBe(0);
+  });
+
+  it('raises the answer above the zero-residual one by the saturation volumes, and says so', () => {
+    const unknown = computeCarbonation(bottle);
+    const zero = computeCarbonation({ ...bottle, residualCo2Volumes: 0 });
+    // By hand: 2.5 g sucrose in 0.5 L = 5 g/L × 0.51428 g CO2/g ÷ 1.9635 g/L per volume = 1.3096 volumes from sugar;
+    // with the base saturated at 20 °C (0.878) the total is about 2.19 volumes.
+    expect(zero.co2.totalVolumes).toBeCloseTo(1.3096, 3);
+    expect(unknown.co2.totalVolumes).toBeCloseTo(1.3096 + 0.878, 1);
+    expect(unknown.pressures[2].gaugeBar).toBeGreaterThan(zero.pressures[2].gaugeBar + 1);
+    expect(unknown.assumptions[0].name).toMatch(/Residual CO2 of the base \(not given\)/);
+    expect(computeCarbonation({ ...bottle, residualCo2Volumes: 0.5 }).assumptions.some((a) => /not given/.test(a.name))).toBe(false);
+  });
+
+  it('asks less sugar for a target and allows less at most, in the priming helper', () => {
+    const priming = { liquidMl: 500, headspaceMl: 25, targetVolumes: 2.5, sugarType: 'sucrose' as const, sealedTempC: 20, highestTempC: 35, maxWorkingPressureBar: 3, baseAbvPercent: 0, abvLimitPercent: 0.5, yield: 'worst' as const };
+    const unknown = computePriming(priming);
+    const zero = computePriming({ ...priming, residualCo2Volumes: 0 });
+    // By hand: (2.5 − 0.878) volumes × 1.9635 g/L ÷ 0.51428 × 0.5 L = 3.10 g, against 2.5 × 1.9635 ÷ 0.51428 × 0.5 = 4.77 g.
+    expect(zero.sugarG).toBeCloseTo(4.77, 1);
+    expect(unknown.sugarG).toBeCloseTo(3.1, 1);
+    expect(unknown.maxSafeSugarG!).toBeLessThan(zero.maxSafeSugarG!);
+    expect(unknown.assumptions).toHaveLength(1);
+  });
+});
