@@ -66,8 +66,13 @@ export interface CarbonationResult extends CaseResult {
   assumptions: { name: string; value: string; source: string }[];
 }
 
-/** Temperatures the model is meant for, °C. Outside them the solubility fit and the ideal-gas headspace are extrapolated. */
-export const MODEL_RANGE_C = { min: 0, max: 50 } as const;
+/**
+ * Temperatures the model is meant for, °C: the range Weiss (1974) fitted his solubility equation to (−1 to 40 °C),
+ * kept above freezing. Outside it the numbers are extrapolated.
+ */
+export const MODEL_RANGE_C = { min: 0, max: 40 } as const;
+/** Temperatures the API accepts at all, °C: beyond these a drink is frozen solid or the bottle is on a stove. */
+export const ACCEPTED_TEMP_C = { min: -5, max: 60 } as const;
 /** Fermentable sugar above this, g/L, is far beyond bottle conditioning (common practice, no source: 4–12 g/L is usual). */
 export const ABSURD_SUGAR_G_PER_L = 40;
 /** Within this share of the rating, pressure is a caution. */
@@ -173,8 +178,9 @@ function alcoholFindings(worst: CaseResult, expected: CaseResult, limit: number)
   const total = worst.alcohol.totalAbvPercent;
   const values = { worstTotalAbvPercent: round(total, 3), expectedTotalAbvPercent: round(expected.alcohol.totalAbvPercent, 3), limitAbvPercent: limit };
   const text = `${round(total, 2)} % ABV in the worst case`;
-  if (total > limit) return [{ level: 'danger', code: 'alcohol-over-limit', message: `${text}: over the ${limit} % ABV limit for non-alcoholic drinks.`, values }];
-  if (total > limit * 0.8) return [{ level: 'caution', code: 'alcohol-near-limit', message: `${text}: within 20 % of the ${limit} % ABV limit.`, values }];
+  // US rules (27 CFR 7.1, and 27 CFR 1.10 and 26 U.S.C. 5052 for beer: "0.5 percent or more"): at the limit is over it.
+  if (total >= limit) return [{ level: 'danger', code: 'alcohol-over-limit', message: `${text}: at or over the ${limit} % ABV limit for non-alcoholic drinks.`, values }];
+  if (total >= limit * 0.8) return [{ level: 'caution', code: 'alcohol-near-limit', message: `${text}: within 20 % of the ${limit} % ABV limit.`, values }];
   return [{ level: 'ok', code: 'alcohol-within-limit', message: `${text}, under the ${limit} % ABV limit.`, values }];
 }
 
@@ -182,6 +188,16 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
   const findings: Finding[] = [];
   const temps = [...input.temperaturesC, input.sealedTempC, ...(input.lastOpenTempC != null ? [input.lastOpenTempC] : [])];
   const outside = temps.filter((t) => t < MODEL_RANGE_C.min || t > MODEL_RANGE_C.max);
+  const freezing = temps.filter((t) => t < 0);
+  if (freezing.length > 0) {
+    findings.push({
+      level: 'caution',
+      code: 'freezing',
+      // Common practice, no source: water expands by about 9 % as it freezes and can crack a full bottle.
+      message: `${freezing.map((t) => `${t} °C`).join(', ')} is below freezing: ice expands and can crack or uncap a bottle. Keep bottles above 0 °C.`,
+      values: { minC: Math.min(...freezing) },
+    });
+  }
   if (outside.length > 0) {
     findings.push({
       level: 'caution',
@@ -316,9 +332,9 @@ export function computePriming(input: PrimingInput): PrimingResult {
     findings.push({ level: 'caution', code: 'no-rating', message: 'No bottle rating was given: choose a bottle format to see the most sugar it can take.' });
   }
   const total = input.baseAbvPercent + added;
-  if (total > input.abvLimitPercent) {
-    findings.push({ level: 'danger', code: 'alcohol-over-limit', message: `This sugar brings the drink to ${round(total)} % ABV, over the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
-  } else if (total > input.abvLimitPercent * 0.8) {
+  if (total >= input.abvLimitPercent) {
+    findings.push({ level: 'danger', code: 'alcohol-over-limit', message: `This sugar brings the drink to ${round(total)} % ABV, at or over the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
+  } else if (total >= input.abvLimitPercent * 0.8) {
     findings.push({ level: 'caution', code: 'alcohol-near-limit', message: `This sugar brings the drink to ${round(total)} % ABV, within 20 % of the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
   }
   return {

@@ -1,9 +1,10 @@
 import * as yup from 'yup';
 
+import { ACCEPTED_TEMP_C } from '../chemistry/carbonation';
 import { SUGAR_TYPES, type SugarType } from '../chemistry/sugars';
 import { numberField } from './numbers';
 
-const temperature = (label: string) => numberField(label, { min: -20, max: 100, unit: '°C' });
+const temperature = (label: string) => numberField(label, { min: ACCEPTED_TEMP_C.min, max: ACCEPTED_TEMP_C.max, unit: '°C' });
 const sugarType = () => yup.string().oneOf(SUGAR_TYPES, `Choose one of: ${SUGAR_TYPES.join(', ')}.`) as yup.StringSchema<SugarType>;
 const yieldCase = () => yup.string().oneOf(['worst', 'expected'] as const, 'Choose worst or expected.').default('worst');
 

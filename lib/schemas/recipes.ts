@@ -1,5 +1,6 @@
 import * as yup from 'yup';
 
+import { ACCEPTED_TEMP_C } from '../chemistry/carbonation';
 import { SUGAR_TYPES, type SugarType } from '../chemistry/sugars';
 import { numberField } from './numbers';
 
@@ -13,7 +14,7 @@ export const METHODS = ['in-bottle', 'steep-strain'] as const;
 export type Method = (typeof METHODS)[number];
 export const METHOD_LABELS: Record<Method, string> = { 'in-bottle': 'In the bottle', 'steep-strain': 'Steep, strain, then carbonate' };
 
-const temp = (label: string) => numberField(label, { min: -5, max: 60, unit: '°C' });
+const temp = (label: string) => numberField(label, { min: ACCEPTED_TEMP_C.min, max: ACCEPTED_TEMP_C.max, unit: '°C' });
 const hours = (label: string) => numberField(label, { min: 0, max: 24 * 60, unit: 'h' });
 
 /** What a recipe version holds, everything per litre of finished drink or per bottle of its format. */

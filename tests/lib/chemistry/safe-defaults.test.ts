@@ -48,3 +48,32 @@ describe('residual CO2 of the base when it is not given', () => {
     expect(unknown.assumptions).toHaveLength(1);
   });
 });
+
+describe('alcohol exactly at the limit', () => {
+  // 27 CFR 7.1 (and 26 U.S.C. 5052 for beer): a malt beverage is one of "0.5 percent or more of alcohol by volume".
+  // By hand: sucrose → 4 ethanol per C12H22O11, 4 × 46.069 / 342.30 = 0.53834 g ethanol per g; ÷ 0.78924 g/mL
+  // (CRC) = 0.68210 mL per g. In 1 L, x g of sucrose add 0.068210·x % ABV, so 0.5 % needs 7.3303 g.
+  const oneLitre: CarbonationInput = { ...bottle, liquidMl: 1000, headspaceMl: 40, residualCo2Volumes: 0, maxWorkingPressureBar: 20, baseAbvPercent: 0, temperaturesC: [20] };
+  const level = (grams: number) => computeCarbonation({ ...oneLitre, sugars: [{ type: 'sucrose', grams }] }).findings.find((f) => f.code.startsWith('alcohol'))!;
+
+  it('is danger at 0.500 % and just above; caution from 80 % of it (0.400 %)', () => {
+    expect(level(7.3303).level).toBe('danger');
+    expect(level(7.3303).values!.worstTotalAbvPercent).toBeCloseTo(0.5, 3);
+    expect(level(7.32).level).toBe('caution');
+    // 0.4 % ÷ 0.068210 = 5.8642 g: at 80 % of the limit a caution, just under it ok.
+    expect(level(5.8643).level).toBe('caution');
+    expect(level(5.85).level).toBe('ok');
+  });
+});
+
+describe('temperatures the model does not cover', () => {
+  // Weiss (1974) fitted the solubility equation from −1 to 40 °C.
+  const codes = (temperaturesC: number[]) => computeCarbonation({ ...bottle, temperaturesC }).findings.map((f) => f.code);
+
+  it('gives a caution above 40 °C and a freezing caution below 0 °C, none at 0 and 40 °C', () => {
+    expect(codes([0, 40])).not.toContain('temperature-out-of-range');
+    expect(codes([0, 40])).not.toContain('freezing');
+    expect(codes([40.5])).toContain('temperature-out-of-range');
+    expect(codes([-1])).toEqual(expect.arrayContaining(['temperature-out-of-range', 'freezing']));
+  });
+});
