@@ -17,8 +17,12 @@ export interface Finding {
 /** Sugar that an ingredient brings into the liquid, already resolved from the ingredient library. */
 export interface IngredientSugar {
   name: string;
-  /** Grams of sugars reaching the liquid (grams × sugars per gram × share reaching the liquid). */
+  /** Grams of sugars reaching the liquid in the expected case (grams × sugars per gram × share reaching the liquid). */
   sugarG: number;
+  /** Grams reaching the liquid in the worst case (all of it when steeped); sugarG when absent. */
+  worstSugarG?: number;
+  /** Where the sugar figure comes from: measured sugars, available carbohydrate standing in for them, or nothing. */
+  sugarBasis?: 'measured' | 'available-carbohydrate' | 'unknown';
   /** Share of those sugars that yeast can ferment (0–1). */
   fermentableShare: number;
   /** Grams of fat the ingredient brings (for the rancidity caution). */
@@ -82,7 +86,7 @@ const round = (value: number, digits = 2) => Math.round(value * 10 ** digits) / 
 /** Six significant figures: far beyond what the model can claim, and answers stay small (a full float is 18 characters). */
 const sig = (value: number) => (Number.isFinite(value) ? Number(value.toPrecision(6)) : value);
 
-function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients'>) {
+function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients'>, which: YieldCase) {
   const portions: FermentableSugar[] = [];
   let addedG = 0;
   let fromIngredientsG = 0;
@@ -95,9 +99,10 @@ function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients
     portions.push({ grams: sugarG * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole });
   }
   for (const ingredient of input.ingredients) {
-    const fermentable = ingredient.sugarG * ingredient.fermentableShare;
+    const sugarG = which === 'worst' ? (ingredient.worstSugarG ?? ingredient.sugarG) : ingredient.sugarG;
+    const fermentable = sugarG * ingredient.fermentableShare;
     fromIngredientsG += fermentable;
-    sweetOnlyG += ingredient.sugarG - fermentable;
+    sweetOnlyG += sugarG - fermentable;
     // Mixed fruit sugars are counted with sucrose's yield per gram, the highest of the common sugars.
     portions.push({ grams: fermentable, molarMass: SUGARS.sucrose.molarMass, co2PerMole: SUGARS.sucrose.co2PerMole });
   }
@@ -221,6 +226,7 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
       message: 'Fruit, purée or other solids stay in the bottle: fermentation and pressure keep rising as long as sugar remains. Rely on the worst case, chill on time and check a test bottle.',
     });
   }
+  // Steeped or in the bottle alike: fat reaches the liquid either way.
   const fatty = input.ingredients.filter((i) => i.fatG > 0.5);
   if (fatty.length > 0) {
     findings.push({
@@ -234,6 +240,28 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
   return findings;
 }
 
+/** Lines whose sugar is estimated or unknown: never counted as zero without saying so. */
+function sugarBasisFindings(ingredients: IngredientSugar[]): Finding[] {
+  const findings: Finding[] = [];
+  const estimated = ingredients.filter((i) => i.sugarBasis === 'available-carbohydrate').map((i) => i.name);
+  const unknown = ingredients.filter((i) => i.sugarBasis === 'unknown').map((i) => i.name);
+  if (estimated.length > 0) {
+    findings.push({
+      level: 'caution',
+      code: 'sugar-estimated',
+      message: `${[...new Set(estimated)].join(', ')}: sugars not measured, so the worst case counts all available carbohydrate (carbohydrate minus fibre) as sugar. Enter the sugars from the label or the supplier for a closer figure.`,
+    });
+  }
+  if (unknown.length > 0) {
+    findings.push({
+      level: 'danger',
+      code: 'sugar-unknown',
+      message: `${[...new Set(unknown)].join(', ')}: no sugar or carbohydrate value, so its sugar cannot be counted. Enter one from the label or the supplier's sheet before sealing anything.`,
+    });
+  }
+  return findings;
+}
+
 const ASSUMPTIONS: CarbonationResult['assumptions'] = [
   { name: 'CO2 solubility', value: 'K0(T), fresh water', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
   { name: 'Headspace', value: 'ideal gas; sealed-in air and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)', source: 'ideal gas, Dalton' },
@@ -242,16 +270,24 @@ const ASSUMPTIONS: CarbonationResult['assumptions'] = [
   { name: 'Volume of CO2', value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`, source: 'CODATA 2018' },
   { name: 'Alcohol', value: 'ethanol 0.78924 g/mL at 20 °C', source: 'CRC Handbook' },
   { name: 'Residual CO2 from temperature', value: 'saturated under 1 atm of CO2', source: 'common practice, no source' },
+  { name: 'Steeped ingredients', value: 'the expected case takes the extraction share you give; the worst case, which the findings judge, takes all of the sugar', source: 'taken high on purpose' },
+  {
+    name: 'Starch',
+    value: 'not counted when sugars are measured: kombucha cultures ferment little starch (their yeasts, such as Brettanomyces and Zygosaccharomyces, have little amylase). When sugars are not measured, all available carbohydrate counts',
+    source: 'microbiology of kombucha cultures (from memory)',
+  },
 ];
 
 /** Sugar, CO2, pressure at each temperature and alcohol for one sealed container, worst and expected cases. */
 export function computeCarbonation(input: CarbonationInput): CarbonationResult {
   const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
-  const { portions, addedG, fromIngredientsG, sweetOnlyG } = fermentableSugars(input);
+  const worstSugars = fermentableSugars(input, 'worst');
+  const expectedSugars = fermentableSugars(input, 'expected');
+  const { addedG, fromIngredientsG, sweetOnlyG } = input.yield === 'worst' ? worstSugars : expectedSugars;
   const fermentableG = addedG + fromIngredientsG;
   const fermentableGPerL = (fermentableG / input.liquidMl) * 1000;
-  const worst = caseResult(input, container, portions, 'worst');
-  const expected = caseResult(input, container, portions, 'expected');
+  const worst = caseResult(input, container, worstSugars.portions, 'worst');
+  const expected = caseResult(input, container, expectedSugars.portions, 'expected');
   const chosen = input.yield === 'worst' ? worst : expected;
   const brief = (c: CaseResult): CaseSummary => ({ co2: c.co2, alcohol: c.alcohol, gaugeBar: c.pressures.map((p) => p.gaugeBar) });
   return {
@@ -261,7 +297,8 @@ export function computeCarbonation(input: CarbonationInput): CarbonationResult {
     findings: [
       ...pressureFindings(worst, input.maxWorkingPressureBar ?? null),
       ...alcoholFindings(worst, expected, input.abvLimitPercent),
-      ...inputFindings(input, fermentableGPerL),
+      ...inputFindings(input, ((worstSugars.addedG + worstSugars.fromIngredientsG) / input.liquidMl) * 1000),
+      ...sugarBasisFindings(input.ingredients),
     ],
     assumptions: [...residualAssumption(input), ...ASSUMPTIONS],
   };

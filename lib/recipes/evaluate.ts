@@ -2,15 +2,12 @@ import { computeCarbonation, type CarbonationResult } from '../chemistry/carbona
 import type { YieldCase } from '../chemistry/fermentation';
 import type { Allergen } from '../ingredients';
 import type { RecipeContent } from '../schemas/recipes';
+import { ingredientContribution, type IngredientNutrients } from './ingredient-sugar';
 import { gramsPerLitre } from './scaling';
 
 /** What the recipe needs to know of each ingredient it uses. */
-export interface IngredientFacts {
+export interface IngredientFacts extends IngredientNutrients {
   id: number;
-  name: string;
-  sugarsG: number | null;
-  fatG: number | null;
-  fermentableShare: number;
   allergens: Allergen[];
   costPerKg: number | null;
 }
@@ -32,6 +29,9 @@ export interface RecipeEvaluation {
   temperatureNames: string[];
 }
 
+/** An ingredient the library no longer knows: nothing measured, so its sugar is a danger finding, never zero. */
+const UNKNOWN_INGREDIENT: IngredientNutrients = { name: 'Unknown ingredient', sugarsG: null, carbohydrateG: null, fibreG: null, fatG: null, fermentableShare: 1 };
+
 /**
  * A recipe's numbers for one bottle of its format: the sugar from the base's residual sugar, the ingredients and
  * the added sugars, then the engine's carbonation, pressure and alcohol with its findings. In the bottle the solids
@@ -43,8 +43,8 @@ export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingr
   const lines = content.lines.map((line) => {
     const facts = ingredients.get(line.ingredientId);
     const gramsPerBottle = gramsPerLitre({ name: '', amount: line.amount, unit: line.unit as never }, bottle.liquidMl) * litresPerBottle;
-    const share = inBottle ? 1 : line.extractionPct / 100;
-    return { line, facts, gramsPerBottle, sugarToLiquidG: gramsPerBottle * ((facts?.sugarsG ?? 0) / 100) * share };
+    const contribution = ingredientContribution(facts ?? UNKNOWN_INGREDIENT, gramsPerBottle, { inBottle, extractionShare: line.extractionPct / 100 });
+    return { line, facts, gramsPerBottle, contribution, sugarToLiquidG: contribution.sugarG };
   });
   const carbonation = computeCarbonation({
     liquidMl: bottle.liquidMl,
@@ -54,13 +54,7 @@ export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingr
       { type: 'sucrose', grams: content.baseBrew.residualSugarGPerL * litresPerBottle },
       ...content.sugars.map((s) => ({ type: s.type, grams: s.gPerL * litresPerBottle })),
     ],
-    ingredients: lines.map(({ facts, gramsPerBottle, sugarToLiquidG }) => ({
-      name: facts?.name ?? 'Unknown ingredient',
-      sugarG: sugarToLiquidG,
-      fermentableShare: facts?.fermentableShare ?? 1,
-      fatG: inBottle ? gramsPerBottle * ((facts?.fatG ?? 0) / 100) : 0,
-      inBottle,
-    })),
+    ingredients: lines.map(({ contribution }) => contribution),
     residualCo2Volumes: content.baseBrew.residualCo2Volumes,
     lastOpenTempC: content.baseBrew.lastOpenTempC,
     sealedTempC: content.process.carbonateTempC,

@@ -3,6 +3,7 @@ import { computeCarbonation, computePriming, type CarbonationResult, type Ingred
 import type { BrixRequest, CarbonationRequest, PrimingRequest } from '../../lib/schemas/calculations';
 import { Op } from 'sequelize';
 
+import { ingredientContribution } from '../../lib/recipes/ingredient-sugar';
 import { Ingredient } from '../db';
 import { badRequest } from '../errors';
 import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
@@ -38,8 +39,8 @@ async function abvLimit(auth: AuthContext, given: number | null | undefined): Pr
 }
 
 /**
- * The sugar and fat each ingredient line brings: grams × sugars per gram × the share reaching the liquid. Only the
- * dataset and the brewery's own house ingredients may be used (archived ones too: old recipes still name them).
+ * The sugar and fat each ingredient line brings (`ingredientContribution`, shared with recipes and the card). Only
+ * the dataset and the brewery's own house ingredients may be used (archived ones too: old recipes still name them).
  */
 async function resolveIngredients(auth: AuthContext, lines: CarbonationRequest['ingredients']): Promise<IngredientSugar[]> {
   if (lines.length === 0) return [];
@@ -53,13 +54,7 @@ async function resolveIngredients(auth: AuthContext, lines: CarbonationRequest['
   }
   return lines.map((line) => {
     const ingredient = byId.get(line.ingredientId)!;
-    return {
-      name: ingredient.name,
-      sugarG: line.grams * ((ingredient.sugarsG ?? 0) / 100) * (line.extractionPct / 100),
-      fermentableShare: ingredient.fermentableShare,
-      fatG: line.grams * ((ingredient.fatG ?? 0) / 100),
-      inBottle: line.inBottle,
-    };
+    return ingredientContribution(ingredient, line.grams, { inBottle: line.inBottle, extractionShare: line.extractionPct / 100 });
   });
 }
 

@@ -34,7 +34,7 @@ async function ownRecipe(auth: AuthContext, id: number): Promise<Recipe> {
 async function ingredientFacts(auth: AuthContext, content: RecipeContent, strict: boolean): Promise<Map<number, IngredientFacts>> {
   const ids = [...new Set(content.lines.map((l) => l.ingredientId))];
   const rows = ids.length === 0 ? [] : await Ingredient.findAll({ where: { id: ids, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] } });
-  const facts = new Map(rows.map((r) => [r.id, { id: r.id, name: r.name, sugarsG: r.sugarsG, fatG: r.fatG, fermentableShare: r.fermentableShare, allergens: r.allergens, costPerKg: r.costPerKg }]));
+  const facts = new Map(rows.map((r) => [r.id, { id: r.id, name: r.name, sugarsG: r.sugarsG, carbohydrateG: r.carbohydrateG, fibreG: r.fibreG, fatG: r.fatG, fermentableShare: r.fermentableShare, allergens: r.allergens, costPerKg: r.costPerKg }]));
   if (strict) {
     const fields: Record<string, string> = {};
     content.lines.forEach((line, i) => {

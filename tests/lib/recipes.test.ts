@@ -2,9 +2,10 @@ import { diffRecipes } from '@/lib/recipes/diff';
 import { evaluateRecipe, type IngredientFacts } from '@/lib/recipes/evaluate';
 import type { RecipeContent } from '@/lib/schemas/recipes';
 
-// USDA SR25: strawberries, raw (09316) 4.89 g sugars and 0.30 g fat per 100 g; cookies, shortbread (18192) as below.
-const strawberry: IngredientFacts = { id: 1, name: 'Strawberries, raw', sugarsG: 4.89, fatG: 0.3, fermentableShare: 1, allergens: [], costPerKg: 6 };
-const shortbread: IngredientFacts = { id: 2, name: 'Shortbread', sugarsG: 20, fatG: 24, fermentableShare: 1, allergens: ['wheat', 'milk'], costPerKg: 12 };
+// USDA SR25: strawberries, raw (09316) 4.89 g sugars, 7.68 g carbohydrate, 2.0 g fibre and 0.30 g fat per 100 g;
+// cookies, shortbread (18192) 64.5 g carbohydrate and 1.8 g fibre, with round sugar and fat figures as below.
+const strawberry: IngredientFacts = { id: 1, name: 'Strawberries, raw', sugarsG: 4.89, carbohydrateG: 7.68, fibreG: 2, fatG: 0.3, fermentableShare: 1, allergens: [], costPerKg: 6 };
+const shortbread: IngredientFacts = { id: 2, name: 'Shortbread', sugarsG: 20, carbohydrateG: 64.5, fibreG: 1.8, fatG: 24, fermentableShare: 1, allergens: ['wheat', 'milk'], costPerKg: 12 };
 const facts = new Map([strawberry, shortbread].map((f) => [f.id, f]));
 const bottle = { liquidMl: 500, headspaceMl: 25, maxWorkingPressureBar: 3 };
 

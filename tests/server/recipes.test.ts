@@ -107,9 +107,10 @@ describe('PUT /api/recipes/:id (a new version per save)', () => {
 describe('POST /api/recipes/evaluate and /:id/scale', () => {
   it('answers the numbers for one bottle while editing', async () => {
     const res = await brewer.post('/api/recipes/evaluate').send({ content }).expect(200);
-    // By hand, per 473 mL: strawberries 40 × 0.473 = 18.92 g × 4.89 % × 50 % = 0.4626 g; sucrose 4 × 0.473 = 1.892 g;
-    // base 2 × 0.473 = 0.946 g. Fermentable 3.3006 g.
-    expect(res.body.carbonation.sugar.fermentableG).toBeCloseTo(3.3006, 3);
+    // By hand, per 473 mL: strawberries 40 × 0.473 = 18.92 g × 4.89 % = 0.9252 g, all of it in the worst case although
+    // 50 % is expected to leave the fruit when steeped; sucrose 4 × 0.473 = 1.892 g; base 2 × 0.473 = 0.946 g.
+    // Fermentable 3.7632 g in the worst case (3.3006 g with the extraction share).
+    expect(res.body.carbonation.sugar.fermentableG).toBeCloseTo(3.7632, 3);
     expect(res.body.temperatureNames).toEqual(['Carbonating', 'Cold store', 'Highest']);
   });
 
