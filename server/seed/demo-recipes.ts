@@ -49,8 +49,8 @@ const RECIPES: DemoRecipe[] = [
     content: (ids, bottle) => ({
       baseBrew: base({ residualSugarGPerL: 1, abvPercent: 0.05 }),
       lines: [
-        { ingredientId: ids.blackberries, amount: 70, unit: 'g-per-l', extractionPct: 50 },
-        { ingredientId: ids.elderberries, amount: 15, unit: 'g-per-l', extractionPct: 50 },
+        { ingredientId: ids.blackberries, amount: 50, unit: 'g-per-l', extractionPct: 50 },
+        { ingredientId: ids.elderberries, amount: 10, unit: 'g-per-l', extractionPct: 50 },
       ],
       sugars: [{ type: 'sucrose', gPerL: 0 }],
       process: process('steep-strain'),

@@ -14,11 +14,11 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   // Ingredients from the library.
   await page.getByLabel('Add an ingredient').fill('straw');
   await page.getByRole('button', { name: 'Add Strawberries, raw' }).click();
-  await page.getByLabel('Amount of Strawberries, raw').fill('60');
+  await page.getByLabel('Amount of Strawberries, raw').fill('30');
   await page.getByLabel('Add an ingredient').fill('ginger root');
   await page.getByRole('button', { name: 'Add Ginger root, raw' }).click();
   await page.getByLabel('Amount of Ginger root, raw').fill('2');
-  await page.getByLabel('Sucrose (table sugar) per litre').fill('2');
+  await page.getByLabel('Sucrose (table sugar) per litre').fill('1');
   await expect(page.getByText(/g of sugar into the liquid/).first()).toBeVisible();
   await expect(page.getByText(/Worst case .* within 25 %|stays well within/).first()).toBeVisible();
   await shot(page, `${prefix}-recipe-designer`);
@@ -26,7 +26,7 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   // More sugar: a caution (or worse) shows before anything is sealed.
   await page.getByLabel('Sucrose (table sugar) per litre').fill('9');
   await expect(page.getByText(/is over the bottle's 3 bar rating/).first()).toBeVisible();
-  await page.getByLabel('Sucrose (table sugar) per litre').fill('4');
+  await page.getByLabel('Sucrose (table sugar) per litre').fill('2');
   await page.getByRole('button', { name: 'Save as new version' }).click();
   await expect(page.getByText('Version 2', { exact: true })).toBeVisible();
 
@@ -34,11 +34,11 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   await page.getByRole('radio', { name: 'Scale' }).click();
   await page.getByLabel('Number of bottles').fill('200');
   await expect(page.getByText(/Batch: 200 bottles of Glass crown cap 473 mL/)).toBeVisible();
-  // 60 g/L × 94.6 L = 5676 g → 5.68 kg; sucrose 4 g/L → 378.4 g → 380 g (5 g steps).
-  await expect(page.getByText('5.68 kg', { exact: true })).toBeVisible();
-  await expect(page.getByText('380 g', { exact: true })).toBeVisible();
+  // 30 g/L × 94.6 L = 2838 g → 2.84 kg; ginger and sucrose, 2 g/L each → 189.2 g → 190 g (5 g steps).
+  await expect(page.getByText('2.84 kg', { exact: true })).toBeVisible();
+  await expect(page.getByText('190 g', { exact: true })).toHaveCount(2);
   await expect(page.getByText(/to top up after straining/)).toBeVisible();
-  await expect(page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 380 g sucrose/)).toBeVisible();
+  await expect(page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 190 g sucrose/)).toBeVisible();
   await shot(page, `${prefix}-recipe-scaled`);
 }
 
