@@ -47,6 +47,10 @@ export interface CarbonationInput {
   abvLimitPercent: number;
   /** Solids or purée left in the bottle even without library ingredients. */
   solidsInBottle?: boolean;
+  /** pH of the base before flavouring, when known. */
+  ph?: number | null;
+  /** A missing pH is itself a caution (a version submitted for review must state it). */
+  phRequired?: boolean;
 }
 
 export interface CaseResult {
@@ -240,6 +244,30 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
   return findings;
 }
 
+/**
+ * The acidity limit for kombucha that public-health guidance uses: pH 4.2 or below keeps pathogens from growing
+ * (FDA Food Code 2022, the kombucha variances under 3-502.11 as state health departments apply them; from memory).
+ */
+export const PH_LIMIT = 4.2;
+/** From here up to the limit, a caution: little margin left (common practice, no source). */
+export const PH_CAUTION_FROM = 4.0;
+
+function phFindings(input: Pick<CarbonationInput, 'ph' | 'phRequired'>): Finding[] {
+  if (input.ph === undefined || input.ph === null) {
+    return input.phRequired
+      ? [{ level: 'caution', code: 'ph-missing', message: `No pH is given for the base. Measure it: a base must be at pH ${PH_LIMIT} or below before it is flavoured.` }]
+      : [];
+  }
+  const values = { ph: input.ph, limitPh: PH_LIMIT };
+  if (input.ph > PH_LIMIT) {
+    return [{ level: 'danger', code: 'ph-over-limit', message: `pH ${input.ph} is above ${PH_LIMIT}: the base is not acidic enough to be safe. Do not flavour it; add starter and test again.`, values }];
+  }
+  if (input.ph >= PH_CAUTION_FROM) {
+    return [{ level: 'caution', code: 'ph-near-limit', message: `pH ${input.ph} is close to the ${PH_LIMIT} limit: test again before flavouring.`, values }];
+  }
+  return [{ level: 'ok', code: 'ph-within-limit', message: `pH ${input.ph} is at or below ${PH_LIMIT}.`, values }];
+}
+
 /** Lines whose sugar is estimated or unknown: never counted as zero without saying so. */
 function sugarBasisFindings(ingredients: IngredientSugar[]): Finding[] {
   const findings: Finding[] = [];
@@ -299,6 +327,7 @@ export function computeCarbonation(input: CarbonationInput): CarbonationResult {
       ...alcoholFindings(worst, expected, input.abvLimitPercent),
       ...inputFindings(input, ((worstSugars.addedG + worstSugars.fromIngredientsG) / input.liquidMl) * 1000),
       ...sugarBasisFindings(input.ingredients),
+      ...phFindings(input),
     ],
     assumptions: [...residualAssumption(input), ...ASSUMPTIONS],
   };

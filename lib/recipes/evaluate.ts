@@ -37,7 +37,7 @@ const UNKNOWN_INGREDIENT: IngredientNutrients = { name: 'Unknown ingredient', su
  * the added sugars, then the engine's carbonation, pressure and alcohol with its findings. In the bottle the solids
  * stay and all their sugar counts; steeped and strained, each line's extraction share counts.
  */
-export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingredients: Map<number, IngredientFacts>, abvLimitPercent: number, yieldCase: YieldCase = 'worst'): RecipeEvaluation {
+export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingredients: Map<number, IngredientFacts>, abvLimitPercent: number, yieldCase: YieldCase = 'worst', options: { phRequired?: boolean } = {}): RecipeEvaluation {
   const litresPerBottle = bottle.liquidMl / 1000;
   const inBottle = content.process.method === 'in-bottle';
   const lines = content.lines.map((line) => {
@@ -61,6 +61,8 @@ export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingr
     temperaturesC: [content.process.carbonateTempC, content.process.coldStoreTempC, content.highestTempC],
     maxWorkingPressureBar: bottle.maxWorkingPressureBar,
     baseAbvPercent: content.baseBrew.abvPercent,
+    ph: content.baseBrew.ph,
+    phRequired: options.phRequired,
     yield: yieldCase,
     abvLimitPercent,
   });

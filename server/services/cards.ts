@@ -12,7 +12,7 @@ export async function recipeCard(auth: AuthContext, id: number, query: { version
   const recipe = await getRecipe(auth, id, query.version ?? undefined);
   const [scaled, evaluation, organisation, approval] = await Promise.all([
     scale(auth, id, { batch: query.batch, units: query.units, version: recipe.version }),
-    evaluate(auth, recipe.content),
+    evaluate(auth, recipe.content, { forReview: true }),
     Organisation.findByPk(auth.organisationId, { attributes: ['name'] }),
     recipe.approvedVersion === recipe.version
       ? RecipeReview.findOne({ where: { recipeId: id, versionNumber: recipe.version, action: 'approved' }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] })

@@ -162,11 +162,14 @@ export async function setRecipeArchived(auth: AuthContext, id: number, archived:
   return summary(recipe);
 }
 
-/** The numbers of a recipe (saved or being edited) for one bottle of its format. */
-export async function evaluate(auth: AuthContext, content: RecipeContent): Promise<RecipeEvaluation> {
+/**
+ * The numbers of a recipe (saved or being edited) for one bottle of its format. For review (a submitted version,
+ * the approval, the card) a missing pH is a caution of its own.
+ */
+export async function evaluate(auth: AuthContext, content: RecipeContent, options: { forReview?: boolean } = {}): Promise<RecipeEvaluation> {
   const format = await bottleFacts(auth, content);
   const facts = await ingredientFacts(auth, content, true);
-  return evaluateRecipe(content, format, facts, await cachedAbvLimit(auth.organisationId));
+  return evaluateRecipe(content, format, facts, await cachedAbvLimit(auth.organisationId), 'worst', { phRequired: options.forReview === true });
 }
 
 export async function scale(auth: AuthContext, id: number, input: ScaleRequest): Promise<ScaledRecipe & { version: number; bottleName: string }> {

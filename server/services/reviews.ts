@@ -113,7 +113,7 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
     selfApproved = true;
   }
   const version = await RecipeVersion.findOne({ where: { recipeId: id, number: input.version } });
-  const result = await evaluate(auth, version!.content);
+  const result = await evaluate(auth, version!.content, { forReview: true });
   const dangers = result.carbonation.findings.filter((f) => f.level === 'danger');
   if (dangers.length > 0 && !input.overrideReason) {
     throw new HttpError(409, 'danger_finding', `Approval is blocked by a danger finding: ${dangers.map((d) => d.message).join(' ')} To approve anyway, write why.`, {

@@ -77,3 +77,21 @@ describe('temperatures the model does not cover', () => {
     expect(codes([-1])).toEqual(expect.arrayContaining(['temperature-out-of-range', 'freezing']));
   });
 });
+
+describe('pH of the base', () => {
+  // Public-health guidance for kombucha: pH 4.2 or below (FDA Food Code 2022, kombucha variances under 3-502.11,
+  // from memory); 4.0 up to 4.2 a caution (common practice, no source).
+  const ph = (value: number | null, phRequired = false) => computeCarbonation({ ...bottle, ph: value, phRequired }).findings.find((f) => f.code.startsWith('ph-'));
+
+  it('is danger just above 4.2, caution at 4.2 and from 4.0, ok below 4.0', () => {
+    expect(ph(4.21)?.level).toBe('danger');
+    expect(ph(4.2)?.level).toBe('caution');
+    expect(ph(4.0)?.level).toBe('caution');
+    expect(ph(3.99)?.level).toBe('ok');
+  });
+
+  it('is a caution when missing on a version for review, and says nothing while designing', () => {
+    expect(ph(null, true)).toMatchObject({ level: 'caution', code: 'ph-missing' });
+    expect(ph(null)).toBeUndefined();
+  });
+});
