@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
+import { WARM_DAY_NAME } from '@/lib/recipes/evaluate';
 import type { CarbonationAnswer } from '@/lib/api/calculations';
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
@@ -26,7 +27,8 @@ export function QuickCheckResults({ answer, chart, units, limitPercent, temperat
   const chosen = answer;
   const rating = answer.bottleFormat?.maxWorkingPressureBar ?? answerRating(answer);
   const rows: Row[] = chosen.pressures.map((p, i) => ({
-    name: temperatureNames[i] ?? '',
+    // Past the names asked for comes the brewery's warm day, added when it is hotter than all of them.
+    name: temperatureNames[i] ?? WARM_DAY_NAME,
     tempC: p.tempC,
     worst: cases.worst.gaugeBar[i],
     expected: cases.expected.gaugeBar[i],

@@ -15,13 +15,13 @@ interface Props {
   saved: boolean;
 }
 
-const toInput = (v: { name: string; abvLimitPercent: string }) => ({ name: v.name, abvLimitPercent: parseNumber(v.abvLimitPercent) });
+const toInput = (v: { name: string; abvLimitPercent: string; warmestTempC: string }) => ({ name: v.name, abvLimitPercent: parseNumber(v.abvLimitPercent), warmestTempC: parseNumber(v.warmestTempC) });
 
-/** The brewery's name and the alcohol limit every calculation checks against. */
+/** The brewery's name, the alcohol limit and the warm-day temperature every calculation checks against. */
 export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Props) {
   return (
     <Formik
-      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent) }}
+      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent), warmestTempC: String(organisation.warmestTempC) }}
       enableReinitialize
       validate={(values) => check(organisationSchema, toInput(values)).errors}
       onSubmit={submitTo((values) => onSubmit(check(organisationSchema, toInput(values)).value!))}
@@ -37,6 +37,13 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
             suffix="% ABV"
             inputMode="decimal"
             hint="0.5 % ABV in the US. Other countries draw the line elsewhere: follow your local rules."
+          />
+          <FormField
+            name="warmestTempC"
+            label="Warmest the bottles may meet"
+            suffix="°C"
+            inputMode="decimal"
+            hint="A closed car, a shop window, a summer delivery. Every pressure check includes this temperature, whatever else is asked."
           />
           <Button label="Save settings" busy={isSubmitting} disabled={!dirty} onPress={() => handleSubmit()} style={styles.submit} />
         </View>

@@ -15,6 +15,8 @@ export interface Organisation {
   name: string;
   /** The brewery's line between non-alcoholic and alcoholic, % ABV. */
   abvLimitPercent: number;
+  /** The warmest the brewery's bottles may meet, °C: every pressure check includes it. */
+  warmestTempC: number;
 }
 
 export interface SessionUser {

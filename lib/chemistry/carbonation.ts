@@ -51,6 +51,11 @@ export interface CarbonationInput {
   ph?: number | null;
   /** A missing pH is itself a caution (a version submitted for review must state it). */
   phRequired?: boolean;
+  /**
+   * The warmest the bottles may meet (the brewery's setting), °C. When it is hotter than every temperature asked,
+   * it is checked too, as the last of the pressures, and the findings are judged there.
+   */
+  warmDayTempC?: number | null;
 }
 
 export interface CaseResult {
@@ -67,6 +72,8 @@ export interface CaseSummary {
 }
 
 export interface CarbonationResult extends CaseResult {
+  /** The warm-day temperature added after the asked ones (the last pressure), or null when none was added. */
+  warmDayTempC: number | null;
   sugar: { fermentableG: number; fermentableGPerL: number; sweetOnlyG: number; fromIngredientsG: number; addedG: number };
   /** Both cases side by side, in brief; the top-level co2, alcohol and pressures are those of the requested yield. */
   cases: { worst: CaseSummary; expected: CaseSummary };
@@ -79,6 +86,15 @@ export interface CarbonationResult extends CaseResult {
  * kept above freezing. Outside it the numbers are extrapolated.
  */
 export const MODEL_RANGE_C = { min: 0, max: 40 } as const;
+/** The warmest the bottles may meet when a brewery has not said otherwise, °C (a closed car in summer; common practice, no source). */
+export const DEFAULT_WARMEST_TEMP_C = 35;
+
+/** The temperatures to check: those asked, and the warm day when it is hotter than all of them. */
+export function temperaturesToCheck(temperaturesC: number[], warmDayTempC: number | null | undefined): { temperaturesC: number[]; added: number | null } {
+  if (warmDayTempC === undefined || warmDayTempC === null || temperaturesC.some((t) => t >= warmDayTempC)) return { temperaturesC, added: null };
+  return { temperaturesC: [...temperaturesC, warmDayTempC], added: warmDayTempC };
+}
+
 /** Temperatures the API accepts at all, °C: beyond these a drink is frozen solid or the bottle is on a stove. */
 export const ACCEPTED_TEMP_C = { min: -5, max: 60 } as const;
 /** Fermentable sugar above this, g/L, is far beyond bottle conditioning (common practice, no source: 4–12 g/L is usual). */
@@ -307,7 +323,9 @@ const ASSUMPTIONS: CarbonationResult['assumptions'] = [
 ];
 
 /** Sugar, CO2, pressure at each temperature and alcohol for one sealed container, worst and expected cases. */
-export function computeCarbonation(input: CarbonationInput): CarbonationResult {
+export function computeCarbonation(asked: CarbonationInput): CarbonationResult {
+  const checked = temperaturesToCheck(asked.temperaturesC, asked.warmDayTempC);
+  const input = { ...asked, temperaturesC: checked.temperaturesC };
   const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
   const worstSugars = fermentableSugars(input, 'worst');
   const expectedSugars = fermentableSugars(input, 'expected');
@@ -322,6 +340,7 @@ export function computeCarbonation(input: CarbonationInput): CarbonationResult {
     sugar: { fermentableG: sig(fermentableG), fermentableGPerL: sig(fermentableGPerL), sweetOnlyG: sig(sweetOnlyG), fromIngredientsG: sig(fromIngredientsG), addedG: sig(addedG) },
     ...chosen,
     cases: { worst: brief(worst), expected: brief(expected) },
+    warmDayTempC: checked.added,
     findings: [
       ...pressureFindings(worst, input.maxWorkingPressureBar ?? null),
       ...alcoholFindings(worst, expected, input.abvLimitPercent),
@@ -346,9 +365,13 @@ export interface PrimingInput {
   baseAbvPercent: number;
   abvLimitPercent: number;
   yield: YieldCase;
+  /** The brewery's warmest temperature, °C: the most sugar is judged at the hotter of it and highestTempC. */
+  warmDayTempC?: number | null;
 }
 
 export interface PrimingResult {
+  /** Where the most sugar and the worst pressure were judged: the hotter of highestTempC and the warm day, °C. */
+  checkedTempC: number;
   /** Grams of the sugar product (as weighed) per container, and per litre. */
   sugarG: number;
   sugarGPerL: number;
@@ -365,7 +388,9 @@ export interface PrimingResult {
 }
 
 /** Sugar for a target carbonation, the alcohol it brings, and the most sugar the bottle's rating allows. */
-export function computePriming(input: PrimingInput): PrimingResult {
+export function computePriming(asked: PrimingInput): PrimingResult {
+  const checkedTempC = Math.max(asked.highestTempC, asked.warmDayTempC ?? -Infinity);
+  const input = { ...asked, highestTempC: checkedTempC };
   const info = SUGARS[input.sugarType];
   const residual = residualVolumes(input);
   const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
@@ -404,6 +429,7 @@ export function computePriming(input: PrimingInput): PrimingResult {
     findings.push({ level: 'caution', code: 'alcohol-near-limit', message: `This sugar brings the drink to ${round(total)} % ABV, within 20 % of the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
   }
   return {
+    checkedTempC,
     sugarG,
     sugarGPerL: (sugarG / input.liquidMl) * 1000,
     residualVolumes: residual,

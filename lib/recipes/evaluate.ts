@@ -25,9 +25,12 @@ export interface RecipeEvaluation {
   allergens: Allergen[];
   /** Ingredient cost; null when a line has no cost per kg. */
   cost: { perBottle: number | null; perLitre: number | null; missing: string[] };
-  /** Temperatures reported, in order: carbonating, cold store, highest. */
+  /** Temperatures reported, in order: carbonating, cold store, highest, and the brewery's warm day when hotter. */
   temperatureNames: string[];
 }
+
+/** What the warm-day pressure is called where it is shown. */
+export const WARM_DAY_NAME = 'Warmest the bottles may meet';
 
 /** An ingredient the library no longer knows: nothing measured, so its sugar is a danger finding, never zero. */
 const UNKNOWN_INGREDIENT: IngredientNutrients = { name: 'Unknown ingredient', sugarsG: null, carbohydrateG: null, fibreG: null, fatG: null, fermentableShare: 1 };
@@ -37,7 +40,7 @@ const UNKNOWN_INGREDIENT: IngredientNutrients = { name: 'Unknown ingredient', su
  * the added sugars, then the engine's carbonation, pressure and alcohol with its findings. In the bottle the solids
  * stay and all their sugar counts; steeped and strained, each line's extraction share counts.
  */
-export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingredients: Map<number, IngredientFacts>, abvLimitPercent: number, yieldCase: YieldCase = 'worst', options: { phRequired?: boolean } = {}): RecipeEvaluation {
+export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingredients: Map<number, IngredientFacts>, abvLimitPercent: number, yieldCase: YieldCase = 'worst', options: { phRequired?: boolean; warmDayTempC?: number | null } = {}): RecipeEvaluation {
   const litresPerBottle = bottle.liquidMl / 1000;
   const inBottle = content.process.method === 'in-bottle';
   const lines = content.lines.map((line) => {
@@ -63,6 +66,7 @@ export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingr
     baseAbvPercent: content.baseBrew.abvPercent,
     ph: content.baseBrew.ph,
     phRequired: options.phRequired,
+    warmDayTempC: options.warmDayTempC,
     yield: yieldCase,
     abvLimitPercent,
   });
@@ -74,6 +78,6 @@ export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingr
     lines: lines.map(({ line, facts, gramsPerBottle, sugarToLiquidG }) => ({ ingredientId: line.ingredientId, name: facts?.name ?? 'Unknown ingredient', gramsPerBottle, sugarToLiquidG })),
     allergens,
     cost: { perBottle, perLitre: perBottle === null ? null : perBottle / litresPerBottle, missing },
-    temperatureNames: ['Carbonating', 'Cold store', 'Highest'],
+    temperatureNames: ['Carbonating', 'Cold store', 'Highest', ...(carbonation.warmDayTempC !== null ? [WARM_DAY_NAME] : [])],
   };
 }

@@ -7,6 +7,7 @@ import * as attachments from './0004-attachments';
 import * as recipes from './0005-recipes';
 import * as reviews from './0006-reviews';
 import * as secureDefaults from './0007-secure-defaults';
+import * as warmDay from './0008-warm-day';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -22,4 +23,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0005-recipes', ...recipes },
   { name: '0006-reviews', ...reviews },
   { name: '0007-secure-defaults', ...secureDefaults },
+  { name: '0008-warm-day', ...warmDay },
 ];

@@ -1,3 +1,4 @@
+import { DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 /** A brewery. Every record in Fizzwright belongs to exactly one. */
@@ -6,6 +7,8 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
   declare name: string;
   /** The line between non-alcoholic and alcoholic drinks, % ABV (0.5 in the US; other countries differ). */
   declare abvLimitPercent: CreationOptional<number>;
+  /** The warmest the bottles may meet, °C (35 by default): pressure is always judged there too. */
+  declare warmestTempC: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -15,6 +18,7 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         name: { type: DataTypes.STRING(80), allowNull: false },
         abvLimitPercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
+        warmestTempC: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_WARMEST_TEMP_C },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -49,8 +49,8 @@ const RECIPES: DemoRecipe[] = [
     content: (ids, bottle) => ({
       baseBrew: base({ residualSugarGPerL: 1, abvPercent: 0.05 }),
       lines: [
-        { ingredientId: ids.blackberries, amount: 50, unit: 'g-per-l', extractionPct: 50 },
-        { ingredientId: ids.elderberries, amount: 10, unit: 'g-per-l', extractionPct: 50 },
+        { ingredientId: ids.blackberries, amount: 35, unit: 'g-per-l', extractionPct: 50 },
+        { ingredientId: ids.elderberries, amount: 6, unit: 'g-per-l', extractionPct: 50 },
       ],
       sugars: [{ type: 'sucrose', gPerL: 0 }],
       process: process('steep-strain'),
@@ -89,7 +89,7 @@ const RECIPES: DemoRecipe[] = [
         { ingredientId: ids.ginger, amount: 8, unit: 'g-per-l', extractionPct: 60 },
         { ingredientId: ids.limeJuice, amount: 15, unit: 'g-per-l', extractionPct: 100 },
       ],
-      sugars: [{ type: 'honey', gPerL: 3 }],
+      sugars: [{ type: 'honey', gPerL: 2.5 }],
       process: process('steep-strain'),
       bottleFormatId: bottle,
       targetVolumes: 2.4,

@@ -1,3 +1,4 @@
+import { DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
 import { BottleFormat } from '../models/bottle-format';
 import { Organisation } from '../models/organisation';
 
@@ -7,6 +8,7 @@ import { Organisation } from '../models/organisation';
  */
 interface Entry {
   abvLimitPercent?: number;
+  warmestTempC?: number;
   formats?: Map<number, BottleFormat>;
 }
 
@@ -26,13 +28,23 @@ function entry(organisationId: number): Entry {
   return found;
 }
 
-export async function cachedAbvLimit(organisationId: number): Promise<number> {
+async function loadSettings(organisationId: number): Promise<Entry> {
   const e = entry(organisationId);
-  if (e.abvLimitPercent === undefined) {
-    const organisation = await Organisation.findByPk(organisationId, { attributes: ['abvLimitPercent'] });
+  if (e.abvLimitPercent === undefined || e.warmestTempC === undefined) {
+    const organisation = await Organisation.findByPk(organisationId, { attributes: ['abvLimitPercent', 'warmestTempC'] });
     e.abvLimitPercent = organisation?.abvLimitPercent ?? 0.5;
+    e.warmestTempC = organisation?.warmestTempC ?? DEFAULT_WARMEST_TEMP_C;
   }
-  return e.abvLimitPercent;
+  return e;
+}
+
+export async function cachedAbvLimit(organisationId: number): Promise<number> {
+  return (await loadSettings(organisationId)).abvLimitPercent!;
+}
+
+/** The warmest the brewery's bottles may meet, °C. */
+export async function cachedWarmestTemp(organisationId: number): Promise<number> {
+  return (await loadSettings(organisationId)).warmestTempC!;
 }
 
 /** A bottle format of the brewery (archived ones included), or undefined. */

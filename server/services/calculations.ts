@@ -6,7 +6,7 @@ import { Op } from 'sequelize';
 import { ingredientContribution } from '../../lib/recipes/ingredient-sugar';
 import { Ingredient } from '../db';
 import { badRequest } from '../errors';
-import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
+import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
 import type { AuthContext } from './sessions';
 
 interface ResolvedContainer {
@@ -65,6 +65,7 @@ export async function carbonation(auth: AuthContext, input: CarbonationRequest, 
     ...container,
     ingredients: await resolveIngredients(auth, input.ingredients),
     abvLimitPercent: await abvLimit(auth, input.abvLimitPercent),
+    warmDayTempC: await cachedWarmestTemp(auth.organisationId),
   });
   return { ...result, bottleFormat: container.bottleFormat };
 }
@@ -74,7 +75,7 @@ export async function priming(auth: AuthContext, input: PrimingRequest, headspac
   if (input.sugarType === 'lactose') {
     throw badRequest('Lactose does not ferment, so it cannot carbonate a drink.', { sugarType: 'Choose a sugar yeast can ferment.' });
   }
-  const result = computePriming({ ...input, ...container, abvLimitPercent: await abvLimit(auth, input.abvLimitPercent) });
+  const result = computePriming({ ...input, ...container, abvLimitPercent: await abvLimit(auth, input.abvLimitPercent), warmDayTempC: await cachedWarmestTemp(auth.organisationId) });
   return { ...result, bottleFormat: container.bottleFormat };
 }
 

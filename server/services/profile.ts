@@ -16,9 +16,9 @@ export async function updatePreferences(userId: number, input: PreferencesInput)
   return sessionFor(userId);
 }
 
-/** The brewery's own settings (owners only): its name and its alcohol limit. */
+/** The brewery's own settings (owners only): its name, its alcohol limit and the warmest its bottles may meet. */
 export async function updateOrganisation(organisationId: number, userId: number, input: OrganisationInput): Promise<Session> {
-  await Organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent }, { where: { id: organisationId }, individualHooks: true });
+  await Organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, warmestTempC: input.warmestTempC }, { where: { id: organisationId }, individualHooks: true });
   return sessionFor(userId);
 }
 

@@ -8,7 +8,7 @@ import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, T
 import type { RecipeDetail, RecipeSummary } from '../../lib/api/types';
 import { Ingredient, Recipe, RecipeReview, RecipeVersion, Tasting, transaction, User } from '../db';
 import { badRequest, HttpError, notFound } from '../errors';
-import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
+import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
 import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
 
@@ -169,7 +169,10 @@ export async function setRecipeArchived(auth: AuthContext, id: number, archived:
 export async function evaluate(auth: AuthContext, content: RecipeContent, options: { forReview?: boolean } = {}): Promise<RecipeEvaluation> {
   const format = await bottleFacts(auth, content);
   const facts = await ingredientFacts(auth, content, true);
-  return evaluateRecipe(content, format, facts, await cachedAbvLimit(auth.organisationId), 'worst', { phRequired: options.forReview === true });
+  return evaluateRecipe(content, format, facts, await cachedAbvLimit(auth.organisationId), 'worst', {
+    phRequired: options.forReview === true,
+    warmDayTempC: await cachedWarmestTemp(auth.organisationId),
+  });
 }
 
 export async function scale(auth: AuthContext, id: number, input: ScaleRequest): Promise<ScaledRecipe & { version: number; bottleName: string }> {

@@ -169,3 +169,18 @@ describe('PATCH /api/organisation', () => {
     expect(res.body.error.fields.abvLimitPercent).toBeDefined();
   });
 });
+
+describe('the brewery warm day (PATCH /api/organisation)', () => {
+  it('is 35 °C until an owner changes it, and every calculation of the brewery then checks it', async () => {
+    const cold = { ...bottle, temperaturesC: [4, 10] };
+    const before = await brewer.post('/api/calculations/carbonation').send(cold).expect(200);
+    expect(before.body.warmDayTempC).toBe(35);
+    await brewer.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, warmestTempC: 40 }).expect(403);
+    const saved = await owner.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, warmestTempC: 40 }).expect(200);
+    expect(saved.body.organisation.warmestTempC).toBe(40);
+    const after = await brewer.post('/api/calculations/carbonation').send(cold).expect(200);
+    expect(after.body.pressures.map((p: { tempC: number }) => p.tempC)).toEqual([4, 10, 40]);
+    const bad = await owner.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, warmestTempC: '40' }).expect(400);
+    expect(bad.body.error.fields.warmestTempC).toMatch(/must be a number/);
+  });
+});

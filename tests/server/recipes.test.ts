@@ -111,7 +111,10 @@ describe('POST /api/recipes/evaluate and /:id/scale', () => {
     // 50 % is expected to leave the fruit when steeped; sucrose 4 × 0.473 = 1.892 g; base 2 × 0.473 = 0.946 g.
     // Fermentable 3.7632 g in the worst case (3.3006 g with the extraction share).
     expect(res.body.carbonation.sugar.fermentableG).toBeCloseTo(3.7632, 3);
-    expect(res.body.temperatureNames).toEqual(['Carbonating', 'Cold store', 'Highest']);
+    // The recipe's highest is 30 °C; the brewery's warm day (35 °C by default) is hotter, so it is checked too.
+    expect(res.body.temperatureNames).toEqual(['Carbonating', 'Cold store', 'Highest', 'Warmest the bottles may meet']);
+    expect(res.body.carbonation.pressures.map((p: { tempC: number }) => p.tempC)).toEqual([22, 4, 30, 35]);
+    expect(res.body.carbonation.warmDayTempC).toBe(35);
   });
 
   it('scales to 200 bottles, with the top-up after straining', async () => {

@@ -95,3 +95,22 @@ describe('pH of the base', () => {
     expect(ph(null)).toBeUndefined();
   });
 });
+
+describe('the warm day', () => {
+  it('is checked when every asked temperature is colder, and the findings are judged there', () => {
+    const cold = computeCarbonation({ ...bottle, temperaturesC: [4, 10], warmDayTempC: 35 });
+    expect(cold.warmDayTempC).toBe(35);
+    expect(cold.pressures.map((p) => p.tempC)).toEqual([4, 10, 35]);
+    expect(cold.findings.find((f) => f.code.startsWith('pressure'))!.values!.tempC).toBe(35);
+    // Already asked at or above it: nothing is added.
+    expect(computeCarbonation({ ...bottle, temperaturesC: [4, 38], warmDayTempC: 35 }).warmDayTempC).toBeNull();
+  });
+
+  it('judges the most sugar of the priming helper at the hotter of the highest temperature and the warm day', () => {
+    const priming = { liquidMl: 500, headspaceMl: 25, targetVolumes: 2.5, sugarType: 'sucrose' as const, residualCo2Volumes: 0, sealedTempC: 20, highestTempC: 20, maxWorkingPressureBar: 3, baseAbvPercent: 0, abvLimitPercent: 0.5, yield: 'worst' as const };
+    const warm = computePriming({ ...priming, warmDayTempC: 35 });
+    expect(warm.checkedTempC).toBe(35);
+    // Gas is less soluble when warm, so the bottle takes less sugar at 35 °C than at 20 °C.
+    expect(warm.maxSafeSugarG!).toBeLessThan(computePriming(priming).maxSafeSugarG!);
+  });
+});
