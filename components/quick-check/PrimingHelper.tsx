@@ -32,24 +32,27 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
       {answer && request ? (
         <View style={styles.answer} aria-live="polite">
           <Text variant="subheading">
-            {formatNumber(answer.sugarG, 2)} g of {sugarName} per bottle
+            {answer.targetReachable
+              ? `${formatNumber(answer.sugarG, 2)} g of ${sugarName} per bottle`
+              : `At most ${formatNumber(answer.safeSugarG, 2)} g of ${sugarName} per bottle: the target is out of reach`}
           </Text>
           <Text variant="muted">
-            {formatNumber(answer.sugarGPerL, 1)} g/L. It also makes +{formatNumber(answer.addedAbvPercent, 2)} % ABV ({formatNumber(answer.totalAbvPercent, 2)} % in all): in a
-            sealed bottle the sugar that makes the fizz makes alcohol too.
+            {answer.targetReachable ? `${formatNumber(answer.sugarGPerL, 1)} g/L. It also makes` : `The target would take ${formatNumber(answer.sugarG, 2)} g (${formatNumber(answer.sugarGPerL, 1)} g/L) and make`} +
+            {formatNumber(answer.addedAbvPercent, 2)} % ABV ({formatNumber(answer.totalAbvPercent, 2)} % in all): in a sealed bottle the sugar that makes the fizz makes alcohol too.
           </Text>
           {answer.maxSafeSugarG !== null ? (
             <Text variant="muted">
-              The most this bottle takes at {formatTemp(request.highestTempC, units)} in the worst case: {formatNumber(answer.maxSafeSugarG, 2)} g (
+              The most that is safe at {formatTemp(answer.checkedTempC, units)} in the worst case (80 % of the rating, below the alcohol limit): {formatNumber(answer.maxSafeSugarG, 2)} g (
               {formatPressure(answer.worstGaugeBarAtHighest, units)} with the amount above).
             </Text>
           ) : null}
           <FindingList findings={answer.findings} />
           <Button
-            label="Use this amount"
+            label={answer.targetReachable ? 'Use this amount' : 'Use the most that is safe'}
             variant="secondary"
             style={styles.left}
-            onPress={() => setFieldValue('sugars', [{ type: values.primingSugar, grams: String(Number(answer.sugarG.toFixed(2))) }])}
+            // Never more than the most that is safe, and rounded down so rounding cannot cross it.
+            onPress={() => setFieldValue('sugars', [{ type: values.primingSugar, grams: String(Math.floor(answer.safeSugarG * 100) / 100) }])}
           />
         </View>
       ) : null}

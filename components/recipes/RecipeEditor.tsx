@@ -207,17 +207,21 @@ function TargetHelper({ units, content, liquidMl, headspaceMl, rating, fermentab
   const priming = usePrimingQuery(request);
   if (!priming.data || fermentableGPerL === null || currentAddedGPerL === null) return null;
   const fromOthers = fermentableGPerL - Math.max(0, currentAddedGPerL);
-  const needed = Math.max(0, priming.data.sugarGPerL - fromOthers);
+  const safeGPerL = (priming.data.safeSugarG / liquidMl) * 1000;
+  // Never more than the most that is safe; rounded down so rounding cannot cross it.
+  const needed = Math.floor(Math.max(0, safeGPerL - fromOthers) * 100) / 100;
   return (
     <Card title="Sugar for the target fizz">
       <Text>
-        {content.targetVolumes} volumes need {formatNumber(priming.data.sugarGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring {formatNumber(fromOthers, 1)} g/L, so add {formatNumber(needed, 1)} g/L of sucrose. The alcohol follows: +{formatNumber(priming.data.addedAbvPercent, 2)} % ABV.
+        {priming.data.targetReachable
+          ? `${content.targetVolumes} volumes need ${formatNumber(priming.data.sugarGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring ${formatNumber(fromOthers, 1)} g/L, so add ${formatNumber(needed, 1)} g/L of sucrose. The alcohol follows: +${formatNumber(priming.data.addedAbvPercent, 2)} % ABV.`
+          : `${content.targetVolumes} volumes cannot be reached safely in this bottle (${priming.data.limitedBy === 'alcohol' ? 'the alcohol would reach the limit' : 'the pressure would pass 80 % of its rating on a warm day'}). The most that is safe is ${formatNumber(safeGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring ${formatNumber(fromOthers, 1)} g/L, so add at most ${formatNumber(needed, 1)} g/L of sucrose.`}
       </Text>
       <Button
-        label="Use this sugar"
+        label={priming.data.targetReachable ? 'Use this sugar' : 'Use the most that is safe'}
         variant="secondary"
         style={styles.left}
-        onPress={() => setFieldValue('sugars', [{ type: 'sucrose', gPerL: String(Number(needed.toFixed(2))) }, ...values.sugars.filter((s) => s.type !== 'sucrose')])}
+        onPress={() => setFieldValue('sugars', [{ type: 'sucrose', gPerL: String(needed) }, ...values.sugars.filter((s) => s.type !== 'sucrose')])}
       />
       <Text variant="small">{units === 'us' ? 'Amounts in the recipe are per litre; the Scale tab gives them in US units.' : 'Amounts in the recipe are per litre of finished drink.'}</Text>
     </Card>

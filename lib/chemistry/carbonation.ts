@@ -367,7 +367,12 @@ export interface PrimingInput {
   yield: YieldCase;
   /** The brewery's warmest temperature, °C: the most sugar is judged at the hotter of it and highestTempC. */
   warmDayTempC?: number | null;
+  /** Share of the bottle's rating the most sugar may reach at the warm check (the brewery's margin; 0.8 by default). */
+  ratingShare?: number;
 }
+
+/** The most sugar keeps this share of the bottle's rating at the warm check unless a brewery says otherwise (common practice, no source). */
+export const DEFAULT_RATING_SHARE = 0.8;
 
 export interface PrimingResult {
   /** Where the most sugar and the worst pressure were judged: the hotter of highestTempC and the warm day, °C. */
@@ -378,8 +383,17 @@ export interface PrimingResult {
   residualVolumes: number;
   addedAbvPercent: number;
   totalAbvPercent: number;
-  /** Most of this sugar the bottle may take, worst case at highestTempC; null when no rating is known. */
+  /**
+   * The most of this sugar that is safe: worst case at the warm check within the rating share (80 % of the rating)
+   * and the alcohol below the limit. Null when no rating is known.
+   */
   maxSafeSugarG: number | null;
+  /** What the helpers fill: the sugar for the target, or the most that is safe when the target is beyond it. */
+  safeSugarG: number;
+  /** False when the target cannot be reached within the rating share or the alcohol limit. */
+  targetReachable: boolean;
+  /** What stops the target, when it cannot be reached. */
+  limitedBy: 'pressure' | 'alcohol' | null;
   /** Worst-case gauge pressure at highestTempC with sugarG. */
   worstGaugeBarAtHighest: number;
   findings: Finding[];
@@ -403,17 +417,34 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   const worstMol = volumesToMol(residual, input.liquidMl) + fermentationProducts([portion], 1).co2Mol;
   const worstGauge = equilibriumAt(container, worstMol, input.highestTempC).gaugeBar;
   const rating = input.maxWorkingPressureBar ?? null;
-  const maxSafeSugarG =
-    rating === null ? null : Math.max(0, (maxCo2MolForGauge(container, rating, input.highestTempC) - volumesToMol(residual, input.liquidMl)) * gramsPerCo2Mol);
+  const share = input.ratingShare ?? DEFAULT_RATING_SHARE;
+  const pressureCapG =
+    rating === null ? Infinity : Math.max(0, (maxCo2MolForGauge(container, rating * share, input.highestTempC) - volumesToMol(residual, input.liquidMl)) * gramsPerCo2Mol);
+  // The alcohol is linear in the sugar: stay a hair below the limit, since at the limit is over it.
+  // Judged at the theoretical yield (the worst case), whatever case is shown.
+  const abvPerGram = abvPercent(fermentationProducts([{ grams: info.sugarFraction * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole }], 1).ethanolG, input.liquidMl);
+  const alcoholCapG = Math.max(0, ((input.abvLimitPercent - input.baseAbvPercent) / abvPerGram) * 0.999);
+  const maxSafeSugarG = rating === null ? null : Math.min(pressureCapG, alcoholCapG);
+  const limitedBy: PrimingResult['limitedBy'] = sugarG <= Math.min(pressureCapG, alcoholCapG) ? null : alcoholCapG < pressureCapG ? 'alcohol' : 'pressure';
+  const safeSugarG = Math.min(sugarG, pressureCapG, alcoholCapG);
 
   const findings: Finding[] = [];
   if (residual >= input.targetVolumes) {
     findings.push({ level: 'ok', code: 'already-at-target', message: `The liquid already holds ${round(residual)} volumes: no sugar is needed for ${input.targetVolumes}.` });
   }
   if (maxSafeSugarG !== null && rating !== null) {
-    const values = { sugarG: round(sugarG, 2), maxSafeSugarG: round(maxSafeSugarG, 2), ratingBar: rating, highestTempC: input.highestTempC };
-    if (sugarG > maxSafeSugarG) {
-      findings.push({ level: 'danger', code: 'pressure-over-rating', message: `${round(sugarG, 1)} g is more than the ${round(maxSafeSugarG, 1)} g this bottle can take at ${input.highestTempC} °C in the worst case (${rating} bar rating).`, values });
+    const values = { sugarG: round(sugarG, 2), maxSafeSugarG: round(maxSafeSugarG, 2), ratingBar: rating, highestTempC: input.highestTempC, ratingShare: share };
+    if (limitedBy !== null) {
+      const why =
+        limitedBy === 'pressure'
+          ? `within ${round(share * 100, 0)} % of the bottle's ${rating} bar rating at ${input.highestTempC} °C in the worst case`
+          : `below the ${input.abvLimitPercent} % ABV limit`;
+      findings.push({
+        level: 'danger',
+        code: limitedBy === 'pressure' ? 'target-over-rating' : 'target-over-alcohol-limit',
+        message: `${input.targetVolumes} volumes cannot be reached ${why}: it would take ${round(sugarG, 2)} g. The most that is safe is ${round(safeSugarG, 2)} g.`,
+        values,
+      });
     } else if (worstGauge > rating * CAUTION_SHARE_OF_RATING) {
       findings.push({ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${round(worstGauge)} bar at ${input.highestTempC} °C is within 25 % of the ${rating} bar rating.`, values });
     } else {
@@ -430,6 +461,9 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   }
   return {
     checkedTempC,
+    safeSugarG,
+    targetReachable: limitedBy === null,
+    limitedBy,
     sugarG,
     sugarGPerL: (sugarG / input.liquidMl) * 1000,
     residualVolumes: residual,

@@ -146,11 +146,12 @@ describe('computePriming', () => {
     expect(check.co2.totalVolumes).toBeCloseTo(2.5, 4);
   });
 
-  it('finds the most sugar the bottle takes at the highest temperature', () => {
+  it('finds the most sugar the bottle takes at the highest temperature, keeping 80 % of the rating', () => {
     const result = computePriming(input);
     expect(result.maxSafeSugarG).not.toBeNull();
     const atLimit = computeCarbonation({ ...base, sugars: [{ type: 'sucrose', grams: result.maxSafeSugarG! }], residualCo2Volumes: 0.9, temperaturesC: [35] });
-    expect(atLimit.pressures[0].gaugeBar).toBeCloseTo(3, 4);
+    // 80 % of the 3 bar rating: 0.8 × 3 = 2.4 bar (the margin, common practice, no source).
+    expect(atLimit.pressures[0].gaugeBar).toBeCloseTo(2.4, 4);
   });
 
   it('shows the alcohol the target fizz costs, and honey needs more weight than sucrose', () => {
@@ -161,8 +162,11 @@ describe('computePriming', () => {
     expect(honey.sugarG / sucrose.sugarG).toBeCloseTo(1 / 0.8212, 6);
   });
 
-  it('calls sugar beyond the safe amount danger', () => {
+  it('calls a target beyond the safe amount danger and offers the most that is safe instead', () => {
     const result = computePriming({ ...input, targetVolumes: 5 });
-    expect(result.findings.find((f) => f.code === 'pressure-over-rating')?.level).toBe('danger');
+    expect(result.findings.find((f) => f.code === 'target-over-rating')?.level).toBe('danger');
+    expect(result.targetReachable).toBe(false);
+    expect(result.safeSugarG).toBe(result.maxSafeSugarG);
+    expect(result.safeSugarG).toBeLessThan(result.sugarG);
   });
 });

@@ -114,3 +114,23 @@ describe('the warm day', () => {
     expect(warm.maxSafeSugarG!).toBeLessThan(computePriming(priming).maxSafeSugarG!);
   });
 });
+
+describe('the most sugar a bottle takes', () => {
+  const priming = { liquidMl: 1000, headspaceMl: 40, targetVolumes: 2.5, sugarType: 'sucrose' as const, residualCo2Volumes: 0, sealedTempC: 20, highestTempC: 20, maxWorkingPressureBar: 20, baseAbvPercent: 0, abvLimitPercent: 0.5, yield: 'worst' as const };
+
+  it('stays below the alcohol limit: 7.3303 g of sucrose per litre is 0.500 % ABV, so the most is just under it', () => {
+    // By hand (see "alcohol exactly at the limit" above): 0.5 % ÷ 0.068210 % per g = 7.3303 g in 1 L.
+    const result = computePriming({ ...priming, targetVolumes: 4 });
+    expect(result.limitedBy).toBe('alcohol');
+    expect(result.safeSugarG).toBeLessThan(7.3303);
+    expect(result.safeSugarG).toBeGreaterThan(7.3303 * 0.99);
+    expect(result.findings.find((f) => f.code === 'target-over-alcohol-limit')?.level).toBe('danger');
+  });
+
+  it('fills the target itself when it is within both limits', () => {
+    // By hand: 2.5 volumes × 1.9635 g/L ÷ 0.51428 = 9.545 g/L — over the alcohol limit; 1.5 volumes need 5.727 g/L.
+    const result = computePriming({ ...priming, targetVolumes: 1.5 });
+    expect(result.targetReachable).toBe(true);
+    expect(result.safeSugarG).toBeCloseTo(5.727, 2);
+  });
+});
