@@ -6,7 +6,7 @@ import { check, parseNumber } from '@/lib/forms';
 import { organisationSchema, type OrganisationInput } from '@/lib/schemas/team';
 import { space } from '@/lib/theme';
 
-import { Banner, Button, FormField, FormStatus, submitTo } from '../ui';
+import { Banner, Button, FormField, FormStatus, Segmented, submitTo, Text } from '../ui';
 
 interface Props {
   organisation: Organisation;
@@ -15,18 +15,19 @@ interface Props {
   saved: boolean;
 }
 
-const toInput = (v: { name: string; abvLimitPercent: string; warmestTempC: string }) => ({ name: v.name, abvLimitPercent: parseNumber(v.abvLimitPercent), warmestTempC: parseNumber(v.warmestTempC) });
+type Values = { name: string; abvLimitPercent: string; warmestTempC: string; licensed: 'no' | 'yes' };
+const toInput = (v: Values) => ({ name: v.name, abvLimitPercent: parseNumber(v.abvLimitPercent), warmestTempC: parseNumber(v.warmestTempC), licensedForAlcohol: v.licensed === 'yes' });
 
 /** The brewery's name, the alcohol limit and the warm-day temperature every calculation checks against. */
 export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Props) {
   return (
-    <Formik
-      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent), warmestTempC: String(organisation.warmestTempC) }}
+    <Formik<Values>
+      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent), warmestTempC: String(organisation.warmestTempC), licensed: organisation.licensedForAlcohol ? 'yes' : 'no' }}
       enableReinitialize
       validate={(values) => check(organisationSchema, toInput(values)).errors}
       onSubmit={submitTo((values) => onSubmit(check(organisationSchema, toInput(values)).value!))}
     >
-      {({ handleSubmit, isSubmitting, dirty }) => (
+      {({ handleSubmit, isSubmitting, dirty, values, setFieldValue }) => (
         <View style={styles.form}>
           <FormStatus error={error} />
           {saved && !dirty ? <Banner tone="success">Brewery settings saved.</Banner> : null}
@@ -45,6 +46,20 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
             inputMode="decimal"
             hint="A closed car, a shop window, a summer delivery. Every pressure check includes this temperature, whatever else is asked."
           />
+          <Segmented
+            label="Licensed to make alcoholic beverages"
+            value={values.licensed}
+            onChange={(v) => setFieldValue('licensed', v)}
+            options={[
+              { value: 'no', label: 'No' },
+              { value: 'yes', label: 'Yes, we hold the licences' },
+            ]}
+          />
+          <Text variant="small">
+            {values.licensed === 'yes'
+              ? 'Versions at or over the alcohol limit can be approved. Who declared this, and when, is recorded.'
+              : 'A version whose worst-case alcohol reaches the limit cannot be approved, with or without an override.'}
+          </Text>
           <Button label="Save settings" busy={isSubmitting} disabled={!dirty} onPress={() => handleSubmit()} style={styles.submit} />
         </View>
       )}

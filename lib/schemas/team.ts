@@ -33,6 +33,7 @@ export const organisationSchema = yup.object({
   name: yup.string().trim().min(2, 'Enter the brewery name (at least 2 characters).').max(80, 'Keep the brewery name under 80 characters.').required('Enter the brewery name.'),
   abvLimitPercent: numberField('Alcohol limit', { positive: true, max: 5, unit: '% ABV' }).required('Enter the alcohol limit in % ABV.'),
   warmestTempC: numberField('Warmest the bottles may meet', { min: 20, max: 60, unit: '°C' }).default(35),
+  licensedForAlcohol: yup.boolean().strict().default(false),
 });
 export type OrganisationInput = yup.InferType<typeof organisationSchema>;
 

@@ -8,6 +8,7 @@ import * as recipes from './0005-recipes';
 import * as reviews from './0006-reviews';
 import * as secureDefaults from './0007-secure-defaults';
 import * as warmDay from './0008-warm-day';
+import * as alcoholLicence from './0009-alcohol-licence';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -24,4 +25,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0006-reviews', ...reviews },
   { name: '0007-secure-defaults', ...secureDefaults },
   { name: '0008-warm-day', ...warmDay },
+  { name: '0009-alcohol-licence', ...alcoholLicence },
 ];

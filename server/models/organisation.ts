@@ -9,6 +9,10 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
   declare abvLimitPercent: CreationOptional<number>;
   /** The warmest the bottles may meet, °C (35 by default): pressure is always judged there too. */
   declare warmestTempC: CreationOptional<number>;
+  /** Declared by an owner: the brewery is licensed to make alcoholic beverages, so versions at or over the limit may be approved. */
+  declare licensedForAlcohol: CreationOptional<boolean>;
+  declare licenceDeclaredById: CreationOptional<number | null>;
+  declare licenceDeclaredAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -19,6 +23,9 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
         name: { type: DataTypes.STRING(80), allowNull: false },
         abvLimitPercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
         warmestTempC: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_WARMEST_TEMP_C },
+        licensedForAlcohol: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        licenceDeclaredById: { type: DataTypes.INTEGER, allowNull: true },
+        licenceDeclaredAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

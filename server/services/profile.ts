@@ -18,7 +18,13 @@ export async function updatePreferences(userId: number, input: PreferencesInput)
 
 /** The brewery's own settings (owners only): its name, its alcohol limit and the warmest its bottles may meet. */
 export async function updateOrganisation(organisationId: number, userId: number, input: OrganisationInput): Promise<Session> {
-  await Organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, warmestTempC: input.warmestTempC }, { where: { id: organisationId }, individualHooks: true });
+  const organisation = await Organisation.findByPk(organisationId, { rejectOnEmpty: true });
+  // Who declared the licence, and when, is kept with it: it lets versions over the alcohol limit be approved.
+  const licence =
+    input.licensedForAlcohol !== organisation.licensedForAlcohol
+      ? { licensedForAlcohol: input.licensedForAlcohol, licenceDeclaredById: userId, licenceDeclaredAt: new Date() }
+      : {};
+  await organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, warmestTempC: input.warmestTempC, ...licence });
   return sessionFor(userId);
 }
 

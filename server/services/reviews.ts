@@ -1,7 +1,7 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 
 import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
-import { Recipe, RecipeReview, RecipeVersion, transaction, User } from '../db';
+import { Organisation, Recipe, RecipeReview, RecipeVersion, transaction, User } from '../db';
 import { forbidden, HttpError, notFound } from '../errors';
 import { mailer } from '../mail/mailer';
 import { reviewDecisionMail, reviewSubmittedMail } from '../mail/templates';
@@ -115,6 +115,17 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
   const version = await RecipeVersion.findOne({ where: { recipeId: id, number: input.version } });
   const result = await evaluate(auth, version!.content, { forReview: true });
   const dangers = result.carbonation.findings.filter((f) => f.level === 'danger');
+  const alcohol = dangers.find((f) => f.code === 'alcohol-over-limit');
+  if (alcohol) {
+    const brewery = await Organisation.findByPk(auth.organisationId, { attributes: ['licensedForAlcohol'] });
+    if (!brewery?.licensedForAlcohol) {
+      throw new HttpError(
+        409,
+        'alcohol_limit',
+        `This version cannot be approved: ${alcohol.message} A drink at or over the limit is an alcoholic beverage, which only a brewery licensed to make them may produce. An override does not change that; if your brewery is licensed, an owner can say so in the brewery settings.`,
+      );
+    }
+  }
   if (dangers.length > 0 && !input.overrideReason) {
     throw new HttpError(409, 'danger_finding', `Approval is blocked by a danger finding: ${dangers.map((d) => d.message).join(' ')} To approve anyway, write why.`, {
       overrideReason: 'Write why you approve despite the danger finding.',

@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 
-import { OutboxMessage } from '@/server/db';
+import { Organisation, OutboxMessage } from '@/server/db';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
 
@@ -91,8 +91,27 @@ describe('review of a recipe version', () => {
     expect(res.body.error.message).toMatch(/changed since you opened it/);
   });
 
+  it('refuses a version at or over the alcohol limit, override or not, unless the brewery declared it is licensed', async () => {
+    const { id } = await make(dangerContent, 'Strong van special');
+    await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
+    const refused = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, overrideReason: 'We know' }).expect(409);
+    expect(refused.body.error.code).toBe('alcohol_limit');
+    expect(refused.body.error.message).toMatch(/licensed/);
+    // Only owners declare it, and who did is recorded.
+    await developer.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: true }).expect(403);
+    const declared = await owner.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: true }).expect(200);
+    expect(declared.body.organisation.licensedForAlcohol).toBe(true);
+    const brewery = await Organisation.findByPk(declared.body.organisation.id);
+    expect(brewery!.licenceDeclaredById).toBe(declared.body.user.id);
+    expect(brewery!.licenceDeclaredAt).toBeInstanceOf(Date);
+    // Licensed, the danger still needs its written override.
+    await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(409);
+    await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, overrideReason: 'Sold as a licensed alcoholic product' }).expect(200);
+    await owner.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: false }).expect(200);
+  });
+
   it('blocks approval on a danger finding unless the owner writes why', async () => {
-    const { id } = await make(dangerContent, 'Hot van special');
+    const { id } = await make({ ...dangerContent, sugars: [{ type: 'sucrose', gPerL: 4 }] }, 'Hot van special');
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
     const blocked = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(409);
     expect(blocked.body.error).toMatchObject({ code: 'danger_finding', fields: { overrideReason: expect.any(String) } });
