@@ -1,21 +1,19 @@
 import '@/components/print/print.css';
 
-import { useQuery } from '@tanstack/react-query';
 import { Link, useLocalSearchParams } from 'expo-router';
 import { Linking, Platform, ScrollView, StyleSheet, View } from 'react-native';
 
 import { RecipeCardView } from '@/components/print/RecipeCardView';
 import { Banner, Button, Loading } from '@/components/ui';
-import { api } from '@/lib/api/client';
+import { cardQuery, useCardQuery } from '@/lib/api/recipes';
 import { env } from '@/lib/env';
-import type { RecipeCard } from '@/lib/recipes/card';
 import { colors, space } from '@/lib/theme';
 
 /** The printable card of a recipe version at a batch size, outside the app's frame so that only the card prints. */
 export default function PrintCardScreen() {
   const params = useLocalSearchParams<{ id: string; version?: string; kind?: string; value?: string; units?: string }>();
-  const query = new URLSearchParams({ kind: params.kind ?? 'bottles', value: params.value ?? '', units: params.units ?? 'metric', ...(params.version ? { version: params.version } : {}) }).toString();
-  const card = useQuery({ queryKey: ['card', params.id, query], queryFn: ({ signal }) => api.get<RecipeCard>(`/recipes/${params.id}/card?${query}`, signal) });
+  const query = cardQuery({ kind: params.kind ?? 'bottles', value: params.value ?? '', units: params.units ?? 'metric', version: params.version });
+  const card = useCardQuery(Number(params.id), query);
   return (
     <ScrollView style={styles.scroll} contentContainerStyle={styles.content} dataSet={{ printScroll: 'yes' }}>
       <View role="main" style={styles.inner}>

@@ -5,6 +5,8 @@ import { colors, fonts, space } from '@/lib/theme';
 
 import { Text } from '../ui';
 
+const SAFETY_WORDS = { ok: 'OK', caution: 'CAUTION', danger: 'DANGER' } as const;
+
 /** The card on screen and on paper: large amounts, numbered steps, blanks to fill in by hand. */
 export function RecipeCardView({ card }: { card: RecipeCard }) {
   return (
@@ -21,6 +23,13 @@ export function RecipeCardView({ card }: { card: RecipeCard }) {
       ) : (
         <Text style={styles.notApproved}>NOT APPROVED FOR PRODUCTION: development version.</Text>
       )}
+      <View style={[styles.safety, card.safety.level !== 'ok' && styles.safetyAlert]} role={card.safety.level === 'danger' ? 'alert' : undefined}>
+        <Text style={styles.safetyLevel}>Safety: {SAFETY_WORDS[card.safety.level]}</Text>
+        <Text>{card.safety.headline}</Text>
+        <Text>{card.safety.rating}</Text>
+        {card.approval?.overrideReason ? <Text style={styles.safetyLevel}>Approved over a danger finding. Reason: {card.approval.overrideReason}</Text> : null}
+        {card.approval?.comment ? <Text>Approval comment: {card.approval.comment}</Text> : null}
+      </View>
       <Text>Batch: {card.batch}.</Text>
       <Text>Base: {card.base}.</Text>
       <Section title="Amounts">
@@ -79,6 +88,10 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 }
 
 const styles = StyleSheet.create({
+  // Black on white on paper too: the level is in words and weight, never in colour alone.
+  safety: { borderWidth: 1, borderColor: colors.text, padding: space.sm, gap: space.xs },
+  safetyAlert: { borderWidth: 3 },
+  safetyLevel: { fontFamily: fonts.bold },
   card: { backgroundColor: colors.surface, padding: space.xl, gap: space.sm, borderRadius: 12, borderWidth: 1, borderColor: '#E4DED2' },
   notApproved: { fontFamily: fonts.bold, color: colors.danger, fontSize: 20 },
   section: { gap: space.xs, paddingTop: space.md },

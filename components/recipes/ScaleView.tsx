@@ -2,7 +2,7 @@ import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useRecipeQuery, useScaleQuery, type RecipeDetail } from '@/lib/api/recipes';
+import { cardQuery, useCardQuery, useRecipeQuery, useScaleQuery, type RecipeDetail } from '@/lib/api/recipes';
 import { parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import type { Rounded } from '@/lib/recipes/scaling';
@@ -11,6 +11,7 @@ import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
 import { Banner, Button, Card, NumberField, Segmented, Table, Text, type Column } from '../ui';
+import { SafetyNotice } from './SafetyNotice';
 
 type Kind = 'litres' | 'us-gallons' | 'bottles';
 type Row = Rounded & { name: string };
@@ -32,6 +33,8 @@ export function ScaleView({ recipe, units, productionOnly = false }: { recipe: R
   const content = productionOnly ? approved.data?.content : recipe.content;
   const router = useRouter();
   const scaled = useScaleQuery(recipeId, request);
+  // The floor sees the card's safety summary for the version it works from.
+  const card = useCardQuery(recipeId, request && scaled.data ? cardQuery({ version: scaled.data.version, kind, value: value!, units: system }) : undefined);
   const columns: Column<Row>[] = [
     { key: 'name', header: 'What', flex: 2, render: (r) => r.name },
     { key: 'amount', header: 'Amount', render: (r) => <Text style={r.warn ? styles.warn : undefined}>{show(r)}</Text> },
@@ -47,6 +50,7 @@ export function ScaleView({ recipe, units, productionOnly = false }: { recipe: R
         <NumberField label={kind === 'bottles' ? 'Number of bottles' : kind === 'litres' ? 'Litres of finished drink' : 'US gallons of finished drink'} value={text} onChangeText={setText} error={valid ? (scaled.error?.message ?? undefined) : 'Enter a batch size above 0.'} />
         <Segmented label="Amounts in" value={system} onChange={setSystem} options={[{ value: 'metric', label: 'Metric' }, { value: 'us', label: 'US' }]} />
       </Card>
+      {card.data ? <SafetyNotice card={card.data} /> : null}
       {scaled.data ? (
         <Card title={`Batch: ${scaled.data.bottles} bottles of ${scaled.data.bottleName}`} aside={<Text variant="small">version {scaled.data.version}</Text>}>
           <Button

@@ -8,6 +8,7 @@ import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput
 import { api } from './client';
 import { staleTimes } from './query-client';
 import type { RecipeDetail, RecipeSummary } from './types';
+import type { RecipeCard } from '../recipes/card';
 
 export type { RecipeDetail, RecipeSummary };
 
@@ -48,7 +49,23 @@ export const recipeKeys = {
   tastings: (id: number) => ['recipes', 'tastings', id] as const,
   evaluate: (content: RecipeContent | undefined) => ['recipes', 'evaluate', content] as const,
   scale: (id: number, request: ScaleRequest | undefined) => ['recipes', 'scale', id, request] as const,
+  card: (id: number, query: string) => ['recipes', 'card', id, query] as const,
 };
+
+/** The query string of a card: version, batch and units, as the card and card.pdf routes read it. */
+export function cardQuery(input: { version?: number | string | null; kind: string; value: number | string; units: string }): string {
+  return new URLSearchParams({ kind: input.kind, value: String(input.value), units: input.units, ...(input.version ? { version: String(input.version) } : {}) }).toString();
+}
+
+/** The printed card (or batch sheet) of a version at a batch size; undefined query: not asked yet. */
+export function useCardQuery(id: number, query: string | undefined) {
+  return useQuery({
+    queryKey: recipeKeys.card(id, query ?? ''),
+    enabled: query !== undefined,
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<RecipeCard>(`/recipes/${id}/card?${query}`, signal),
+  });
+}
 
 export function useRecipesQuery(q: string, status: 'draft' | 'archived' | 'approved' | 'all') {
   return useQuery({

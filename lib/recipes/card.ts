@@ -2,6 +2,7 @@ import { SAFETY_CAUTIONS } from '../chemistry/cautions';
 import { ALLERGEN_LABELS, type Allergen } from '../ingredients';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '../units';
 import type { RecipeContent } from '../schemas/recipes';
+import type { FindingLevel } from '../chemistry/carbonation';
 import type { RecipeEvaluation } from './evaluate';
 import type { BatchSize, ScaledRecipe } from './scaling';
 import { batchSteps, formatRounded } from './stages';
@@ -11,7 +12,16 @@ export interface RecipeCard {
   brewery: string;
   recipeName: string;
   version: number;
-  approval: { by: string | null; at: string; selfApproved: boolean } | null;
+  approval: {
+    by: string | null;
+    at: string;
+    selfApproved: boolean;
+    comment: string;
+    /** The owner's written reason when the version was approved over a danger finding; null otherwise. */
+    overrideReason: string | null;
+  } | null;
+  /** The worst finding, and the bottle's rating against the worst-case pressure, as the floor must see them. */
+  safety: { level: FindingLevel; headline: string; rating: string };
   batch: string;
   bottles: number;
   base: string;
@@ -62,12 +72,22 @@ export function buildCard(input: {
     'Lot code: ________',
     'Initials: ________',
   ];
+  const rank: Record<FindingLevel, number> = { ok: 0, caution: 1, danger: 2 };
+  const worstFinding = c.findings.reduce((a, b) => (rank[b.level] > rank[a.level] ? b : a), c.findings[0] ?? { level: 'ok' as const, code: '', message: '' });
+  const hottestIndex = c.pressures.reduce((best, p, i) => (p.tempC > c.pressures[best].tempC ? i : best), 0);
+  const hottest = c.pressures[hottestIndex];
+  const ratingBar = worstFinding.values?.ratingBar ?? c.findings.find((f) => f.values?.ratingBar !== undefined)?.values?.ratingBar;
+  const rating =
+    hottest === undefined
+      ? 'No pressure worked out.'
+      : `Bottle rating ${ratingBar !== undefined ? formatPressure(ratingBar, units) : 'not given'}; worst case ${formatPressure(c.cases.worst.gaugeBar[hottestIndex], units)} at ${formatTemp(hottest.tempC, units)}.`;
   const temps = c.pressures.map((p, i) => `${evaluation.temperatureNames[i] ?? ''} ${formatTemp(p.tempC, units)}: ${formatPressure(c.cases.worst.gaugeBar[i], units)}`);
   return {
     brewery: input.brewery,
     recipeName: input.recipeName,
     version: input.version,
     approval: input.approval,
+    safety: { level: worstFinding.level, headline: worstFinding.message, rating },
     batch: `${formatRounded(scaled.finishedLitres)} of finished drink, ${scaled.bottles} bottles of ${input.bottleName}`,
     bottles: scaled.bottles,
     base: `${formatRounded(scaled.baseLitres)} of ${content.baseBrew.name}${scaled.topUpLitres.exact > 0 ? ` (${formatRounded(scaled.topUpLitres)} of it to top up after straining)` : ''}`,

@@ -27,7 +27,15 @@ export async function recipeCard(auth: AuthContext, id: number, query: { version
     scaled,
     bottleName: scaled.bottleName,
     evaluation,
-    approval: approval ? { by: (approval as RecipeReview & { user?: User }).user?.name ?? null, at: approval.createdAt.toISOString(), selfApproved: approval.selfApproved } : null,
+    approval: approval
+      ? {
+          by: (approval as RecipeReview & { user?: User }).user?.name ?? null,
+          at: approval.createdAt.toISOString(),
+          selfApproved: approval.selfApproved,
+          comment: approval.comment,
+          overrideReason: approval.overrideReason,
+        }
+      : null,
     batch: query.batch,
     units: query.units,
   });
@@ -44,6 +52,11 @@ export function cardPdf(card: RecipeCard, options: { compress?: boolean } = {}):
   doc.font('Helvetica-Bold').fontSize(22).text(`${card.recipeName}, version ${card.version}`);
   doc.font('Helvetica').fontSize(11);
   doc.text(card.approval ? `Approved for production by ${card.approval.by ?? 'an owner'} on ${card.approval.at.slice(0, 10)}${card.approval.selfApproved ? ' (the brewery\u2019s only owner, who also submitted it)' : ''}.` : 'NOT APPROVED FOR PRODUCTION: development version.');
+  const level = { ok: 'OK', caution: 'CAUTION', danger: 'DANGER' }[card.safety.level];
+  doc.font('Helvetica-Bold').text(`Safety: ${level}. ${card.safety.headline}`).font('Helvetica');
+  doc.text(card.safety.rating);
+  if (card.approval?.overrideReason) doc.font('Helvetica-Bold').text(`Approved over a danger finding. Reason: ${card.approval.overrideReason}`).font('Helvetica');
+  if (card.approval?.comment) doc.text(`Approval comment: ${card.approval.comment}`);
   doc.text(`Batch: ${card.batch}.`);
   doc.text(`Base: ${card.base}.`);
   heading('Amounts');

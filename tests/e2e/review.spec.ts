@@ -38,11 +38,15 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await brewer.getByLabel('Number of bottles').fill('150');
   await expect(brewer.getByText(/Batch: 150 bottles of Glass crown cap 473 mL/)).toBeVisible();
   await expect(brewer.getByText(/^1\. Steep /)).toBeVisible();
+  // The floor sees the worst finding and the rating against the worst case before it starts.
+  await expect(brewer.getByText('Safety: caution')).toBeVisible();
+  await expect(brewer.getByText(/^Bottle rating 3\.00 bar .*; worst case .* at 35 °C\.$/).first()).toBeVisible();
   await shot(brewer, 'phone-brewer-batch');
 
   // The printed card: the approved version, its approval, the amounts large; on paper only the card.
   await brewer.getByRole('button', { name: 'Print card' }).click();
   await expect(brewer.getByText(/Approved for production by Imogen Thale/)).toBeVisible();
+  await expect(brewer.getByText('Safety: CAUTION')).toBeVisible();
   await expect(brewer.getByText(/^Card code \d+-\d+-b150/)).toBeVisible();
   const code = /Card code (\S+):/.exec((await brewer.getByText(/^Card code /).textContent())!)![1];
   await brewer.setViewportSize({ width: 794, height: 1123 });

@@ -113,3 +113,45 @@ describe('GET /api/recipes/:id/card.pdf', () => {
     expect(text).toContain(`Card code ${recipeId}-1-b100`);
   });
 });
+
+describe('danger reaches the floor', () => {
+  it('shows the worst finding, the rating against the worst case, and an approval over a danger finding with its reason, on the card and in the PDF', async () => {
+    const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
+    const crown = formats.find((f) => f.name === 'Glass crown cap 473 mL')!.id;
+    // 4 g/L of sucrose in a 3 bar crown-cap bottle on a 35 °C day: over the rating (danger), under the alcohol limit.
+    const content = {
+      baseBrew: { name: 'black tea base', residualSugarGPerL: 0.5, ph: 3.2, abvPercent: 0.05, residualCo2Volumes: null, lastOpenTempC: 21 },
+      lines: [],
+      sugars: [{ type: 'sucrose', gPerL: 4 }],
+      process: { method: 'in-bottle', steepHours: 0, steepTempC: 4, strainLossPct: 0, carbonateHours: 48, carbonateTempC: 20, coldStoreTempC: 4 },
+      bottleFormatId: crown,
+      targetVolumes: 2.5,
+      sweetnessNote: '',
+      highestTempC: 30,
+    };
+    const id = (await developer.post('/api/recipes').send({ name: 'Warm van risk', content }).expect(201)).body.id;
+    await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
+    await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, comment: 'Chilled runs only', overrideReason: 'Delivered cold, kept cold' }).expect(200);
+
+    const card = (await brewer.get(`/api/recipes/${id}/card`).query({ kind: 'bottles', value: 24 }).expect(200)).body;
+    expect(card.safety.level).toBe('danger');
+    expect(card.safety.headline).toMatch(/over the bottle's 3 bar rating/);
+    expect(card.safety.rating).toMatch(/^Bottle rating 3\.00 bar .*; worst case .* at 35 °C\.$/);
+    expect(card.approval).toMatchObject({ overrideReason: 'Delivered cold, kept cold', comment: 'Chilled runs only' });
+
+    const res = await brewer
+      .get(`/api/recipes/${id}/card.pdf`)
+      .query({ kind: 'bottles', value: 24 })
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+    const text = pdfText(res.body as Buffer);
+    expect(text).toContain('Safety: DANGER.');
+    expect(text).toContain('Approved over a danger finding. Reason: Delivered cold, kept cold');
+    expect(text).toContain('Approval comment: Chilled runs only');
+  });
+});
