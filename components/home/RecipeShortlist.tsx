@@ -7,7 +7,7 @@ import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { colors, fonts, space } from '@/lib/theme';
 
 import { STATE_TONE } from '../recipes/ReviewPanel';
-import { Badge, Card, Text } from '../ui';
+import { Badge, Card, SafetyBadge, Text } from '../ui';
 
 const VIEW: Record<Role, { title: string; empty: string; status: 'draft' | 'approved'; keep: (r: RecipeSummary) => boolean }> = {
   owner: { title: 'Waiting for your review', empty: 'Nothing waits for review.', status: 'draft', keep: (r) => r.reviewState === 'submitted' },
@@ -28,7 +28,10 @@ export function RecipeShortlist({ role }: { role: Role }) {
           <Link href={`/recipes/${r.id}`} style={styles.link}>
             {r.name}
           </Link>
-          <Badge label={role === 'brewer' ? `v${r.approvedVersion}` : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`} tone={role === 'brewer' ? 'success' : STATE_TONE[r.reviewState]} />
+          <View style={styles.badges}>
+            <SafetyBadge level={r.safetyLevel} />
+            <Badge label={role === 'brewer' ? `v${r.approvedVersion}` : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`} tone={role === 'brewer' ? 'success' : STATE_TONE[r.reviewState]} />
+          </View>
         </View>
       ))}
     </Card>
@@ -36,6 +39,7 @@ export function RecipeShortlist({ role }: { role: Role }) {
 }
 
 const styles = StyleSheet.create({
+  badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm, minHeight: 36 },
   link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
 });

@@ -17,3 +17,4 @@ export { TextField } from './TextField';
 export { Loading } from './Loading';
 export { TextLink } from './TextLink';
 export { Segmented } from './Segmented';
+export { SafetyBadge } from './SafetyBadge';

@@ -132,6 +132,11 @@ export interface RecipeSummary {
   approvedVersion: number | null;
   /** Where the newest version stands in review. */
   reviewState: ReviewState;
+  /**
+   * The worst finding of the version that matters in a list: the approved version in the "for production" list,
+   * the newest elsewhere. Only lists carry it.
+   */
+  safetyLevel?: 'ok' | 'caution' | 'danger';
   updatedAt: string;
 }
 

@@ -71,7 +71,29 @@ export async function listRecipes(auth: AuthContext, q: string, status: 'draft' 
     ? await RecipeReview.findAll({ where: { recipeId: rows.map((r) => r.id), action: 'returned' }, attributes: ['recipeId', 'versionNumber'] })
     : [];
   const returnedCurrent = new Set(returned.filter((e) => rows.find((r) => r.id === e.recipeId)?.currentVersion === e.versionNumber).map((e) => e.recipeId));
-  return rows.map((r) => summary(r, returnedCurrent.has(r.id)));
+  const levels = await safetyLevels(auth, rows, status === 'approved');
+  return rows.map((r) => ({ ...summary(r, returnedCurrent.has(r.id)), safetyLevel: levels.get(r.id) }));
+}
+
+const RANK = { ok: 0, caution: 1, danger: 2 } as const;
+
+/**
+ * The worst finding of each recipe's version that matters (the approved one for production lists), as judged for
+ * review. A version that cannot be evaluated (an ingredient gone from the library) counts as danger.
+ */
+async function safetyLevels(auth: AuthContext, rows: Recipe[], approved: boolean): Promise<Map<number, 'ok' | 'caution' | 'danger'>> {
+  const wanted = rows.map((r) => ({ recipeId: r.id, number: approved ? (r.approvedVersion ?? r.currentVersion) : r.currentVersion }));
+  const versions = wanted.length ? await RecipeVersion.findAll({ where: { [Op.or]: wanted }, attributes: ['recipeId', 'number', 'content'] }) : [];
+  const levels = new Map<number, 'ok' | 'caution' | 'danger'>();
+  for (const version of versions) {
+    try {
+      const result = await evaluate(auth, version.content, { forReview: true });
+      levels.set(version.recipeId, result.carbonation.findings.reduce<'ok' | 'caution' | 'danger'>((worst, f) => (RANK[f.level] > RANK[worst] ? f.level : worst), 'ok'));
+    } catch {
+      levels.set(version.recipeId, 'danger');
+    }
+  }
+  return levels;
 }
 
 async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<RecipeDetail> {

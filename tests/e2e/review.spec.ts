@@ -16,6 +16,8 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await signIn(owner, 'imogen@wrenfield.example', 'wrenfield-owner');
   await expect(owner.getByText('Waiting for your review')).toBeVisible();
   await expect(owner.getByRole('link', { name: 'Hedgerow Bramble' })).toBeVisible();
+  await expect(owner.getByText('Safety caution').first()).toBeVisible();
+  await shot(owner, 'phone-owner-home-review-queue');
   // The owner reads the review e-mail (the outbox stands in for the mail server) and follows its link.
   const outbox = await owner.request.get(url('/api/outbox'));
   const { messages } = (await outbox.json()) as { messages: { subject: string; text: string }[] };

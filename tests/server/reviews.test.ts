@@ -117,6 +117,9 @@ describe('review of a recipe version', () => {
     expect(blocked.body.error).toMatchObject({ code: 'danger_finding', fields: { overrideReason: expect.any(String) } });
     const approved = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, overrideReason: 'Sold chilled only, delivered in a cold van' }).expect(200);
     expect(approved.body.events[0]).toMatchObject({ action: 'approved', overrideReason: 'Sold chilled only, delivered in a cold van' });
+    // Lists for production carry the approved version's safety level, so the danger is seen before the recipe is opened.
+    const production = (await brewer.get('/api/recipes').query({ status: 'approved' }).expect(200)).body as { id: number; safetyLevel: string }[];
+    expect(production.find((r) => r.id === id)?.safetyLevel).toBe('danger');
     const withdrawn = await owner2.post(`/api/recipes/${id}/withdraw`).send({ reason: 'Summer heat' }).expect(200);
     expect(withdrawn.body).toMatchObject({ state: 'draft', approvedVersion: null });
   });

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { StyleSheet } from 'react-native';
 
 import { STATE_TONE } from '@/components/recipes/ReviewPanel';
-import { Badge, Banner, Button, Card, EmptyState, Loading, Screen, Segmented, Table, TextField, type Column } from '@/components/ui';
+import { Badge, Banner, Button, Card, EmptyState, Loading, SafetyBadge, Screen, Segmented, Table, TextField, type Column } from '@/components/ui';
 import { useRecipesQuery, type RecipeSummary } from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
@@ -30,6 +30,7 @@ export default function RecipesScreen() {
           <Badge label={`${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}${r.approvedVersion && r.reviewState !== 'approved' ? ` (v${r.approvedVersion} in production)` : ''}`} tone={STATE_TONE[r.reviewState]} />
         ),
     },
+    { key: 'safety', header: 'Safety', render: (r) => <SafetyBadge level={r.safetyLevel} /> },
     { key: 'updated', header: 'Changed', render: (r) => new Date(r.updatedAt).toLocaleDateString() },
   ];
   return (
