@@ -25,15 +25,18 @@ export interface QuickCheckValues {
   primingSugar: SugarType;
 }
 
-/** Sensible starting values: a 500 mL bottle, 3 g of sucrose, conditioned at 22 °C, stored at 4 °C, 35 °C at worst. */
+/**
+ * Starting values that open in an ok state: a 750 mL bottle rated 6 bar, 3 g of sucrose, conditioned at 22 °C,
+ * stored at 4 °C, 35 °C at worst, a target of 2 volumes.
+ */
 export function initialQuickCheckValues(units: UnitSystem): QuickCheckValues {
   const t = (c: number) => formatInput(units === 'us' ? convertUnit(c, 'C', 'F') : c, 0);
   const v = (ml: number) => formatInput(units === 'us' ? convertUnit(ml, 'ml', 'fl-oz') : ml, units === 'us' ? 1 : 0);
   return {
     bottleFormatId: '',
-    liquid: v(500),
-    headspace: v(25),
-    maxPressure: units === 'us' ? '43.5' : '3',
+    liquid: v(750),
+    headspace: v(30),
+    maxPressure: units === 'us' ? '87' : '6',
     sugars: [{ type: 'sucrose', grams: '3' }],
     residualMode: 'last-open',
     residualVolumes: '0.9',
@@ -42,9 +45,9 @@ export function initialQuickCheckValues(units: UnitSystem): QuickCheckValues {
     conditioningTemp: t(22),
     coldTemp: t(4),
     highestTemp: t(35),
-    baseAbv: '0.2',
+    baseAbv: '0.05',
     yield: 'worst',
-    targetVolumes: '2.5',
+    targetVolumes: '2',
     primingSugar: 'sucrose',
   };
 }

@@ -24,7 +24,7 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
     <Card title="Sugar for a target fizz">
       <View style={styles.row}>
         <View style={styles.cell}>
-          <FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" hint="Often 2.5 to 3 for kombucha." />
+          <FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" hint="Kombucha often has 2.5 to 3 volumes: more fizz needs a bottle rated for it." />
         </View>
       </View>
       <Select compact label="Sugar to use" value={values.primingSugar} options={sugarOptions.filter((o) => o.value !== 'lactose')} onChange={(type) => setFieldValue('primingSugar', type)} />

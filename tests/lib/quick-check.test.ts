@@ -4,15 +4,16 @@ describe('the Quick check form as an API request', () => {
   it('turns the metric defaults into a valid request', () => {
     const { request, errors } = toCarbonationRequest(initialQuickCheckValues('metric'), 'metric');
     expect(errors).toEqual({});
-    expect(request).toMatchObject({ liquidMl: 500, headspaceMl: 25, temperaturesC: [22, 4, 35], sugars: [{ type: 'sucrose', grams: 3 }], lastOpenTempC: 22 });
+    expect(request).toMatchObject({ liquidMl: 750, headspaceMl: 30, temperaturesC: [22, 4, 35], sugars: [{ type: 'sucrose', grams: 3 }], lastOpenTempC: 22 });
   });
 
-  it('converts US inputs to SI: 16 US fl oz and 95 °F (NIST SP 811: 1 fl oz = 29.5735 mL)', () => {
+  it('converts US inputs to SI: 16 US fl oz, 95 °F and 87 psi (NIST SP 811: 1 fl oz = 29.5735 mL, 1 psi = 6.894757 kPa)', () => {
     const values = { ...initialQuickCheckValues('us'), liquid: '16', highestTemp: '95', bottleFormatId: '' };
     const { request } = toCarbonationRequest(values, 'us');
     expect(request!.liquidMl).toBeCloseTo(473.176, 2);
     expect(request!.temperaturesC[2]).toBeCloseTo(35, 6);
-    expect(request!.maxWorkingPressureBar).toBeCloseTo(3, 1);
+    // 87 × 6.894757 kPa = 599.84 kPa = 5.998 bar.
+    expect(request!.maxWorkingPressureBar).toBeCloseTo(5.998, 2);
   });
 
   it('names the form field that is wrong', () => {
@@ -29,14 +30,15 @@ describe('the Quick check form as an API request', () => {
 
   it('asks the priming question from the same values', () => {
     const { request } = toPrimingRequest(initialQuickCheckValues('metric'), 'metric');
-    expect(request).toMatchObject({ targetVolumes: 2.5, sugarType: 'sucrose', highestTempC: 35 });
+    expect(request).toMatchObject({ targetVolumes: 2, sugarType: 'sucrose', highestTempC: 35 });
   });
 
   it('converts what was typed when the units change, and back', () => {
     const metric = initialQuickCheckValues('metric');
     const us = convertQuickCheckValues(metric, 'metric', 'us');
     expect(us.highestTemp).toBe('95');
-    expect(us.liquid).toBe('16.91');
+    // 750 mL ÷ 29.5735 mL per US fl oz = 25.36 fl oz (NIST SP 811).
+    expect(us.liquid).toBe('25.36');
     expect(convertQuickCheckValues(us, 'us', 'metric').highestTemp).toBe('35');
   });
 });

@@ -134,3 +134,26 @@ describe('the most sugar a bottle takes', () => {
     expect(result.safeSugarG).toBeCloseTo(5.727, 2);
   });
 });
+
+describe('what a new person sees first', () => {
+  // The opening states are ok, so that a caution or danger on screen always comes from something the person changed.
+  it('the Quick check opens ok, its sugar helper included', () => {
+    const { initialQuickCheckValues, toCarbonationRequest, toPrimingRequest } = require('@/lib/quick-check') as typeof import('@/lib/quick-check');
+    const values = initialQuickCheckValues('metric');
+    const carbonation = toCarbonationRequest(values, 'metric').request!;
+    const levels = computeCarbonation({ ...carbonation, ingredients: [], abvLimitPercent: 0.5, maxWorkingPressureBar: carbonation.maxWorkingPressureBar, warmDayTempC: 35 } as CarbonationInput).findings.map((f) => f.level);
+    expect(new Set(levels)).toEqual(new Set(['ok']));
+    const priming = toPrimingRequest(values, 'metric').request!;
+    const helper = computePriming({ ...priming, abvLimitPercent: 0.5, warmDayTempC: 35 } as Parameters<typeof computePriming>[0]);
+    expect(helper.findings.every((f) => f.level === 'ok')).toBe(true);
+  });
+
+  it('a new recipe opens ok in a 3 bar crown-cap bottle', () => {
+    const { evaluateRecipe } = require('@/lib/recipes/evaluate') as typeof import('@/lib/recipes/evaluate');
+    const { defaultContent } = require('@/lib/recipes/stages') as typeof import('@/lib/recipes/stages');
+    for (const method of ['in-bottle', 'steep-strain'] as const) {
+      const result = evaluateRecipe(defaultContent(1, method), { liquidMl: 330, headspaceMl: 20, maxWorkingPressureBar: 3 }, new Map(), 0.5, 'worst', { warmDayTempC: 35 });
+      expect(result.carbonation.findings.filter((f) => f.level !== 'ok')).toEqual([]);
+    }
+  });
+});
