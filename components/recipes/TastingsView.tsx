@@ -1,12 +1,14 @@
-import { Formik } from 'formik';
+import { Formik, useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { useAddTastingMutation, useTastingsQuery } from '@/lib/api/recipes';
+import { useAddTastingMutation, useRecipeEvaluationQuery, useTastingsQuery } from '@/lib/api/recipes';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { withSugarAddition } from '@/lib/recipes/tasting';
 import { check, parseNumber } from '@/lib/forms';
-import { tastingSchema } from '@/lib/schemas/recipes';
+import { tastingSchema, type RecipeContent } from '@/lib/schemas/recipes';
 import { space } from '@/lib/theme';
 
-import { Button, Card, FormField, FormStatus, Segmented, submitTo, Text } from '../ui';
+import { Banner, Button, Card, FormField, FormStatus, Segmented, submitTo, Text } from '../ui';
 
 const SCALES = [
   { key: 'sweetness', label: 'Sweetness', low: 'dry', high: 'sweet' },
@@ -30,8 +32,28 @@ const toInput = (v: Values) => ({
   sugarAddition: v.addSugar === 'yes' ? { type: 'sucrose', grams: parseNumber(v.sugarGrams), toMl: parseNumber(v.sugarToMl) } : null,
 });
 
+const RANK = { ok: 0, caution: 1, danger: 2 } as const;
+
+/** Before a sugar addition is saved: what the recipe's numbers would become, when that is a caution or a danger. */
+function SugarAdditionCheck({ content }: { content: RecipeContent }) {
+  const { values } = useFormikContext<Values>();
+  const { value: input } = check(tastingSchema, toInput(values));
+  const preview = useDebouncedValue(values.addSugar === 'yes' && input?.sugarAddition ? withSugarAddition(content, input.sugarAddition) : undefined, 400);
+  const evaluation = useRecipeEvaluationQuery(preview);
+  if (!preview || !evaluation.data) return null;
+  const findings = evaluation.data.carbonation.findings.filter((f) => f.level !== 'ok').sort((a, b) => RANK[b.level] - RANK[a.level]);
+  if (findings.length === 0) return <Banner tone="success">With this sugar the recipe stays within its bottle&apos;s rating and the alcohol limit.</Banner>;
+  return (
+    <Banner tone={findings[0].level as 'caution' | 'danger'} title={findings[0].level === 'danger' ? 'With this sugar the recipe would be a danger' : 'With this sugar the recipe would need care'}>
+      {findings.map((f) => (
+        <Text key={f.code}>{f.message}</Text>
+      ))}
+    </Banner>
+  );
+}
+
 /** The taste-and-adjust log: scores on our 1–5 scales, notes, and sugar added at the tasting. */
-export function TastingsView({ recipeId, canEdit }: { recipeId: number; canEdit: boolean }) {
+export function TastingsView({ recipeId, canEdit, content, onShowHistory }: { recipeId: number; canEdit: boolean; content: RecipeContent; onShowHistory: () => void }) {
   const tastings = useTastingsQuery(recipeId);
   const add = useAddTastingMutation(recipeId);
   return (
@@ -61,6 +83,7 @@ export function TastingsView({ recipeId, canEdit }: { recipeId: number; canEdit:
                     <View style={styles.cell}><FormField name="sugarToMl" label="Into this much liquid" suffix="mL" inputMode="decimal" /></View>
                   </View>
                 ) : null}
+                {values.addSugar === 'yes' ? <SugarAdditionCheck content={content} /> : null}
                 <Button label="Save tasting" busy={isSubmitting} onPress={() => handleSubmit()} style={styles.left} />
               </View>
             )}
@@ -72,8 +95,11 @@ export function TastingsView({ recipeId, canEdit }: { recipeId: number; canEdit:
         {tastings.data?.map((t) => (
           <View key={t.id} style={styles.entry}>
             <Text>
-              {t.tastedOn} · {t.by ?? 'someone'} · version {t.versionNumber}
+              {t.tastedOn} · {t.by ?? 'someone'} · tasted version {t.versionNumber}
             </Text>
+            {t.createdVersion ? (
+              <Button variant="quiet" style={styles.left} label={`Its sugar made version ${t.createdVersion}: open History`} onPress={onShowHistory} />
+            ) : null}
             <Text variant="small">
               Sweetness {t.scores.sweetness} · sourness {t.scores.sourness} · fizz {t.scores.fizz} · flavour {t.scores.flavour}
               {t.sugarAddition ? ` · +${t.sugarAddition.grams} g ${t.sugarAddition.type} to ${t.sugarAddition.toMl} mL` : ''}

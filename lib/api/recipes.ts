@@ -29,7 +29,10 @@ export interface VersionEntry {
 
 export interface TastingEntry {
   id: number;
+  /** The version tasted. */
   versionNumber: number;
+  /** The version its sugar addition made, if any. */
+  createdVersion: number | null;
   tastedOn: string;
   by: string | null;
   notes: string;

@@ -9,6 +9,7 @@ import * as reviews from './0006-reviews';
 import * as secureDefaults from './0007-secure-defaults';
 import * as warmDay from './0008-warm-day';
 import * as alcoholLicence from './0009-alcohol-licence';
+import * as tastingVersions from './0010-tasting-versions';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -26,4 +27,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0007-secure-defaults', ...secureDefaults },
   { name: '0008-warm-day', ...warmDay },
   { name: '0009-alcohol-licence', ...alcoholLicence },
+  { name: '0010-tasting-versions', ...tastingVersions },
 ];

@@ -73,7 +73,10 @@ export class RecipeVersion extends Model<InferAttributes<RecipeVersion>, InferCr
 export class Tasting extends Model<InferAttributes<Tasting>, InferCreationAttributes<Tasting>> {
   declare id: CreationOptional<number>;
   declare recipeId: ForeignKey<Recipe['id']>;
+  /** The version that was tasted. */
   declare versionNumber: number;
+  /** The version its sugar addition created, if it made one. */
+  declare createdVersion: CreationOptional<number | null>;
   declare userId: number | null;
   declare tastedOn: string;
   declare notes: string;
@@ -90,6 +93,7 @@ export class Tasting extends Model<InferAttributes<Tasting>, InferCreationAttrib
       {
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         versionNumber: { type: DataTypes.INTEGER, allowNull: false },
+        createdVersion: { type: DataTypes.INTEGER, allowNull: true },
         userId: { type: DataTypes.INTEGER, allowNull: true },
         tastedOn: { type: DataTypes.STRING(10), allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },

@@ -1,8 +1,9 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 
 import { diffRecipes, type Change } from '../../lib/recipes/diff';
 import { evaluateRecipe, type IngredientFacts, type RecipeEvaluation } from '../../lib/recipes/evaluate';
 import { scaleRecipe, type ScaledRecipe } from '../../lib/recipes/scaling';
+import { withSugarAddition } from '../../lib/recipes/tasting';
 import { SUGARS } from '../../lib/chemistry/sugars';
 import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../../lib/schemas/recipes';
 import type { RecipeDetail, RecipeSummary } from '../../lib/api/types';
@@ -135,19 +136,22 @@ export async function createRecipe(auth: AuthContext, input: CreateRecipeInput):
  */
 export async function saveRecipe(auth: AuthContext, id: number, input: SaveRecipeInput): Promise<RecipeDetail> {
   await assertUsable(auth, input.content);
-  const recipe = await transaction(async (transaction) => {
-    const found = await Recipe.findOne({ where: { id, organisationId: auth.organisationId }, transaction });
-    if (!found) throw notFound('No such recipe in your brewery.');
-    if (found.archivedAt) throw new HttpError(409, 'archived', 'This recipe is archived. Restore it or duplicate it to change it.');
-    if (found.currentVersion !== input.baseVersion) {
-      throw new HttpError(409, 'stale_version', `Someone saved version ${found.currentVersion} while you were editing version ${input.baseVersion}. Reload to see it; your changes are still in the form.`);
-    }
-    const number = found.currentVersion + 1;
-    await RecipeVersion.create({ recipeId: found.id, number, name: input.name, flavourNotes: input.flavourNotes, content: input.content, note: input.note, createdById: auth.userId }, { transaction });
-    await found.update({ name: input.name, flavourNotes: input.flavourNotes, currentVersion: number }, { transaction });
-    return found;
-  });
+  const recipe = await transaction((t) => writeVersion(auth, id, input, t));
   return detail(recipe);
+}
+
+/** Writes the next version inside a write transaction, after the stale-version check. Answers the recipe row. */
+async function writeVersion(auth: AuthContext, id: number, input: SaveRecipeInput, transaction: Transaction): Promise<Recipe> {
+  const found = await Recipe.findOne({ where: { id, organisationId: auth.organisationId }, transaction });
+  if (!found) throw notFound('No such recipe in your brewery.');
+  if (found.archivedAt) throw new HttpError(409, 'archived', 'This recipe is archived. Restore it or duplicate it to change it.');
+  if (found.currentVersion !== input.baseVersion) {
+    throw new HttpError(409, 'stale_version', `Someone saved version ${found.currentVersion} while you were editing version ${input.baseVersion}. Reload to see it; your changes are still in the form.`);
+  }
+  const number = found.currentVersion + 1;
+  await RecipeVersion.create({ recipeId: found.id, number, name: input.name, flavourNotes: input.flavourNotes, content: input.content, note: input.note, createdById: auth.userId }, { transaction });
+  await found.update({ name: input.name, flavourNotes: input.flavourNotes, currentVersion: number }, { transaction });
+  return found;
 }
 
 export async function listVersions(auth: AuthContext, id: number) {
@@ -217,27 +221,27 @@ export async function scale(auth: AuthContext, id: number, input: ScaleRequest):
   }
 }
 
-/** Records a tasting; a sugar addition made at the tasting becomes a new version with the sugar per litre raised. */
+/**
+ * Records a tasting of the newest version. A sugar addition makes the next version; the tasting and that version are
+ * written in one transaction, so neither exists without the other.
+ */
 export async function addTasting(auth: AuthContext, id: number, input: TastingInput) {
   const recipe = await getRecipe(auth, id);
-  let versionNumber = recipe.currentVersion;
-  if (input.sugarAddition) {
-    const { type, grams, toMl } = input.sugarAddition;
-    const extra = (grams / toMl) * 1000;
-    const sugars = [...recipe.content.sugars];
-    const existing = sugars.findIndex((s) => s.type === type);
-    if (existing >= 0) sugars[existing] = { type, gPerL: Number((sugars[existing].gPerL + extra).toFixed(4)) };
-    else sugars.push({ type, gPerL: Number(extra.toFixed(4)) });
-    const saved = await saveRecipe(auth, id, {
-      name: recipe.name,
-      flavourNotes: recipe.flavourNotes,
-      content: { ...recipe.content, sugars },
-      baseVersion: recipe.currentVersion,
-      note: `Tasting ${input.tastedOn}: +${grams} g ${type} to ${toMl} mL`,
-    });
-    versionNumber = saved.currentVersion;
-  }
-  await Tasting.create({ recipeId: id, versionNumber, userId: auth.userId, ...input });
+  const tasted = recipe.currentVersion;
+  await transaction(async (t) => {
+    let createdVersion: number | null = null;
+    if (input.sugarAddition) {
+      const { type, grams, toMl } = input.sugarAddition;
+      const saved = await writeVersion(
+        auth,
+        id,
+        { name: recipe.name, flavourNotes: recipe.flavourNotes, content: withSugarAddition(recipe.content, input.sugarAddition), baseVersion: tasted, note: `Tasting ${input.tastedOn}: +${grams} g ${type} to ${toMl} mL` },
+        t,
+      );
+      createdVersion = saved.currentVersion;
+    }
+    await Tasting.create({ recipeId: id, versionNumber: tasted, createdVersion, userId: auth.userId, ...input }, { transaction: t });
+  });
   return listTastings(auth, id);
 }
 
@@ -247,6 +251,7 @@ export async function listTastings(auth: AuthContext, id: number) {
   return rows.map((t) => ({
     id: t.id,
     versionNumber: t.versionNumber,
+    createdVersion: t.createdVersion,
     tastedOn: t.tastedOn,
     by: (t as Tasting & { user?: User }).user?.name ?? null,
     notes: t.notes,

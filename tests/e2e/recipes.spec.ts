@@ -56,4 +56,17 @@ test('the same on a wide screen, then the history shows what changed', async ({ 
   await page.getByRole('button', { name: 'Compare version 1 with the current one' }).click();
   await expect(page.getByText(/Strawberries, raw added/)).toBeVisible();
   await shot(page, 'wide-recipe-history');
+
+  // A tasting whose sugar would make the recipe a danger says so before it is saved, and is listed against the
+  // version tasted with the version it made.
+  await page.getByRole('radio', { name: 'Tastings' }).click();
+  await page.getByRole('radio', { name: 'Sucrose added' }).click();
+  await page.getByLabel('Grams of sucrose').fill('5');
+  await page.getByLabel('Into this much liquid').fill('473');
+  await expect(page.getByText('With this sugar the recipe would be a danger')).toBeVisible();
+  await shot(page, 'wide-tasting-danger');
+  await page.getByRole('button', { name: 'Save tasting' }).click();
+  await expect(page.getByText(/tasted version 2/)).toBeVisible();
+  await page.getByRole('button', { name: 'Its sugar made version 3: open History' }).click();
+  await expect(page.getByText(/\+5 g sucrose to 473 mL/).first()).toBeVisible();
 });

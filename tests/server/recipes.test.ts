@@ -136,7 +136,8 @@ describe('tastings', () => {
       .post(`/api/recipes/${created.id}/tastings`)
       .send({ tastedOn: '2026-11-30', notes: 'Needs more lift', sweetness: 2, sourness: 4, fizz: 3, flavour: 4, sugarAddition: { type: 'sucrose', grams: 4, toMl: 473 } })
       .expect(201);
-    expect(res.body[0]).toMatchObject({ versionNumber: 2, scores: { sweetness: 2, sourness: 4, fizz: 3, flavour: 4 } });
+    // Listed against the version tasted (1), with the version its sugar made (2).
+    expect(res.body[0]).toMatchObject({ versionNumber: 1, createdVersion: 2, scores: { sweetness: 2, sourness: 4, fizz: 3, flavour: 4 } });
     const recipe = await developer.get(`/api/recipes/${created.id}`).expect(200);
     // 4 g into 473 mL = 8.4567 g/L more: 4 + 8.4567 = 12.4567 g/L.
     expect(recipe.body.content.sugars[0].gPerL).toBeCloseTo(12.4567, 3);

@@ -60,7 +60,7 @@ export default function RecipeScreen() {
           onSave={(input) => save.mutateAsync({ ...input, note: '' })}
         />
       ) : null}
-      {tab === 'tastings' ? <TastingsView recipeId={recipeId} canEdit={canEdit} /> : null}
+      {tab === 'tastings' ? <TastingsView recipeId={recipeId} canEdit={canEdit} content={recipe.data.content} onShowHistory={() => setTab('history')} /> : null}
       {tab === 'review' ? <ReviewPanel recipeId={recipeId} session={session} /> : null}
       {tab === 'scale' ? <ScaleView recipe={recipe.data} units={session.user.unitSystem} productionOnly={brewer} /> : null}
       {tab === 'history' ? <HistoryView recipeId={recipeId} current={recipe.data.currentVersion} canEdit={canEdit} /> : null}
