@@ -1,9 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 
+import { ratingLevel } from '@/lib/chemistry/carbonation';
 import { WARM_DAY_NAME } from '@/lib/recipes/evaluate';
 import type { CarbonationAnswer } from '@/lib/api/calculations';
 import { colors, fonts, space } from '@/lib/theme';
-import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
+import { formatNumber, formatPressure, formatSmallVolume, formatTemp, type UnitSystem } from '@/lib/units';
 
 import { Cautions } from '../calculations/Cautions';
 import { FindingList } from '../calculations/FindingList';
@@ -19,7 +20,7 @@ interface Props {
   temperatureNames: string[];
 }
 
-type Row = { name: string; tempC: number; worst: number; expected: number; dissolved: number; over: boolean };
+type Row = { name: string; tempC: number; worst: number; expected: number; dissolved: number; headspaceMl: number; full: boolean; over: boolean };
 
 /** What a Quick check answers: sugar, fizz, alcohol, pressure at each temperature, findings and cautions. */
 export function QuickCheckResults({ answer, chart, units, limitPercent, temperatureNames }: Props) {
@@ -33,13 +34,16 @@ export function QuickCheckResults({ answer, chart, units, limitPercent, temperat
     worst: cases.worst.gaugeBar[i],
     expected: cases.expected.gaugeBar[i],
     dissolved: p.dissolvedVolumes,
-    over: rating !== null && cases.worst.gaugeBar[i] > rating,
+    headspaceMl: p.headspaceMl,
+    full: p.liquidFills,
+    over: p.liquidFills || (rating !== null && ratingLevel(cases.worst.gaugeBar[i], rating) === 'danger'),
   }));
   const columns: Column<Row>[] = [
     { key: 'where', header: 'Where', flex: 1.2, render: (r) => `${r.name} · ${formatTemp(r.tempC, units)}` },
-    { key: 'worst', header: 'Worst case', flex: 1.3, render: (r) => <Text style={r.over ? styles.over : undefined}>{formatPressure(r.worst, units)}{r.over ? ' · over rating' : ''}</Text> },
+    { key: 'worst', header: 'Worst case', flex: 1.3, render: (r) => <Text style={r.over ? styles.over : undefined}>{r.full ? 'bottle full: no gas space' : `${formatPressure(r.worst, units)}${r.over ? ' · at or over rating' : ''}`}</Text> },
     { key: 'expected', header: 'Expected', flex: 1.3, render: (r) => formatPressure(r.expected, units) },
     { key: 'dissolved', header: 'In the liquid', render: (r) => `${formatNumber(r.dissolved, 2)} vol` },
+    { key: 'headspace', header: 'Headspace', render: (r) => formatSmallVolume(r.headspaceMl, units) },
   ];
   return (
     <View style={styles.column}>

@@ -1,6 +1,6 @@
 import { CO2_G_PER_VOLUME, MOLAR_VOLUME_STP_L } from './constants';
 import { abvPercent, EXPECTED_YIELD, fermentationProducts, yieldFactor, type FermentableSugar, type YieldCase } from './fermentation';
-import { equilibriumAt, maxCo2MolForGauge, molToVolumes, volumesToMol, type Container, type Equilibrium } from './pressure';
+import { equilibriumAt, liquidFills, maxCo2MolForGauge, molToVolumes, volumesToMol, type Container, type Equilibrium } from './pressure';
 import { residualVolumesAfterOpen } from './solubility';
 import { SUGARS, type SugarType } from './sugars';
 
@@ -99,8 +99,18 @@ export function temperaturesToCheck(temperaturesC: number[], warmDayTempC: numbe
 export const ACCEPTED_TEMP_C = { min: -5, max: 60 } as const;
 /** Fermentable sugar above this, g/L, is far beyond bottle conditioning (common practice, no source: 4–12 g/L is usual). */
 export const ABSURD_SUGAR_G_PER_L = 40;
-/** Within this share of the rating, pressure is a caution. */
+/** From this share of the rating up, pressure is a caution. */
 export const CAUTION_SHARE_OF_RATING = 0.75;
+
+/**
+ * A gauge pressure against a bottle's rating: at or over the rating danger, from 75 % of it caution. At a threshold
+ * the worse level applies, as with alcohol at the limit.
+ */
+export function ratingLevel(gaugeBar: number, ratingBar: number): FindingLevel {
+  if (gaugeBar >= ratingBar) return 'danger';
+  if (gaugeBar >= ratingBar * CAUTION_SHARE_OF_RATING) return 'caution';
+  return 'ok';
+}
 
 const round = (value: number, digits = 2) => Math.round(value * 10 ** digits) / 10 ** digits;
 /** Six significant figures: far beyond what the model can claim, and answers stay small (a full float is 18 characters). */
@@ -174,7 +184,9 @@ function caseResult(input: CarbonationInput, container: Container, portions: Fer
         gaugeBar: sig(eq.gaugeBar),
         gaugePsi: sig(eq.gaugePsi),
         dissolvedVolumes: sig(eq.dissolvedVolumes),
-        overRating: rating !== null && eq.gaugeBar > rating,
+        headspaceMl: sig(eq.headspaceMl),
+        liquidFills: eq.liquidFills,
+        overRating: eq.liquidFills || (rating !== null && ratingLevel(eq.gaugeBar, rating) === 'danger'),
       };
     }),
   };
@@ -190,13 +202,32 @@ function pressureFindings(worst: CaseResult, rating: number | null): Finding[] {
     return [{ level: 'caution', code: 'no-rating', message: `Worst case ${at}. No bottle rating was given to compare it with: choose a bottle format.`, values }];
   }
   const withRating = { ...values, ratingBar: rating };
-  if (hottest.gaugeBar > rating) {
-    return [{ level: 'danger', code: 'pressure-over-rating', message: `Worst case ${at} is over the bottle's ${rating} bar rating. Use less sugar, stronger bottles, or keep them colder.`, values: withRating }];
+  const level = ratingLevel(hottest.gaugeBar, rating);
+  if (level === 'danger') {
+    return [{ level: 'danger', code: 'pressure-over-rating', message: `Worst case ${at} is at or over the bottle's ${rating} bar rating. Use less sugar, stronger bottles, or keep them colder.`, values: withRating }];
   }
-  if (hottest.gaugeBar > rating * CAUTION_SHARE_OF_RATING) {
+  if (level === 'caution') {
     return [{ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${at} is within 25 % of the bottle's ${rating} bar rating.`, values: withRating }];
   }
   return [{ level: 'ok', code: 'pressure-within-rating', message: `Worst case ${at} stays well within the bottle's ${rating} bar rating.`, values: withRating }];
+}
+
+/**
+ * A danger when the liquid, expanding as it warms, would fill the bottle at a temperature checked: with no gas space
+ * left, the liquid presses on the glass directly and the pressure rises far beyond what the gases alone would give.
+ */
+export function fillFindings(container: Container, temperaturesC: number[]): Finding[] {
+  const fills = liquidFills(container, temperaturesC);
+  if (!fills) return [];
+  const leastMl = Math.ceil(fills.leastHeadspaceMl);
+  return [
+    {
+      level: 'danger',
+      code: 'liquid-fills-bottle',
+      message: `${fills.tempC > container.sealedTempC ? `At ${round(fills.tempC, 1)} °C the warmed liquid fills the bottle` : 'The liquid fills the bottle'}: with no gas space left the glass takes the liquid's full force. Leave at least ${leastMl} mL of headspace (more is safer), or fill less.`,
+      values: { tempC: round(fills.tempC, 2), leastHeadspaceMl: leastMl, headspaceMl: container.headspaceMl },
+    },
+  ];
 }
 
 function alcoholFindings(worst: CaseResult, expected: CaseResult, limit: number): Finding[] {
@@ -308,7 +339,16 @@ function sugarBasisFindings(ingredients: IngredientSugar[]): Finding[] {
 
 const ASSUMPTIONS: CarbonationResult['assumptions'] = [
   { name: 'CO2 solubility', value: 'K0(T), fresh water', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
-  { name: 'Headspace', value: 'ideal gas; sealed-in air and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)', source: 'ideal gas, Dalton' },
+  {
+    name: 'Headspace',
+    value: 'ideal gas; the air sealed in, in the headspace and dissolved in the liquid, and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)',
+    source: 'ideal gas, Dalton; N2, O2 and Ar solubility from Weiss (1970), Deep-Sea Research 17:721–735',
+  },
+  {
+    name: 'Liquid expansion',
+    value: 'the liquid expands as water does, shrinking the headspace as it warms; the glass taken not to expand (errs high)',
+    source: 'water density, Tanaka et al. (2001), Metrologia 38:301–309',
+  },
   { name: 'Fermentation', value: 'hexose → 2 ethanol + 2 CO2; sucrose + water → 4 + 4; mixed sugars at sucrose’s yield per gram', source: 'Gay-Lussac' },
   { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur (from memory)' },
   { name: 'Volume of CO2', value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`, source: 'CODATA 2018' },
@@ -342,6 +382,7 @@ export function computeCarbonation(asked: CarbonationInput): CarbonationResult {
     cases: { worst: brief(worst), expected: brief(expected) },
     warmDayTempC: checked.added,
     findings: [
+      ...fillFindings(container, [input.sealedTempC, ...input.temperaturesC]),
       ...pressureFindings(worst, input.maxWorkingPressureBar ?? null),
       ...alcoholFindings(worst, expected, input.abvLimitPercent),
       ...inputFindings(input, ((worstSugars.addedG + worstSugars.fromIngredientsG) / input.liquidMl) * 1000),
@@ -428,7 +469,7 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   const limitedBy: PrimingResult['limitedBy'] = sugarG <= Math.min(pressureCapG, alcoholCapG) ? null : alcoholCapG < pressureCapG ? 'alcohol' : 'pressure';
   const safeSugarG = Math.min(sugarG, pressureCapG, alcoholCapG);
 
-  const findings: Finding[] = [];
+  const findings: Finding[] = [...fillFindings(container, [input.sealedTempC, input.highestTempC])];
   if (residual >= input.targetVolumes) {
     findings.push({ level: 'ok', code: 'already-at-target', message: `The liquid already holds ${round(residual)} volumes: no sugar is needed for ${input.targetVolumes}.` });
   }
@@ -445,7 +486,7 @@ export function computePriming(asked: PrimingInput): PrimingResult {
         message: `${input.targetVolumes} volumes cannot be reached ${why}: it would take ${round(sugarG, 2)} g. The most that is safe is ${round(safeSugarG, 2)} g.`,
         values,
       });
-    } else if (worstGauge > rating * CAUTION_SHARE_OF_RATING) {
+    } else if (ratingLevel(worstGauge, rating) !== 'ok') {
       findings.push({ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${round(worstGauge)} bar at ${input.highestTempC} °C is within 25 % of the ${rating} bar rating.`, values });
     } else {
       findings.push({ level: 'ok', code: 'pressure-within-rating', message: `Up to ${round(maxSafeSugarG, 1)} g stays within the ${rating} bar rating at ${input.highestTempC} °C in the worst case.`, values });

@@ -80,8 +80,10 @@ export function buildCard(input: {
   const rating =
     hottest === undefined
       ? 'No pressure worked out.'
-      : `Bottle rating ${ratingBar !== undefined ? formatPressure(ratingBar, units) : 'not given'}; worst case ${formatPressure(c.cases.worst.gaugeBar[hottestIndex], units)} at ${formatTemp(hottest.tempC, units)}.`;
-  const temps = c.pressures.map((p, i) => `${evaluation.temperatureNames[i] ?? ''} ${formatTemp(p.tempC, units)}: ${formatPressure(c.cases.worst.gaugeBar[i], units)}`);
+      : `Bottle rating ${ratingBar !== undefined ? formatPressure(ratingBar, units) : 'not given'}; worst case ${hottest.liquidFills ? 'the liquid fills the bottle' : formatPressure(c.cases.worst.gaugeBar[hottestIndex], units)} at ${formatTemp(hottest.tempC, units)}.`;
+  const temps = c.pressures.map(
+    (p, i) => `${evaluation.temperatureNames[i] ?? ''} ${formatTemp(p.tempC, units)}: ${p.liquidFills ? 'bottle full, no gas space' : formatPressure(c.cases.worst.gaugeBar[i], units)}`,
+  );
   return {
     brewery: input.brewery,
     recipeName: input.recipeName,

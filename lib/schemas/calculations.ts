@@ -11,7 +11,12 @@ const yieldCase = () => yup.string().oneOf(['worst', 'expected'] as const, 'Choo
 /** Container and residual CO2, shared by the carbonation and priming questions. */
 const containerFields = {
   liquidMl: numberField('Liquid per container', { positive: true, max: 30000, unit: 'mL' }).required('Enter the liquid per container in mL.'),
-  headspaceMl: numberField('Headspace', { min: 0, max: 5000, unit: 'mL' }).default(0),
+  // No default: a headspace taken as 0 would be a full bottle, and any other figure a guess. A bottle format gives one.
+  headspaceMl: numberField('Headspace', { min: 0, max: 5000, unit: 'mL' }).when('bottleFormatId', {
+    is: (id: unknown) => id === undefined || id === null,
+    then: (s) => s.required('Enter the headspace in mL, or choose a bottle format that gives it.'),
+    otherwise: (s) => s.optional(),
+  }),
   residualCo2Volumes: numberField('Residual CO2', { min: 0, max: 6, unit: 'volumes' }).nullable(),
   lastOpenTempC: temperature('Temperature when last open').nullable(),
   sealedTempC: temperature('Temperature when sealed').default(20),

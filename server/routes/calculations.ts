@@ -1,4 +1,4 @@
-import { Router, type Request } from 'express';
+import { Router } from 'express';
 
 import { brixSchema, carbonationSchema, primingSchema, type BrixRequest, type CarbonationRequest, type PrimingRequest } from '../../lib/schemas/calculations';
 import { allow, authOf } from '../middleware/access';
@@ -7,14 +7,12 @@ import * as calculations from '../services/calculations';
 
 export const calculationsRouter = Router();
 
-const headspaceGiven = (req: Request) => typeof (req.body as { headspaceMl?: unknown }).headspaceMl === 'number';
-
-calculationsRouter.post('/carbonation', allow('signed-in'), validate({ body: carbonationSchema }), async (req, res) => {
-  res.json(await calculations.carbonation(authOf(res), res.locals.body as CarbonationRequest, headspaceGiven(req)));
+calculationsRouter.post('/carbonation', allow('signed-in'), validate({ body: carbonationSchema }), async (_req, res) => {
+  res.json(await calculations.carbonation(authOf(res), res.locals.body as CarbonationRequest));
 });
 
-calculationsRouter.post('/priming', allow('signed-in'), validate({ body: primingSchema }), async (req, res) => {
-  res.json(await calculations.priming(authOf(res), res.locals.body as PrimingRequest, headspaceGiven(req)));
+calculationsRouter.post('/priming', allow('signed-in'), validate({ body: primingSchema }), async (_req, res) => {
+  res.json(await calculations.priming(authOf(res), res.locals.body as PrimingRequest));
 });
 
 calculationsRouter.post('/brix', allow('signed-in'), validate({ body: brixSchema }), (_req, res) => {

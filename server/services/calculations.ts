@@ -20,17 +20,19 @@ interface ResolvedContainer {
  * The container a question is about: a bottle format of the brewery (its rating, and its headspace unless the
  * request gives one), or the numbers given directly.
  */
-async function resolveContainer(auth: AuthContext, input: CarbonationRequest | PrimingRequest, headspaceGiven: boolean): Promise<ResolvedContainer> {
+async function resolveContainer(auth: AuthContext, input: CarbonationRequest | PrimingRequest): Promise<ResolvedContainer> {
   if (input.bottleFormatId) {
     const format = await cachedBottleFormat(auth.organisationId, input.bottleFormatId);
     if (!format) throw badRequest('No such bottle format in your brewery.', { bottleFormatId: 'No such bottle format in your brewery.' });
     return {
       liquidMl: input.liquidMl,
-      headspaceMl: headspaceGiven ? input.headspaceMl : format.headspaceMl,
+      headspaceMl: input.headspaceMl ?? format.headspaceMl,
       maxWorkingPressureBar: input.maxWorkingPressureBar ?? format.maxWorkingPressureBar,
       bottleFormat: { id: format.id, name: format.name, maxWorkingPressureBar: format.maxWorkingPressureBar, pressureSource: format.pressureSource },
     };
   }
+  // The schema asks for a headspace when no format gives one; this keeps the service safe on its own.
+  if (input.headspaceMl === undefined || input.headspaceMl === null) throw badRequest('Enter the headspace.', { headspaceMl: 'Enter the headspace in mL, or choose a bottle format that gives it.' });
   return { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, maxWorkingPressureBar: input.maxWorkingPressureBar ?? null, bottleFormat: null };
 }
 
@@ -58,8 +60,8 @@ async function resolveIngredients(auth: AuthContext, lines: CarbonationRequest['
   });
 }
 
-export async function carbonation(auth: AuthContext, input: CarbonationRequest, headspaceGiven: boolean): Promise<CarbonationResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
-  const container = await resolveContainer(auth, input, headspaceGiven);
+export async function carbonation(auth: AuthContext, input: CarbonationRequest): Promise<CarbonationResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
+  const container = await resolveContainer(auth, input);
   const result = computeCarbonation({
     ...input,
     ...container,
@@ -70,8 +72,8 @@ export async function carbonation(auth: AuthContext, input: CarbonationRequest, 
   return { ...result, bottleFormat: container.bottleFormat };
 }
 
-export async function priming(auth: AuthContext, input: PrimingRequest, headspaceGiven: boolean): Promise<PrimingResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
-  const container = await resolveContainer(auth, input, headspaceGiven);
+export async function priming(auth: AuthContext, input: PrimingRequest): Promise<PrimingResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
+  const container = await resolveContainer(auth, input);
   if (input.sugarType === 'lactose') {
     throw badRequest('Lactose does not ferment, so it cannot carbonate a drink.', { sugarType: 'Choose a sugar yeast can ferment.' });
   }

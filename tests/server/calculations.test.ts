@@ -24,7 +24,7 @@ describe('POST /api/calculations/carbonation', () => {
     expect(res.body.co2.residualVolumes).toBe(0.8);
     expect(res.body.alcohol.addedAbvPercent).toBeCloseTo(0.409, 3);
     expect(res.body.pressures).toHaveLength(3);
-    expect(res.body.pressures[0]).toEqual({ tempC: 4, gaugeBar: expect.any(Number), gaugePsi: expect.any(Number), dissolvedVolumes: expect.any(Number), co2PartialAtm: expect.any(Number), overRating: false });
+    expect(res.body.pressures[0]).toEqual({ tempC: 4, gaugeBar: expect.any(Number), gaugePsi: expect.any(Number), dissolvedVolumes: expect.any(Number), co2PartialAtm: expect.any(Number), headspaceMl: expect.any(Number), liquidFills: false, overRating: false });
     expect(res.body.findings.map((f: { code: string }) => f.code)).toEqual(expect.arrayContaining(['pressure-over-rating', 'alcohol-near-limit']));
     expect(res.body.assumptions.map((a: { source: string }) => a.source).join(' ')).toMatch(/Weiss \(1974\)/);
     await request(app).post('/api/calculations/carbonation').send(bottle).expect(401);
@@ -36,6 +36,18 @@ describe('POST /api/calculations/carbonation', () => {
     const res = await owner.post('/api/calculations/carbonation').send({ liquidMl: 750, sugars: [{ type: 'sucrose', grams: 4 }], bottleFormatId: wine.id }).expect(200);
     expect(res.body.bottleFormat).toMatchObject({ id: wine.id, maxWorkingPressureBar: 6 });
     expect(res.body.findings.find((f: { code: string }) => f.code.startsWith('pressure'))).toMatchObject({ level: 'ok', values: { ratingBar: 6 } });
+  });
+
+  it('refuses a missing headspace unless a bottle format gives it', async () => {
+    const { headspaceMl: _, ...noHeadspace } = bottle;
+    const refused = await owner.post('/api/calculations/carbonation').send(noHeadspace).expect(400);
+    expect(refused.body.error.fields.headspaceMl).toMatch(/headspace/);
+    const priming = await owner.post('/api/calculations/priming').send({ liquidMl: 500, targetVolumes: 2.5 }).expect(400);
+    expect(priming.body.error.fields.headspaceMl).toBeDefined();
+    const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; headspaceMl: number }[];
+    const withFormat = await owner.post('/api/calculations/carbonation').send({ ...noHeadspace, bottleFormatId: formats[0].id }).expect(200);
+    // The format's headspace, as filled: at the sealing temperature the gas space is exactly that.
+    expect(withFormat.body.pressures.find((p: { tempC: number }) => p.tempC === 20)?.headspaceMl).toBeCloseTo(formats[0].headspaceMl, 6);
   });
 
   it("refuses a bottle format of another brewery", async () => {
@@ -99,9 +111,9 @@ describe('POST /api/calculations/priming', () => {
   });
 
   it('refuses lactose and a missing target', async () => {
-    const lactose = await owner.post('/api/calculations/priming').send({ liquidMl: 500, targetVolumes: 2.5, sugarType: 'lactose' }).expect(400);
+    const lactose = await owner.post('/api/calculations/priming').send({ liquidMl: 500, headspaceMl: 25, targetVolumes: 2.5, sugarType: 'lactose' }).expect(400);
     expect(lactose.body.error.fields.sugarType).toBeDefined();
-    const missing = await owner.post('/api/calculations/priming').send({ liquidMl: 500 }).expect(400);
+    const missing = await owner.post('/api/calculations/priming').send({ liquidMl: 500, headspaceMl: 25 }).expect(400);
     expect(missing.body.error.fields.targetVolumes).toBeDefined();
   });
 });

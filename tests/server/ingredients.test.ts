@@ -131,7 +131,7 @@ describe('PUT, archive and copy', () => {
     await stranger.agent.get(`/api/ingredients/${mine.body.id}`).expect(404);
     await stranger.agent.put(`/api/ingredients/${mine.body.id}`).send(label).expect(404);
     expect((await stranger.agent.get('/api/ingredients').query({ q: 'quince' }).expect(200)).body.items.map((i: { name: string }) => i.name)).not.toContain('Secret quince purée');
-    const calc = await stranger.agent.post('/api/calculations/carbonation').send({ liquidMl: 500, ingredients: [{ ingredientId: mine.body.id, grams: 10 }] }).expect(400);
+    const calc = await stranger.agent.post('/api/calculations/carbonation').send({ liquidMl: 500, headspaceMl: 25, ingredients: [{ ingredientId: mine.body.id, grams: 10 }] }).expect(400);
     expect(calc.body.error.fields['ingredients[0].ingredientId']).toBeDefined();
   });
 });
@@ -142,7 +142,7 @@ describe('ingredients in POST /api/calculations/carbonation', () => {
     const shortbread = (await developer.get('/api/ingredients').query({ q: 'shortbread' }).expect(200)).body.items[0];
     const res = await developer
       .post('/api/calculations/carbonation')
-      .send({ liquidMl: 500, ingredients: [{ ingredientId: strawberry.id, grams: 100, extractionPct: 50 }, { ingredientId: shortbread.id, grams: 20, inBottle: true }], temperaturesC: [20] })
+      .send({ liquidMl: 500, headspaceMl: 25, ingredients: [{ ingredientId: strawberry.id, grams: 100, extractionPct: 50 }, { ingredientId: shortbread.id, grams: 20, inBottle: true }], temperaturesC: [20] })
       .expect(200);
     // By hand: 100 g × 0.0489 = 4.89 g from strawberries in the worst case (steeped at 50 %, all of it counts there);
     // shortbread per its USDA record, all of it.

@@ -1,4 +1,5 @@
 import { M_CO2, M_ETHANOL, M_HEXOSE, M_SUCROSE, CO2_G_PER_VOLUME } from '@/lib/chemistry/constants';
+import { AIR_GASES, bunsenCoefficient } from '@/lib/chemistry/air';
 import { co2SolubilityMolPerKgAtm, co2SolubilityMolPerLAtm, dissolvedVolumes } from '@/lib/chemistry/solubility';
 import { waterDensityGPerL, waterVapourPressureAtm } from '@/lib/chemistry/water';
 
@@ -49,12 +50,47 @@ describe('CO2 solubility in water (Weiss 1974)', () => {
   });
 });
 
+describe('air dissolved in water (Weiss 1970)', () => {
+  const gas = (name: string) => AIR_GASES.find((g) => g.gas === name)!;
+
+  it('gives the oxygen solubility of the standard table from 0 to 40 °C', () => {
+    // Dissolved oxygen in fresh water in equilibrium with air at 1 atm, mg/L (Benson & Krause 1984, as tabulated by the
+    // USGS and in Standard Methods 4500-O; from memory). By hand from a Bunsen coefficient β: β × 0.20946 (O2 in dry air)
+    // × (1 atm − water's vapour pressure) × 1.42905 g/L (O2 at 0 °C, 1 atm; CRC) × 1000.
+    const table: [number, number][] = [
+      [0, 14.62],
+      [10, 11.29],
+      [20, 9.09],
+      [25, 8.26],
+      [30, 7.56],
+      [40, 6.41],
+    ];
+    for (const [tempC, mgPerL] of table) within(bunsenCoefficient(gas('O2'), tempC) * 0.20946 * (1 - waterVapourPressureAtm(tempC)) * 1.42905 * 1000, mgPerL, 0.005);
+  });
+
+  it('matches the compiled Henry constants of nitrogen, oxygen and argon at 25 °C', () => {
+    // Sander (2015), Atmos. Chem. Phys. 15:4399–4981, Hcp at 298.15 K in mol/(m³·Pa), two significant figures (from
+    // memory): N2 6.4e-6, O2 1.3e-5, Ar 1.4e-5. Bunsen → Hcp: β ÷ 22.414 L/mol ÷ 101.325 (Pa per atm, L per m³).
+    const hcp = (name: string) => bunsenCoefficient(gas(name), 25) / 22.414 / 101.325;
+    within(hcp('N2'), 6.4e-6, 0.05);
+    within(hcp('O2'), 1.3e-5, 0.05);
+    within(hcp('Ar'), 1.4e-5, 0.05);
+  });
+});
+
 describe('water', () => {
   it('has the density of the CIPM table (Tanaka et al. 2001)', () => {
     // Tanaka et al. (2001), Metrologia 38:301, Table 4 (CIPM): 4 °C 999.9749 kg/m³, 20 °C 998.2067, 25 °C 997.0470.
     expect(waterDensityGPerL(4)).toBeCloseTo(999.9749, 2);
     expect(waterDensityGPerL(20)).toBeCloseTo(998.2067, 2);
     expect(waterDensityGPerL(25)).toBeCloseTo(997.047, 2);
+    expect(waterDensityGPerL(35)).toBeCloseTo(994.0319, 2);
+  });
+
+  it('stays close to the handbook density up to 60 °C, beyond the fit', () => {
+    // CRC Handbook, "Properties of water in the range 0–100 °C" (from memory): 50 °C 988.04 kg/m³, 60 °C 983.20.
+    within(waterDensityGPerL(50), 988.04, 0.0001);
+    within(waterDensityGPerL(60), 983.2, 0.0001);
   });
 
   it('has the vapour pressure of the CRC Handbook table', () => {
