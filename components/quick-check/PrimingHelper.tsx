@@ -42,7 +42,7 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
           </Text>
           {answer.maxSafeSugarG !== null ? (
             <Text variant="muted">
-              The most that is safe at {formatTemp(answer.checkedTempC, units)} in the worst case (80 % of the rating, below the alcohol limit): {formatNumber(answer.maxSafeSugarG, 2)} g (
+              The most that is safe at {formatTemp(answer.checkedTempC, units)} in the worst case ({formatNumber(answer.ratingShare * 100, 0)} % of the rating, below the alcohol limit): {formatNumber(answer.maxSafeSugarG, 2)} g (
               {formatPressure(answer.worstGaugeBarAtHighest, units)} with the amount above).
             </Text>
           ) : null}

@@ -7,6 +7,7 @@ import { ApiError } from '@/lib/api/client';
 import { useRecipeEvaluationQuery, type RecipeDetail } from '@/lib/api/recipes';
 import { SUGARS } from '@/lib/chemistry/sugars';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { targetAdvice } from '@/lib/recipes/target';
 import { toContent, toFormValues, type RecipeFormValues } from '@/lib/recipes/form';
 import { processStages } from '@/lib/recipes/stages';
 import { AMOUNT_UNIT_LABELS, METHOD_LABELS, METHODS } from '@/lib/schemas/recipes';
@@ -189,7 +190,7 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
 /** Fills the added sugar that reaches the target fizz, given what the base and the ingredients already bring. */
 function TargetHelper({ units, content, liquidMl, headspaceMl, rating, fermentableGPerL, currentAddedGPerL }: { units: UnitSystem; content: NonNullable<ReturnType<typeof toContent>['content']>; liquidMl: number; headspaceMl: number; rating: number; fermentableGPerL: number | null; currentAddedGPerL: number | null }) {
   const { setFieldValue, values } = useFormikContext<RecipeFormValues>();
-  const request = useDebouncedValue({
+  const asked = {
     liquidMl,
     headspaceMl,
     targetVolumes: content.targetVolumes,
@@ -203,25 +204,30 @@ function TargetHelper({ units, content, liquidMl, headspaceMl, rating, fermentab
     abvLimitPercent: null,
     bottleFormatId: null,
     yield: 'worst' as const,
-  }, 400);
+  };
+  const request = useDebouncedValue(asked, 400);
   const priming = usePrimingQuery(request);
   if (!priming.data || fermentableGPerL === null || currentAddedGPerL === null) return null;
-  const fromOthers = fermentableGPerL - Math.max(0, currentAddedGPerL);
-  const safeGPerL = (priming.data.safeSugarG / liquidMl) * 1000;
-  // Never more than the most that is safe; rounded down so rounding cannot cross it.
-  const needed = Math.floor(Math.max(0, safeGPerL - fromOthers) * 100) / 100;
+  // Until the answer is for what the form says now, the old figures would be for another target: say so instead.
+  const current = !priming.isPlaceholderData && JSON.stringify(request) === JSON.stringify(asked);
+  const advice = targetAdvice(priming.data, liquidMl, fermentableGPerL, currentAddedGPerL);
   return (
     <Card title="Sugar for the target fizz">
-      <Text>
-        {priming.data.targetReachable
-          ? `${content.targetVolumes} volumes need ${formatNumber(priming.data.sugarGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring ${formatNumber(fromOthers, 1)} g/L, so add ${formatNumber(needed, 1)} g/L of sucrose. The alcohol follows: +${formatNumber(priming.data.addedAbvPercent, 2)} % ABV.`
-          : `${content.targetVolumes} volumes cannot be reached safely in this bottle (${priming.data.limitedBy === 'alcohol' ? 'the alcohol would reach the limit' : 'the pressure would pass 80 % of its rating on a warm day'}). The most that is safe is ${formatNumber(safeGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring ${formatNumber(fromOthers, 1)} g/L, so add at most ${formatNumber(needed, 1)} g/L of sucrose.`}
-      </Text>
+      {!current ? (
+        <Text>Working out the sugar for {formatNumber(content.targetVolumes, 2)} volumes…</Text>
+      ) : (
+        <Text>
+          {advice.reachable
+            ? `${request.targetVolumes} volumes need ${formatNumber(advice.totalGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring ${formatNumber(advice.fromOthersGPerL, 1)} g/L, so add ${formatNumber(advice.addGPerL, 1)} g/L of sucrose. The alcohol follows: +${formatNumber(advice.addedAbvPercent, 2)} % ABV.`
+            : `${request.targetVolumes} volumes cannot be reached safely in this bottle (${advice.limitedBy === 'alcohol' ? 'the alcohol would reach the limit' : `the pressure would pass ${formatNumber(advice.ratingSharePercent, 0)} % of its rating on the warmest day`}). The most that is safe is ${formatNumber(advice.totalGPerL, 1)} g/L of fermentable sugar in all; the base and the ingredients bring ${formatNumber(advice.fromOthersGPerL, 1)} g/L, so add at most ${formatNumber(advice.addGPerL, 1)} g/L of sucrose.`}
+        </Text>
+      )}
       <Button
-        label={priming.data.targetReachable ? 'Use this sugar' : 'Use the most that is safe'}
+        label={advice.reachable ? 'Use this sugar' : 'Use the most that is safe'}
         variant="secondary"
         style={styles.left}
-        onPress={() => setFieldValue('sugars', [{ type: 'sucrose', gPerL: String(needed) }, ...values.sugars.filter((s) => s.type !== 'sucrose')])}
+        disabled={!current}
+        onPress={() => setFieldValue('sugars', [{ type: 'sucrose', gPerL: String(advice.addGPerL) }, ...values.sugars.filter((s) => s.type !== 'sucrose')])}
       />
       <Text variant="small">{units === 'us' ? 'Amounts in the recipe are per litre; the Scale tab gives them in US units.' : 'Amounts in the recipe are per litre of finished drink.'}</Text>
     </Card>

@@ -28,7 +28,7 @@ export function ReviewPanel({ recipeId, session }: { recipeId: number; session: 
           {approvedVersion ? ` · version ${approvedVersion} is approved for production` : ' · nothing approved for production yet'}.
         </Text>
         {editor && (state === 'draft' || state === 'returned') ? <SubmitForm recipeId={recipeId} version={currentVersion} /> : null}
-        {owner && submittedVersion ? <Decision recipeId={recipeId} version={submittedVersion} approvedVersion={approvedVersion} /> : null}
+        {owner && submittedVersion ? <Decision recipeId={recipeId} version={submittedVersion} approvedVersion={approvedVersion} licensed={session.organisation.licensedForAlcohol} /> : null}
         {owner && approvedVersion ? <Withdraw recipeId={recipeId} /> : null}
       </Card>
       <Card title="Record">
@@ -51,9 +51,17 @@ export function ReviewPanel({ recipeId, session }: { recipeId: number; session: 
 function SubmitForm({ recipeId, version }: { recipeId: number; version: number }) {
   const [message, setMessage] = useState('');
   const submit = useSubmitMutation(recipeId);
+  const detail = useRecipeQuery(recipeId, version);
+  const evaluation = useRecipeEvaluationQuery(detail.data?.content);
+  const dangers = evaluation.data?.carbonation.findings.filter((f) => f.level === 'danger') ?? [];
   return (
     <View style={styles.form}>
       <FormStatus error={submit.error} />
+      {dangers.length > 0 ? (
+        <Banner tone="danger" title={`Version ${version} has a danger finding`}>
+          {dangers.map((f) => f.message).join(' ')} An owner can approve it only by writing why it is acceptable, and never when its alcohol reaches the limit of a brewery not licensed for alcohol. Change the recipe first if you can.
+        </Banner>
+      ) : null}
       <TextField label="Message to the owners" value={message} onChangeText={setMessage} multiline placeholder="What changed, what to taste for" />
       <Button label={`Submit version ${version} for review`} busy={submit.isPending} onPress={() => submit.mutate({ version, message })} style={styles.left} />
     </View>
@@ -61,7 +69,7 @@ function SubmitForm({ recipeId, version }: { recipeId: number; version: number }
 }
 
 /** What an owner sees before deciding: the submitted version's numbers and findings, tastings, and what changed. */
-function Decision({ recipeId, version, approvedVersion }: { recipeId: number; version: number; approvedVersion: number | null }) {
+function Decision({ recipeId, version, approvedVersion, licensed }: { recipeId: number; version: number; approvedVersion: number | null; licensed: boolean }) {
   const detail = useRecipeQuery(recipeId, version);
   const evaluation = useRecipeEvaluationQuery(detail.data?.content);
   const tastings = useTastingsQuery(recipeId);
@@ -72,6 +80,14 @@ function Decision({ recipeId, version, approvedVersion }: { recipeId: number; ve
   const [override, setOverride] = useState('');
   const dangers = evaluation.data?.carbonation.findings.filter((f) => f.level === 'danger') ?? [];
   const error = approve.error ?? giveBack.error;
+  // The same rules the server applies (409 alcohol_limit, 400 on overrideReason), said before the button is pressed.
+  const alcoholBlocked = !licensed && dangers.some((f) => f.code === 'alcohol-over-limit');
+  const needsReason = dangers.length > 0 && override.trim() === '';
+  const approveBlockedBy = alcoholBlocked
+    ? 'Approval is closed: the worst-case alcohol is at or over the brewery’s limit and the brewery has not declared that it is licensed to make alcoholic beverages. Return it with changes.'
+    : needsReason
+      ? 'Approve needs your reason first: this version has a danger finding, so write above why it is acceptable. The reason is recorded and printed on the card.'
+      : null;
   return (
     <View style={styles.form}>
       <Text variant="subheading">Version {version}, before you decide</Text>
@@ -94,14 +110,20 @@ function Decision({ recipeId, version, approvedVersion }: { recipeId: number; ve
       ) : null}
       <FormStatus error={error} />
       <TextField label="Comment" value={comment} onChangeText={setComment} multiline />
-      {dangers.length > 0 ? (
+      {dangers.length > 0 && !alcoholBlocked ? (
         <>
           <Banner tone="danger" title="A danger finding blocks approval">Approve only if you write why it is acceptable; the reason is recorded.</Banner>
           <TextField label="Why you approve despite the danger finding" value={override} onChangeText={setOverride} multiline />
         </>
       ) : null}
+      {approveBlockedBy ? <Text variant="small">{approveBlockedBy}</Text> : null}
       <View style={styles.row}>
-        <Button label={`Approve version ${version}`} busy={approve.isPending} onPress={() => approve.mutate({ version, comment, overrideReason: override.trim() || null })} />
+        <Button
+          label={`Approve version ${version}`}
+          busy={approve.isPending}
+          disabled={approveBlockedBy !== null || !evaluation.data}
+          onPress={() => approve.mutate({ version, comment, overrideReason: override.trim() || null })}
+        />
         <Button label="Return with changes" variant="secondary" busy={giveBack.isPending} onPress={() => giveBack.mutate({ version, comment })} />
       </View>
     </View>

@@ -15,14 +15,20 @@ interface Props {
   saved: boolean;
 }
 
-type Values = { name: string; abvLimitPercent: string; warmestTempC: string; licensed: 'no' | 'yes' };
-const toInput = (v: Values) => ({ name: v.name, abvLimitPercent: parseNumber(v.abvLimitPercent), warmestTempC: parseNumber(v.warmestTempC), licensedForAlcohol: v.licensed === 'yes' });
+type Values = { name: string; abvLimitPercent: string; warmestTempC: string; ratingSharePercent: string; licensed: 'no' | 'yes' };
+const toInput = (v: Values) => ({
+  name: v.name,
+  abvLimitPercent: parseNumber(v.abvLimitPercent),
+  warmestTempC: parseNumber(v.warmestTempC),
+  ratingSharePercent: parseNumber(v.ratingSharePercent),
+  licensedForAlcohol: v.licensed === 'yes',
+});
 
-/** The brewery's name, the alcohol limit and the warm-day temperature every calculation checks against. */
+/** The brewery's name, the alcohol limit, the warm-day temperature every calculation checks against, and the sugar helpers' margin. */
 export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Props) {
   return (
     <Formik<Values>
-      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent), warmestTempC: String(organisation.warmestTempC), licensed: organisation.licensedForAlcohol ? 'yes' : 'no' }}
+      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent), warmestTempC: String(organisation.warmestTempC), ratingSharePercent: String(organisation.ratingSharePercent), licensed: organisation.licensedForAlcohol ? 'yes' : 'no' }}
       enableReinitialize
       validate={(values) => check(organisationSchema, toInput(values)).errors}
       onSubmit={submitTo((values) => onSubmit(check(organisationSchema, toInput(values)).value!))}
@@ -45,6 +51,13 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
             suffix="°C"
             inputMode="decimal"
             hint="A closed car, a shop window, a summer delivery. Every pressure check includes this temperature, whatever else is asked."
+          />
+          <FormField
+            name="ratingSharePercent"
+            label="Most sugar: share of the bottle rating"
+            suffix="%"
+            inputMode="decimal"
+            hint="The sugar helpers never offer more than keeps the worst case at this share of the bottle's rating on the warmest day. 80 % leaves a margin for bottles that are weaker than rated."
           />
           <Segmented
             label="Licensed to make alcoholic beverages"

@@ -17,6 +17,8 @@ export interface Organisation {
   abvLimitPercent: number;
   /** The warmest the brewery's bottles may meet, °C: every pressure check includes it. */
   warmestTempC: number;
+  /** The share of a bottle's rating the most sugar may reach at the warm check, %. */
+  ratingSharePercent: number;
   /** Declared by an owner: licensed to make alcoholic beverages (versions at or over the limit may then be approved). */
   licensedForAlcohol: boolean;
 }

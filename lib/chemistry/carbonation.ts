@@ -429,6 +429,8 @@ export interface PrimingResult {
    * and the alcohol below the limit. Null when no rating is known.
    */
   maxSafeSugarG: number | null;
+  /** The share of the rating the most sugar may reach at the warm check (the brewery's margin), 0–1. */
+  ratingShare: number;
   /** What the helpers fill: the sugar for the target, or the most that is safe when the target is beyond it. */
   safeSugarG: number;
   /** False when the target cannot be reached within the rating share or the alcohol limit. */
@@ -502,6 +504,7 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   }
   return {
     checkedTempC,
+    ratingShare: share,
     safeSugarG,
     targetReachable: limitedBy === null,
     limitedBy,

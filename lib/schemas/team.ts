@@ -32,8 +32,11 @@ export type PreferencesInput = yup.InferType<typeof preferencesSchema>;
 export const organisationSchema = yup.object({
   name: yup.string().trim().min(2, 'Enter the brewery name (at least 2 characters).').max(80, 'Keep the brewery name under 80 characters.').required('Enter the brewery name.'),
   abvLimitPercent: numberField('Alcohol limit', { positive: true, max: 5, unit: '% ABV' }).required('Enter the alcohol limit in % ABV.'),
-  warmestTempC: numberField('Warmest the bottles may meet', { min: 20, max: 60, unit: '°C' }).default(35),
-  licensedForAlcohol: yup.boolean().strict().default(false),
+  // Left out, a setting keeps its value: a client that does not know a setting cannot reset it.
+  warmestTempC: numberField('Warmest the bottles may meet', { min: 20, max: 60, unit: '°C' }).optional(),
+  // Never above 100 %: the rating itself. Below half the rating most fizz targets become unreachable.
+  ratingSharePercent: numberField('Most sugar: share of the bottle rating', { min: 50, max: 100, unit: '%' }).optional(),
+  licensedForAlcohol: yup.boolean().strict().optional(),
 });
 export type OrganisationInput = yup.InferType<typeof organisationSchema>;
 

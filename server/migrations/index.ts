@@ -10,6 +10,7 @@ import * as secureDefaults from './0007-secure-defaults';
 import * as warmDay from './0008-warm-day';
 import * as alcoholLicence from './0009-alcohol-licence';
 import * as tastingVersions from './0010-tasting-versions';
+import * as ratingShare from './0011-rating-share';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -28,4 +29,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0008-warm-day', ...warmDay },
   { name: '0009-alcohol-licence', ...alcoholLicence },
   { name: '0010-tasting-versions', ...tastingVersions },
+  { name: '0011-rating-share', ...ratingShare },
 ];

@@ -1,4 +1,4 @@
-import { DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
+import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 /** A brewery. Every record in Fizzwright belongs to exactly one. */
@@ -9,6 +9,8 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
   declare abvLimitPercent: CreationOptional<number>;
   /** The warmest the bottles may meet, °C (35 by default): pressure is always judged there too. */
   declare warmestTempC: CreationOptional<number>;
+  /** The share of a bottle's rating the most sugar may reach at the warm check, % (80 by default). */
+  declare ratingSharePercent: CreationOptional<number>;
   /** Declared by an owner: the brewery is licensed to make alcoholic beverages, so versions at or over the limit may be approved. */
   declare licensedForAlcohol: CreationOptional<boolean>;
   declare licenceDeclaredById: CreationOptional<number | null>;
@@ -23,6 +25,7 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
         name: { type: DataTypes.STRING(80), allowNull: false },
         abvLimitPercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
         warmestTempC: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_WARMEST_TEMP_C },
+        ratingSharePercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_RATING_SHARE * 100 },
         licensedForAlcohol: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         licenceDeclaredById: { type: DataTypes.INTEGER, allowNull: true },
         licenceDeclaredAt: { type: DataTypes.DATE, allowNull: true },

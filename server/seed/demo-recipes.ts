@@ -89,7 +89,7 @@ const RECIPES: DemoRecipe[] = [
         { ingredientId: ids.ginger, amount: 8, unit: 'g-per-l', extractionPct: 60 },
         { ingredientId: ids.limeJuice, amount: 15, unit: 'g-per-l', extractionPct: 100 },
       ],
-      sugars: [{ type: 'honey', gPerL: 2.5 }],
+      sugars: [{ type: 'honey', gPerL: 2 }],
       process: process('steep-strain'),
       bottleFormatId: bottle,
       targetVolumes: 2.4,

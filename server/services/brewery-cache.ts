@@ -1,4 +1,4 @@
-import { DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
+import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
 import { BottleFormat } from '../models/bottle-format';
 import { Organisation } from '../models/organisation';
 
@@ -9,6 +9,7 @@ import { Organisation } from '../models/organisation';
 interface Entry {
   abvLimitPercent?: number;
   warmestTempC?: number;
+  ratingSharePercent?: number;
   formats?: Map<number, BottleFormat>;
 }
 
@@ -30,10 +31,11 @@ function entry(organisationId: number): Entry {
 
 async function loadSettings(organisationId: number): Promise<Entry> {
   const e = entry(organisationId);
-  if (e.abvLimitPercent === undefined || e.warmestTempC === undefined) {
-    const organisation = await Organisation.findByPk(organisationId, { attributes: ['abvLimitPercent', 'warmestTempC'] });
+  if (e.abvLimitPercent === undefined || e.warmestTempC === undefined || e.ratingSharePercent === undefined) {
+    const organisation = await Organisation.findByPk(organisationId, { attributes: ['abvLimitPercent', 'warmestTempC', 'ratingSharePercent'] });
     e.abvLimitPercent = organisation?.abvLimitPercent ?? 0.5;
     e.warmestTempC = organisation?.warmestTempC ?? DEFAULT_WARMEST_TEMP_C;
+    e.ratingSharePercent = organisation?.ratingSharePercent ?? DEFAULT_RATING_SHARE * 100;
   }
   return e;
 }
@@ -45,6 +47,11 @@ export async function cachedAbvLimit(organisationId: number): Promise<number> {
 /** The warmest the brewery's bottles may meet, °C. */
 export async function cachedWarmestTemp(organisationId: number): Promise<number> {
   return (await loadSettings(organisationId)).warmestTempC!;
+}
+
+/** The share of a bottle's rating the most sugar may reach at the warm check, 0–1. */
+export async function cachedRatingShare(organisationId: number): Promise<number> {
+  return (await loadSettings(organisationId)).ratingSharePercent! / 100;
 }
 
 /** A bottle format of the brewery (archived ones included), or undefined. */

@@ -6,7 +6,7 @@ import { Op } from 'sequelize';
 import { ingredientContribution } from '../../lib/recipes/ingredient-sugar';
 import { Ingredient } from '../db';
 import { badRequest } from '../errors';
-import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
+import { cachedAbvLimit, cachedBottleFormat, cachedRatingShare, cachedWarmestTemp } from './brewery-cache';
 import type { AuthContext } from './sessions';
 
 interface ResolvedContainer {
@@ -77,7 +77,9 @@ export async function priming(auth: AuthContext, input: PrimingRequest): Promise
   if (input.sugarType === 'lactose') {
     throw badRequest('Lactose does not ferment, so it cannot carbonate a drink.', { sugarType: 'Choose a sugar yeast can ferment.' });
   }
-  const result = computePriming({ ...input, ...container, abvLimitPercent: await abvLimit(auth, input.abvLimitPercent), warmDayTempC: await cachedWarmestTemp(auth.organisationId) });
+  const result = computePriming({ ...input, ...container, abvLimitPercent: await abvLimit(auth, input.abvLimitPercent), warmDayTempC: await cachedWarmestTemp(auth.organisationId),
+    ratingShare: await cachedRatingShare(auth.organisationId),
+  });
   return { ...result, bottleFormat: container.bottleFormat };
 }
 

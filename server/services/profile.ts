@@ -16,15 +16,17 @@ export async function updatePreferences(userId: number, input: PreferencesInput)
   return sessionFor(userId);
 }
 
-/** The brewery's own settings (owners only): its name, its alcohol limit and the warmest its bottles may meet. */
+/** The brewery's own settings (owners only): its name, its alcohol limit, the warmest its bottles may meet and its margin. */
 export async function updateOrganisation(organisationId: number, userId: number, input: OrganisationInput): Promise<Session> {
   const organisation = await Organisation.findByPk(organisationId, { rejectOnEmpty: true });
   // Who declared the licence, and when, is kept with it: it lets versions over the alcohol limit be approved.
   const licence =
-    input.licensedForAlcohol !== organisation.licensedForAlcohol
+    input.licensedForAlcohol !== undefined && input.licensedForAlcohol !== organisation.licensedForAlcohol
       ? { licensedForAlcohol: input.licensedForAlcohol, licenceDeclaredById: userId, licenceDeclaredAt: new Date() }
       : {};
-  await organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, warmestTempC: input.warmestTempC, ...licence });
+  const given = { warmestTempC: input.warmestTempC, ratingSharePercent: input.ratingSharePercent };
+  const settings = Object.fromEntries(Object.entries(given).filter(([, value]) => value !== undefined));
+  await organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, ...settings, ...licence });
   return sessionFor(userId);
 }
 

@@ -11,7 +11,7 @@ export function toMember(user: User): Member {
 export function toSession(user: User, organisation: Organisation): Session {
   return {
     user: { id: user.id, name: user.name, email: user.email, role: user.role, unitSystem: user.unitSystem, notifyReviews: user.notifyReviews },
-    organisation: { id: organisation.id, name: organisation.name, abvLimitPercent: organisation.abvLimitPercent, warmestTempC: organisation.warmestTempC, licensedForAlcohol: organisation.licensedForAlcohol },
+    organisation: { id: organisation.id, name: organisation.name, abvLimitPercent: organisation.abvLimitPercent, warmestTempC: organisation.warmestTempC, ratingSharePercent: organisation.ratingSharePercent, licensedForAlcohol: organisation.licensedForAlcohol },
   };
 }
 

@@ -25,8 +25,15 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
 
   // More sugar: a caution (or worse) shows before anything is sealed.
   await page.getByLabel('Sucrose (table sugar) per litre').fill('9');
-  await expect(page.getByText(/is over the bottle's 3 bar rating/).first()).toBeVisible();
+  await expect(page.getByText(/is at or over the bottle's 3 bar rating/).first()).toBeVisible();
   await page.getByLabel('Sucrose (table sugar) per litre').fill('2');
+  // The sugar for the target follows the target as it changes.
+  await page.getByLabel('Target carbonation').fill('1.2');
+  await expect(page.getByText(/^1\.2 volumes need .* g\/L of fermentable sugar in all/)).toBeVisible();
+  await page.getByLabel('Target carbonation').fill('4');
+  await expect(page.getByText(/^4 volumes cannot be reached safely in this bottle \(the pressure would pass 80 % of its rating/)).toBeVisible();
+  await page.getByLabel('Target carbonation').fill('2');
+  await expect(page.getByText(/^2 volumes (need|cannot)/)).toBeVisible();
   await page.getByRole('button', { name: 'Save as new version' }).click();
   await expect(page.getByText('Version 2', { exact: true })).toBeVisible();
 

@@ -65,3 +65,41 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await other.goto(url(`/c/${code}`));
   await expect(other.getByRole('heading', { name: /Hedgerow Bramble, version \d+/ })).toBeVisible();
 });
+
+test('a danger version: the developer is told on submitting, Approve says it needs a reason, the card shows the override', async ({ browser }) => {
+  const developer = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(developer, 'rafi@wrenfield.example', 'wrenfield-developer');
+  await openNav(developer, 'Recipes');
+  await developer.getByRole('link', { name: 'Sour Cherry Cardamom' }).click();
+  await developer.getByRole('radio', { name: 'Review' }).click();
+  await expect(developer.getByText(/Version \d+ has a danger finding/)).toBeVisible();
+  await shot(developer, 'phone-submit-danger');
+  await developer.getByRole('button', { name: /Submit version \d+ for review/ }).click();
+  await expect(developer.getByText('Waiting for review').first()).toBeVisible();
+
+  const owner = await (await browser.newContext({ viewport: WIDE })).newPage();
+  await signIn(owner, 'imogen@wrenfield.example', 'wrenfield-owner');
+  await openNav(owner, 'Recipes');
+  await owner.getByRole('link', { name: 'Sour Cherry Cardamom' }).click();
+  await owner.getByRole('radio', { name: 'Review' }).click();
+  const approve = owner.getByRole('button', { name: /Approve version \d+/ });
+  await expect(owner.getByText(/Approve needs your reason first/)).toBeVisible();
+  await expect(approve).toBeDisabled();
+  await shot(owner, 'wide-approve-needs-reason');
+  await owner.getByLabel('Comment').fill('Trial run only, 24 bottles.');
+  await owner.getByLabel('Why you approve despite the danger finding').fill('Kept in the cold room at 4 °C until sold; never warm.');
+  await expect(owner.getByText(/Approve needs your reason first/)).toBeHidden();
+  await approve.click();
+  await expect(owner.getByText('Approved for production').first()).toBeVisible();
+
+  const brewer = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(brewer, 'juno@wrenfield.example', 'wrenfield-brewer');
+  await brewer.getByRole('link', { name: 'Sour Cherry Cardamom' }).click();
+  await expect(brewer.getByText('Safety: danger')).toBeVisible();
+  await expect(brewer.getByText('Approved over a danger finding. Reason: Kept in the cold room at 4 °C until sold; never warm.')).toBeVisible();
+  await brewer.getByRole('button', { name: 'Print card' }).click();
+  await expect(brewer.getByText('Safety: DANGER')).toBeVisible();
+  await expect(brewer.getByText(/Approved over a danger finding\. Reason: Kept in the cold room/)).toBeVisible();
+  await expect(brewer.getByText(/Approval comment: Trial run only, 24 bottles\./)).toBeVisible();
+  await shot(brewer, 'phone-card-danger-override');
+});

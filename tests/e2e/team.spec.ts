@@ -89,8 +89,9 @@ test('the demo owner signs in on a wide screen and sees the side rail', async ({
   await shot(page, 'wide-demo-owner-home');
   await openNav(page, 'Team');
   await expect(page.getByText('Juno Marsh')).toBeVisible();
-  // The brewery settings every check reads: the warm day and whether the brewery may make alcoholic drinks.
+  // The brewery settings every check reads: the warm day, the sugar helpers' margin and whether the brewery may make alcoholic drinks.
   await expect(page.getByLabel('Warmest the bottles may meet')).toHaveValue('35');
+  await expect(page.getByLabel('Most sugar: share of the bottle rating')).toHaveValue('80');
   await expect(page.getByRole('radio', { name: 'No', exact: true })).toHaveAttribute('aria-checked', 'true');
   await expect(page.getByText(/cannot be approved, with or without an override/)).toBeVisible();
   await shot(page, 'wide-demo-owner-team');

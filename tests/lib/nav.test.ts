@@ -2,7 +2,7 @@ import { isActive, navItemsFor } from '@/components/shell/nav';
 import type { ServerInfo, Session } from '@/lib/api/types';
 import type { Role } from '@/lib/roles';
 
-const session = (role: Role): Session => ({ user: { id: 1, name: 'A', email: 'a@b.test', role, unitSystem: 'metric', notifyReviews: true }, organisation: { id: 1, name: 'B', abvLimitPercent: 0.5, warmestTempC: 35, licensedForAlcohol: false } });
+const session = (role: Role): Session => ({ user: { id: 1, name: 'A', email: 'a@b.test', role, unitSystem: 'metric', notifyReviews: true }, organisation: { id: 1, name: 'B', abvLimitPercent: 0.5, warmestTempC: 35, ratingSharePercent: 80, licensedForAlcohol: false } });
 const info = (outbox: boolean, outboxOpen: boolean): ServerInfo => ({ status: 'ok', db: 'ok', version: '0', outbox, outboxOpen });
 
 describe('navItemsFor', () => {

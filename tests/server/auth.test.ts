@@ -36,7 +36,7 @@ describe('POST /api/auth/sign-up', () => {
     const res = await request(app).post('/api/auth/confirm-sign-up').send({ token }).expect(201);
     expect(res.body).toEqual({
       user: { id: expect.any(Number), name: 'Tamsin Vale', email: input.email, role: 'owner', unitSystem: 'metric', notifyReviews: true },
-      organisation: { id: expect.any(Number), name: 'Larkspur Ferments', abvLimitPercent: 0.5, warmestTempC: 35, licensedForAlcohol: false },
+      organisation: { id: expect.any(Number), name: 'Larkspur Ferments', abvLimitPercent: 0.5, warmestTempC: 35, ratingSharePercent: 80, licensedForAlcohol: false },
     });
     expect(JSON.stringify(res.body)).not.toMatch(/hash|password/i);
     const cookie = String(res.headers['set-cookie']);

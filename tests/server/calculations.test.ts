@@ -196,3 +196,26 @@ describe('the brewery warm day (PATCH /api/organisation)', () => {
     expect(bad.body.error.fields.warmestTempC).toMatch(/must be a number/);
   });
 });
+
+describe('the brewery margin for the most sugar (PATCH /api/organisation)', () => {
+  it('is 80 % of the rating until an owner changes it; a save that leaves a setting out keeps it', async () => {
+    const brewery = await signUpOwner(app);
+    // Judged at the sealing temperature (warmest set to 20 °C), where the gauge reads the CO2 pressure alone.
+    await brewery.agent.patch('/api/organisation').send({ name: 'Margin Ferments', abvLimitPercent: 0.5, warmestTempC: 20 }).expect(200);
+    const ask = { liquidMl: 500, headspaceMl: 25, targetVolumes: 3, residualCo2Volumes: 0.9, sealedTempC: 20, highestTempC: 20, maxWorkingPressureBar: 3, abvLimitPercent: 5 };
+    // Worked by hand in tests/lib/chemistry/pressure.test.ts: 80 % of 3 bar leaves room for 2.4625 g of sucrose.
+    const at80 = await brewery.agent.post('/api/calculations/priming').send(ask).expect(200);
+    expect(at80.body.ratingShare).toBe(0.8);
+    expect(Math.abs(at80.body.maxSafeSugarG - 2.4625) / 2.4625).toBeLessThan(0.01);
+    // 60 %: 1.8 bar = 1.77646 atm × 0.0206253 mol/atm = 0.036640 mol, less 0.020077 mol already in the base =
+    // 0.016563 mol of CO2 from sugar = 0.016563 ÷ 4 × 342.297 g = 1.4174 g of sucrose.
+    const saved = await brewery.agent.patch('/api/organisation').send({ name: 'Margin Ferments', abvLimitPercent: 0.5, ratingSharePercent: 60 }).expect(200);
+    expect(saved.body.organisation).toMatchObject({ ratingSharePercent: 60, warmestTempC: 20 });
+    const at60 = await brewery.agent.post('/api/calculations/priming').send(ask).expect(200);
+    expect(Math.abs(at60.body.maxSafeSugarG - 1.4174) / 1.4174).toBeLessThan(0.01);
+    for (const ratingSharePercent of [49, 101, '80']) {
+      const bad = await brewery.agent.patch('/api/organisation').send({ name: 'Margin Ferments', abvLimitPercent: 0.5, ratingSharePercent }).expect(400);
+      expect(bad.body.error.fields.ratingSharePercent).toBeDefined();
+    }
+  });
+});
