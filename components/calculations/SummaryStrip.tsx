@@ -19,7 +19,7 @@ export function SummaryStrip({ result, units }: { result: CarbonationResult; uni
     <View style={styles.strip} role="status" aria-live="polite">
       <Badge label={level === 'danger' ? 'Danger' : level === 'caution' ? 'Caution' : 'OK'} tone={level} />
       <Text style={styles.text}>
-        {formatNumber(worst.co2.totalVolumes, 2)} vol · {formatPressure(worst.gaugeBar[hottest], units)} at {formatTemp(temps[hottest], units)} ·{' '}
+        {formatNumber(worst.co2.totalVolumes, 2)} vol · {result.pressures[hottest]?.liquidFills ? 'bottle full' : formatPressure(worst.gaugeBar[hottest], units)} at {formatTemp(temps[hottest], units)} ·{' '}
         {formatNumber(worst.alcohol.totalAbvPercent, 2)} % ABV
       </Text>
     </View>

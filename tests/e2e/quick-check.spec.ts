@@ -37,6 +37,15 @@ async function answerTheQuestion(page: Page, prefix: string) {
   await expect(page.getByText('5.00 g', { exact: true })).toBeVisible();
   await expect(page.getByText(/is at or over the bottle's 3 bar rating/).first()).toBeVisible();
   await shot(page, `${prefix}-quick-check-danger`);
+
+  // Almost no headspace: the liquid expands as it warms and fills the bottle before 35 °C. By hand, 330 mL filled at
+  // 20 °C with 1 mL of gas space fills when ρ = 998.2067 × 330 ÷ 331 = 995.1910 kg/m³, between 31 °C (995.3424) and
+  // 32 °C (995.0275) at 31 + 0.1514 ÷ 0.3149 = 31.48 °C (CIPM table, Tanaka et al. 2001); it needs
+  // 331 × (1 − 994.0319 ÷ 998.2067) = 1.38 mL at 35 °C, so 2 mL whole.
+  await page.getByLabel('Headspace').fill('1');
+  await expect(page.getByText(/At 31\.5 °C the warmed liquid fills the bottle.*Leave at least 2 mL of headspace/).first()).toBeVisible();
+  await expect(page.getByText('bottle full: no gas space').first()).toBeVisible();
+  await shot(page, `${prefix}-quick-check-full-bottle`);
 }
 
 test('a developer answers sugar, pressure and alcohol for one bottle on a phone', async ({ browser }) => {
