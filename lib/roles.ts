@@ -14,7 +14,44 @@ export const ROLE_DESCRIPTIONS: Record<Role, string> = {
   brewer: 'Runs approved recipes on the floor and logs readings.',
 };
 
-/** Who may manage the team (invite, change roles, deactivate). */
-export function canManageTeam(role: Role | undefined): boolean {
-  return role === 'owner';
+/**
+ * Who may do what: the one list the server's `allow()` and every screen read. A capability names an action, never a
+ * role, so a new role or a changed rule is one line here.
+ */
+export const CAPABILITIES = {
+  /** Create, save, duplicate, archive and restore recipes; record tastings. */
+  'recipes.edit': ['owner', 'developer'],
+  /** Submit a version for review. */
+  'recipes.submit': ['owner', 'developer'],
+  /** Approve, return and withdraw: answering for what goes into production. */
+  'recipes.approve': ['owner'],
+  /** Work on recipes in development (drafts, tastings, history); others see what is approved for production. */
+  'recipes.develop': ['owner', 'developer'],
+  /** Add and change house ingredients and their files. */
+  'ingredients.edit': ['owner', 'developer'],
+  /** Add, change and archive bottle formats and their ratings. */
+  'bottles.edit': ['owner'],
+  /** Invite, change roles, deactivate. */
+  'team.manage': ['owner'],
+  /** The brewery's name, alcohol limit, warm day, margin and licence. */
+  'brewery.settings': ['owner'],
+  /** Read the brewery's invitation and review mail in the outbox, beside one's own. */
+  'outbox.brewery': ['owner'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Capability = keyof typeof CAPABILITIES;
+
+/** Whether a role may do something. An unknown role (signed out) may do nothing. */
+export function can(role: Role | undefined, capability: Capability): boolean {
+  return role !== undefined && (CAPABILITIES[capability] as readonly Role[]).includes(role);
 }
+
+/** The roles that may do something (for queries such as "who should review this"). */
+export function rolesWith(capability: Capability): readonly Role[] {
+  return CAPABILITIES[capability];
+}
+
+/** The role of the person who signs a brewery up: someone must be able to manage the team and approve recipes. */
+export const FOUNDER_ROLE: Role = 'owner';
+/** The role an invitation form starts with: the most common newcomer. */
+export const DEFAULT_INVITE_ROLE: Role = 'developer';

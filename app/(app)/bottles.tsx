@@ -6,10 +6,11 @@ import { Cautions } from '@/components/calculations/Cautions';
 import { Banner, Button, Card, Loading, Screen } from '@/components/ui';
 import { useBottleFormatsQuery, useCreateBottleFormatMutation, useUpdateBottleFormatMutation, type BottleFormat } from '@/lib/api/bottle-formats';
 import { useSessionQuery } from '@/lib/api/session';
+import { can } from '@/lib/roles';
 
 export default function BottlesScreen() {
   const { data: session } = useSessionQuery();
-  const canEdit = session?.user.role === 'owner';
+  const canEdit = can(session?.user.role, 'bottles.edit');
   const [showArchived, setShowArchived] = useState(false);
   const formats = useBottleFormatsQuery(showArchived);
   const [editing, setEditing] = useState<BottleFormat | 'new' | null>(null);

@@ -7,12 +7,12 @@ import { MembersTable } from '@/components/team/MembersTable';
 import { Banner, Card, Loading, Screen } from '@/components/ui';
 import { useSessionQuery, useUpdateOrganisationMutation } from '@/lib/api/session';
 import { useInviteMutation, useTeamQuery } from '@/lib/api/team';
-import { canManageTeam } from '@/lib/roles';
+import { can } from '@/lib/roles';
 import { breakpoints, space } from '@/lib/theme';
 
 export default function TeamScreen() {
   const { data: session } = useSessionQuery();
-  const owner = canManageTeam(session?.user.role);
+  const owner = can(session?.user.role, 'team.manage');
   const team = useTeamQuery(owner);
   const invite = useInviteMutation();
   const settings = useUpdateOrganisationMutation();

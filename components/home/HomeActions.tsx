@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { useServerInfoQuery } from '@/lib/api/session';
 import { useTeamQuery } from '@/lib/api/team';
 import type { Session } from '@/lib/api/types';
-import { canManageTeam } from '@/lib/roles';
+import { can } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
 import { Button, Card, Text } from '../ui';
@@ -19,7 +19,7 @@ interface Action {
 /** The next useful things this person can do, by role and by the state of their brewery. */
 export function HomeActions({ session }: { session: Session }) {
   const router = useRouter();
-  const owner = canManageTeam(session.user.role);
+  const owner = can(session.user.role, 'team.manage');
   const team = useTeamQuery(owner);
   const serverInfo = useServerInfoQuery();
   const actions: Action[] = [

@@ -8,6 +8,7 @@ import { colors, fonts, space } from '@/lib/theme';
 
 import { STATE_TONE } from '../recipes/ReviewPanel';
 import { Badge, Card, SafetyBadge, Text } from '../ui';
+import { can } from '@/lib/roles';
 
 const VIEW: Record<Role, { title: string; empty: string; status: 'draft' | 'approved'; keep: (r: RecipeSummary) => boolean }> = {
   owner: { title: 'Waiting for your review', empty: 'Nothing waits for review.', status: 'draft', keep: (r) => r.reviewState === 'submitted' },
@@ -30,7 +31,7 @@ export function RecipeShortlist({ role }: { role: Role }) {
           </Link>
           <View style={styles.badges}>
             <SafetyBadge level={r.safetyLevel} />
-            <Badge label={role === 'brewer' ? `v${r.approvedVersion}` : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`} tone={role === 'brewer' ? 'success' : STATE_TONE[r.reviewState]} />
+            <Badge label={!can(role, 'recipes.develop') ? `v${r.approvedVersion}` : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`} tone={!can(role, 'recipes.develop') ? 'success' : STATE_TONE[r.reviewState]} />
           </View>
         </View>
       ))}

@@ -8,6 +8,7 @@ import { space } from '@/lib/theme';
 
 import { FindingList } from '../calculations/FindingList';
 import { Badge, Banner, Button, Card, FormStatus, Loading, Text, TextField, type Tone } from '../ui';
+import { can } from '@/lib/roles';
 
 export const STATE_TONE: Record<ReviewState, Tone> = { draft: 'neutral', submitted: 'caution', approved: 'success', returned: 'danger' };
 const ACTION_LABELS: Record<string, string> = { submitted: 'Submitted', approved: 'Approved', returned: 'Returned with changes', withdrawn: 'Approval withdrawn' };
@@ -15,8 +16,8 @@ const ACTION_LABELS: Record<string, string> = { submitted: 'Submitted', approved
 /** The way to production: submit, and for owners what to look at before deciding, then the decision; and the record. */
 export function ReviewPanel({ recipeId, session }: { recipeId: number; session: Session }) {
   const review = useReviewQuery(recipeId);
-  const owner = session.user.role === 'owner';
-  const editor = owner || session.user.role === 'developer';
+  const owner = can(session.user.role, 'recipes.approve');
+  const editor = can(session.user.role, 'recipes.submit');
   if (!review.data) return <Loading />;
   const { state, currentVersion, submittedVersion, approvedVersion, events } = review.data;
   return (

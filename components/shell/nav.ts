@@ -1,5 +1,5 @@
 import type { ServerInfo, Session } from '@/lib/api/types';
-import { canManageTeam } from '@/lib/roles';
+import { can } from '@/lib/roles';
 
 import type { IconName } from '../ui/Icon';
 
@@ -13,7 +13,7 @@ export interface NavItem {
 
 /** The destinations a person sees, by role. A destination appears only once it does something. */
 export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined): NavItem[] {
-  const owner = canManageTeam(session.user.role);
+  const role = session.user.role;
   const items: NavItem[] = [
     { href: '/', label: 'Home', shortLabel: 'Home', icon: 'home' },
     { href: '/recipes', label: 'Recipes', shortLabel: 'Recipes', icon: 'flask' },
@@ -21,8 +21,8 @@ export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined
     { href: '/ingredients', label: 'Ingredients', shortLabel: 'Ingredients', icon: 'leaf' },
     { href: '/bottles', label: 'Bottles', shortLabel: 'Bottles', icon: 'bottle' },
   ];
-  if (owner) items.push({ href: '/team', label: 'Team', shortLabel: 'Team', icon: 'team' });
-  if (serverInfo?.outbox && (owner || serverInfo.outboxOpen)) items.push({ href: '/outbox', label: 'Mail outbox', shortLabel: 'Outbox', icon: 'mail' });
+  if (can(role, 'team.manage')) items.push({ href: '/team', label: 'Team', shortLabel: 'Team', icon: 'team' });
+  if (serverInfo?.outbox && (can(role, 'outbox.brewery') || serverInfo.outboxOpen)) items.push({ href: '/outbox', label: 'Mail outbox', shortLabel: 'Outbox', icon: 'mail' });
   items.push({ href: '/profile', label: 'Profile', shortLabel: 'Profile', icon: 'person' });
   return items;
 }

@@ -1,3 +1,4 @@
+import { DEFAULT_INVITE_ROLE } from '@/lib/roles';
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
@@ -12,7 +13,7 @@ interface Props {
   error: unknown;
 }
 
-const initialValues: InviteInput = { email: '', role: 'developer' };
+const initialValues: InviteInput = { email: '', role: DEFAULT_INVITE_ROLE };
 
 export function InviteForm({ onSubmit, error }: Props) {
   return (

@@ -33,3 +33,6 @@ export const bottleFormatSchema = yup.object({
   notes: yup.string().trim().max(500, 'Keep notes under 500 characters.').nullable().default(null),
 });
 export type BottleFormatInput = yup.InferType<typeof bottleFormatSchema>;
+
+/** The bottle formats list: the current ones, or the archived. */
+export const bottleFormatListQuerySchema = yup.object({ archived: yup.boolean().default(false) });

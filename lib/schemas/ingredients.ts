@@ -5,12 +5,15 @@ import { numberField } from './numbers';
 
 const perServing = (label: string) => numberField(label, { min: 0, max: 100000, unit: 'g' }).nullable().default(null);
 
+const ingredientName = () =>
+  yup.string().trim().min(2, 'Name the ingredient (at least 2 characters).').max(200, 'Keep the name under 200 characters.').required('Name the ingredient.');
+
 /**
  * A house ingredient as a person enters it: the values printed on the product label for one serving, which the
  * server turns into values per 100 g.
  */
 export const houseIngredientSchema = yup.object({
-  name: yup.string().trim().min(2, 'Name the ingredient (at least 2 characters).').max(200, 'Keep the name under 200 characters.').required('Name the ingredient.'),
+  name: ingredientName(),
   category: (yup.string().oneOf(CATEGORIES, 'Choose a category.').required('Choose a category.') as yup.StringSchema<Category>),
   servingSize: numberField('Serving size', { positive: true, max: 100000 }).required('Enter the serving size from the label.'),
   servingUnit: yup.string().oneOf(['g', 'ml'] as const, 'Choose g or mL.').default('g'),
@@ -54,3 +57,6 @@ export function per100g(value: number | null | undefined, servingGrams: number):
   if (value === null || value === undefined) return null;
   return Number(((value / servingGrams) * 100).toPrecision(10));
 }
+
+/** A dataset food copied into the house library under a name of the brewery's own. */
+export const copyIngredientSchema = yup.object({ name: ingredientName() });

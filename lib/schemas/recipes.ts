@@ -4,12 +4,23 @@ import { ACCEPTED_TEMP_C } from '../chemistry/carbonation';
 import { SUGAR_TYPES, type SugarType } from '../chemistry/sugars';
 import { numberField } from './numbers';
 
-const AMOUNT_UNITS = ['g-per-l', 'g-per-bottle', 'pct-weight'] as const;
-export const AMOUNT_UNIT_LABELS: Record<(typeof AMOUNT_UNITS)[number], string> = {
+export const AMOUNT_UNITS = ['g-per-l', 'g-per-bottle', 'pct-weight'] as const;
+export type AmountUnit = (typeof AMOUNT_UNITS)[number];
+export const AMOUNT_UNIT_LABELS: Record<AmountUnit, string> = {
   'g-per-l': 'g per litre',
   'g-per-bottle': 'g per bottle',
   'pct-weight': '% of liquid by weight',
 };
+/** How a batch size is given. */
+export const BATCH_KINDS = ['litres', 'us-gallons', 'bottles'] as const;
+export type BatchKind = (typeof BATCH_KINDS)[number];
+const batchKind = () => yup.string().oneOf(BATCH_KINDS, 'Choose litres, US gallons or bottles.');
+export const UNIT_SYSTEMS = ['metric', 'us'] as const;
+const unitSystem = () => yup.string().oneOf(UNIT_SYSTEMS, 'Choose metric or US units.').default('metric');
+/** The recipe lists: in development, archived, approved for production, or every one. */
+export const RECIPE_LIST_FILTERS = ['draft', 'archived', 'approved', 'all'] as const;
+export type RecipeListFilter = (typeof RECIPE_LIST_FILTERS)[number];
+
 export const METHODS = ['in-bottle', 'steep-strain'] as const;
 export type Method = (typeof METHODS)[number];
 export const METHOD_LABELS: Record<Method, string> = { 'in-bottle': 'In the bottle', 'steep-strain': 'Steep, strain, then carbonate' };
@@ -88,14 +99,38 @@ export type SaveRecipeInput = yup.InferType<typeof saveRecipeSchema>;
 export const scaleRequestSchema = yup.object({
   batch: yup
     .object({
-      kind: yup.string().oneOf(['litres', 'us-gallons', 'bottles'] as const, 'Choose litres, US gallons or bottles.').required('Choose how the batch is given.'),
+      kind: batchKind().required('Choose how the batch is given.'),
       value: numberField('Batch size', { positive: true, max: 1000000 }).required('Enter the batch size.'),
     })
     .required(),
-  units: yup.string().oneOf(['metric', 'us'] as const, 'Choose metric or US units.').default('metric'),
+  units: unitSystem(),
   version: numberField('Version').integer().positive().nullable().default(null),
 });
 export type ScaleRequest = yup.InferType<typeof scaleRequestSchema>;
+
+// Query strings arrive as text: these number fields read "3" as 3 (numberField refuses strings in JSON bodies).
+const queryVersion = () => yup.number().typeError('Version must be a number.').integer().positive();
+
+export const recipeListQuerySchema = yup.object({
+  q: yup.string().trim().max(100).default(''),
+  status: yup.string().oneOf(RECIPE_LIST_FILTERS, 'Choose draft, archived, approved or all.').default('draft'),
+});
+export const versionQuerySchema = yup.object({ version: queryVersion().optional() });
+export const diffQuerySchema = yup.object({
+  from: yup.number().typeError('From must be a version number.').integer().positive().required('Give the version to compare from.'),
+  to: yup.number().typeError('To must be a version number.').integer().positive().required('Give the version to compare to.'),
+});
+export const restoreVersionSchema = yup.object({ version: numberField('Version').integer().positive().required('Give the version to restore.') });
+export const cardQuerySchema = yup.object({
+  version: queryVersion().optional(),
+  kind: batchKind().default('bottles'),
+  value: yup.number().typeError('The batch size must be a number.').positive('The batch size must be more than 0.').max(1000000).required('Give the batch size.'),
+  units: unitSystem(),
+});
+export type CardQuery = yup.InferType<typeof cardQuerySchema>;
+
+/** The numbers of a recipe being edited, before it is saved. */
+export const evaluateBodySchema = yup.object({ content: recipeContentSchema.required() });
 
 export const tastingSchema = yup.object({
   tastedOn: yup.string().matches(/^\d{4}-\d{2}-\d{2}$/, 'Enter the date as YYYY-MM-DD.').required('Enter the date of the tasting.'),

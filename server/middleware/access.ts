@@ -1,11 +1,11 @@
 import type { RequestHandler } from 'express';
 
-import type { Role } from '../../lib/roles';
+import { can, type Capability } from '../../lib/roles';
 import { forbidden, HttpError, unauthorized } from '../errors';
 import { authenticateToken, SESSION_COOKIE, type AuthContext } from '../services/sessions';
 
-/** Who may call a route: anyone, any signed-in member, or members with one of the listed roles. */
-export type Access = 'public' | 'signed-in' | readonly Role[];
+/** Who may call a route: anyone, any signed-in member, or members whose role has a capability (`lib/roles.ts`). */
+export type Access = 'public' | 'signed-in' | Capability;
 
 declare global {
   namespace Express {
@@ -52,7 +52,7 @@ export function allow(access: Access, options: { accepts?: 'json' | 'multipart' 
     const token = tokenFrom(req);
     const auth = token ? await authenticateToken(token) : null;
     if (!auth) throw unauthorized();
-    if (access !== 'signed-in' && !access.includes(auth.role)) throw forbidden();
+    if (access !== 'signed-in' && !can(auth.role, access)) throw forbidden();
     res.locals.auth = auth;
     next();
   };

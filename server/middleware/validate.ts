@@ -1,4 +1,4 @@
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler, Response } from 'express';
 import * as yup from 'yup';
 
 import { badRequest } from '../errors';
@@ -6,16 +6,11 @@ import { badRequest } from '../errors';
 type Part = 'body' | 'query' | 'params';
 type Schemas = Partial<Record<Part, yup.AnyObjectSchema>>;
 
-declare global {
-  namespace Express {
-    interface Locals {
-      /** The cleaned values of the validated request parts. */
-      body?: unknown;
-      query?: unknown;
-      params?: unknown;
-    }
-  }
-}
+/** The cleaned values of the validated parts, typed by their schemas. */
+export type Validated<S extends Schemas> = { [K in keyof S]: S[K] extends yup.AnyObjectSchema ? yup.InferType<S[K]> : never };
+
+/** A route's own work, given the validated request values (and the response, and the raw request for headers and files). */
+export type Handler<S extends Schemas> = (values: Validated<S>, res: Response, req: Request) => unknown;
 
 /** Turns a yup error into `{ field: message }`, the first message of each field. */
 export function fieldErrors(error: yup.ValidationError): Record<string, string> {
@@ -76,14 +71,15 @@ function shapeProblems(value: unknown, schema: Described | undefined, path: stri
 }
 
 /**
- * Validates request parts with the shared yup schemas (every field at once) and puts the cleaned values on
- * `res.locals.body`, `res.locals.query` and `res.locals.params`. Answers one 400 listing every bad field.
+ * Validates request parts with the shared yup schemas (every field at once), then hands the route's handler the
+ * cleaned values with the types the schemas give them. Answers one 400 listing every bad field.
  */
-export function validate(schemas: Schemas): RequestHandler {
-  return async (req, res, next) => {
+export function validate<S extends Schemas>(schemas: S, handler: Handler<S>): RequestHandler {
+  return async (req, res) => {
     const fields: Record<string, string> = {};
+    const values: Partial<Record<Part, unknown>> = {};
     for (const part of Object.keys(schemas) as Part[]) {
-      const schema = schemas[part]!;
+      const schema = schemas[part] as yup.AnyObjectSchema;
       const raw: unknown = req[part] ?? {};
       if (part === 'body' && (typeof raw !== 'object' || raw === null || Array.isArray(raw))) {
         throw badRequest('The request body must be a JSON object.');
@@ -95,7 +91,7 @@ export function validate(schemas: Schemas): RequestHandler {
         continue;
       }
       try {
-        res.locals[part] = await schema.validate(raw, { abortEarly: false, stripUnknown: true });
+        values[part] = await schema.validate(raw, { abortEarly: false, stripUnknown: true });
       } catch (error) {
         // Anything but a validation error means a value yup could not even read: still the caller's input.
         if (error instanceof yup.ValidationError) Object.assign(fields, fieldErrors(error));
@@ -106,6 +102,7 @@ export function validate(schemas: Schemas): RequestHandler {
       const count = Object.keys(fields).length;
       throw badRequest(count === 1 ? 'One field needs attention.' : `${count} fields need attention.`, fields);
     }
-    next();
+    // Every part in `schemas` has its value here: a failed part threw above.
+    await handler(values as Validated<S>, res, req);
   };
 }

@@ -53,22 +53,22 @@ async function atLeastFloor<T>(work: () => Promise<T>): Promise<T> {
   }
 }
 
-authRouter.post('/sign-up', allow('public'), byAddress, limits.signUp, validate({ body: signUpSchema }), async (_req, res) => {
-  await atLeastFloor(() => auth.signUp(res.locals.body as SignUpInput));
+authRouter.post('/sign-up', allow('public'), byAddress, limits.signUp, validate({ body: signUpSchema }, async ({ body }, res) => {
+  await atLeastFloor(() => auth.signUp(body));
   res.status(202).json({ message: 'We sent a link to finish creating the brewery account. It works for 24 hours.' });
-});
+}));
 
-authRouter.post('/confirm-sign-up', allow('public'), byAddress, limits.confirm, validate({ body: confirmSignUpSchema }), async (_req, res) => {
-  const { user, session } = await auth.confirmSignUp((res.locals.body as ConfirmSignUpInput).token);
+authRouter.post('/confirm-sign-up', allow('public'), byAddress, limits.confirm, validate({ body: confirmSignUpSchema }, async ({ body }, res) => {
+  const { user, session } = await auth.confirmSignUp(body.token);
   startSession(res, user);
   res.status(201).json(session);
-});
+}));
 
-authRouter.post('/sign-in', allow('public'), byAddress, limits.signIn, validate({ body: signInSchema }), async (_req, res) => {
-  const { user, session } = await auth.signIn(res.locals.body as SignInInput);
+authRouter.post('/sign-in', allow('public'), byAddress, limits.signIn, validate({ body: signInSchema }, async ({ body }, res) => {
+  const { user, session } = await auth.signIn(body);
   startSession(res, user);
   res.json(session);
-});
+}));
 
 /** Ends this session on the server too: the same token is refused from now on, even if someone kept a copy. */
 authRouter.post('/sign-out', allow('public'), async (req, res) => {
@@ -83,23 +83,23 @@ authRouter.get('/session', allow('signed-in'), async (_req, res) => {
   res.json(await auth.sessionFor(authOf(res).userId));
 });
 
-authRouter.post('/forgot-password', allow('public'), byAddress, limits.forgot, validate({ body: forgotPasswordSchema }), async (_req, res) => {
-  await atLeastFloor(() => auth.requestPasswordReset((res.locals.body as ForgotPasswordInput).email));
+authRouter.post('/forgot-password', allow('public'), byAddress, limits.forgot, validate({ body: forgotPasswordSchema }, async ({ body }, res) => {
+  await atLeastFloor(() => auth.requestPasswordReset(body.email));
   res.status(202).json({ message: 'If an account uses this address, a reset link is on its way. It works for 1 hour.' });
-});
+}));
 
-authRouter.post('/reset-password', allow('public'), byAddress, limits.reset, validate({ body: resetPasswordSchema }), async (_req, res) => {
-  const { user, session } = await auth.resetPassword(res.locals.body as ResetPasswordInput);
+authRouter.post('/reset-password', allow('public'), byAddress, limits.reset, validate({ body: resetPasswordSchema }, async ({ body }, res) => {
+  const { user, session } = await auth.resetPassword(body);
   startSession(res, user);
   res.json(session);
-});
+}));
 
-authRouter.get('/invitations/:token', allow('public'), byAddress, limits.preview, validate({ params: invitationTokenParams }), async (_req, res) => {
-  res.json(await auth.previewInvitation((res.locals.params as { token: string }).token));
-});
+authRouter.get('/invitations/:token', allow('public'), byAddress, limits.preview, validate({ params: invitationTokenParams }, async ({ params }, res) => {
+  res.json(await auth.previewInvitation(params.token));
+}));
 
-authRouter.post('/accept-invitation', allow('public'), byAddress, limits.accept, validate({ body: acceptInvitationSchema }), async (_req, res) => {
-  const { user, session } = await auth.acceptInvitation(res.locals.body as AcceptInvitationInput);
+authRouter.post('/accept-invitation', allow('public'), byAddress, limits.accept, validate({ body: acceptInvitationSchema }, async ({ body }, res) => {
+  const { user, session } = await auth.acceptInvitation(body);
   startSession(res, user);
   res.status(201).json(session);
-});
+}));

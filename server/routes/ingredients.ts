@@ -1,9 +1,8 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
-import * as yup from 'yup';
 
 import { idParam } from '../../lib/schemas/common';
-import { houseIngredientSchema, ingredientSearchSchema, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
+import { copyIngredientSchema, houseIngredientSchema, ingredientSearchSchema } from '../../lib/schemas/ingredients';
 import { allow, authOf } from '../middleware/access';
 import { validate } from '../middleware/validate';
 import { config } from '../config';
@@ -12,41 +11,38 @@ import * as ingredients from '../services/ingredients';
 
 export const ingredientsRouter = Router();
 
-const EDITORS = ['owner', 'developer'] as const;
-const id = (locals: { params?: unknown }) => (locals.params as { id: number }).id;
-const copySchema = yup.object({ name: houseIngredientSchema.fields.name });
 
-ingredientsRouter.get('/', allow('signed-in'), validate({ query: ingredientSearchSchema }), async (_req, res) => {
-  res.json(await ingredients.searchIngredients(authOf(res), res.locals.query as IngredientSearch));
-});
+ingredientsRouter.get('/', allow('signed-in'), validate({ query: ingredientSearchSchema }, async ({ query }, res) => {
+  res.json(await ingredients.searchIngredients(authOf(res), query));
+}));
 
-ingredientsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
-  res.json(ingredients.toIngredientDto(await ingredients.visibleIngredient(authOf(res), id(res.locals))));
-});
+ingredientsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(ingredients.toIngredientDto(await ingredients.visibleIngredient(authOf(res), params.id)));
+}));
 
-ingredientsRouter.get('/:id/changes', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
-  res.json(await ingredients.ingredientChanges(authOf(res), id(res.locals)));
-});
+ingredientsRouter.get('/:id/changes', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await ingredients.ingredientChanges(authOf(res), params.id));
+}));
 
-ingredientsRouter.post('/', allow(EDITORS), validate({ body: houseIngredientSchema }), async (_req, res) => {
-  res.status(201).json(await ingredients.createHouseIngredient(authOf(res), res.locals.body as HouseIngredientInput));
-});
+ingredientsRouter.post('/', allow('ingredients.edit'), validate({ body: houseIngredientSchema }, async ({ body }, res) => {
+  res.status(201).json(await ingredients.createHouseIngredient(authOf(res), body));
+}));
 
-ingredientsRouter.put('/:id', allow(EDITORS), validate({ params: idParam, body: houseIngredientSchema }), async (_req, res) => {
-  res.json(await ingredients.updateHouseIngredient(authOf(res), id(res.locals), res.locals.body as HouseIngredientInput));
-});
+ingredientsRouter.put('/:id', allow('ingredients.edit'), validate({ params: idParam, body: houseIngredientSchema }, async ({ params, body }, res) => {
+  res.json(await ingredients.updateHouseIngredient(authOf(res), params.id, body));
+}));
 
-ingredientsRouter.post('/:id/copy', allow(EDITORS), validate({ params: idParam, body: copySchema }), async (_req, res) => {
-  res.status(201).json(await ingredients.copyToHouse(authOf(res), id(res.locals), (res.locals.body as { name: string }).name));
-});
+ingredientsRouter.post('/:id/copy', allow('ingredients.edit'), validate({ params: idParam, body: copyIngredientSchema }, async ({ params, body }, res) => {
+  res.status(201).json(await ingredients.copyToHouse(authOf(res), params.id, body.name));
+}));
 
-ingredientsRouter.post('/:id/archive', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
-  res.json(await ingredients.setHouseIngredientArchived(authOf(res), id(res.locals), true));
-});
+ingredientsRouter.post('/:id/archive', allow('ingredients.edit'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, true));
+}));
 
-ingredientsRouter.post('/:id/restore', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
-  res.json(await ingredients.setHouseIngredientArchived(authOf(res), id(res.locals), false));
-});
+ingredientsRouter.post('/:id/restore', allow('ingredients.edit'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, false));
+}));
 
 /**
  * One file in the field "file" and nothing much else: every part, field and header is bounded, so a request of
@@ -62,25 +58,25 @@ const receiveFile: RequestHandler = (req, res, next) => {
   upload.single('file')(req, res, (error: unknown) => next(error ? attachments.uploadError(error) : undefined));
 };
 
-ingredientsRouter.get('/:id/attachments', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
-  res.json(await attachments.listAttachments(authOf(res), id(res.locals)));
-});
+ingredientsRouter.get('/:id/attachments', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await attachments.listAttachments(authOf(res), params.id));
+}));
 
-ingredientsRouter.post('/:id/attachments', allow(EDITORS, { accepts: 'multipart' }), validate({ params: idParam }), receiveFile, async (req, res) => {
-  res.status(201).json(await attachments.addAttachment(authOf(res), id(res.locals), req.file));
-});
+ingredientsRouter.post('/:id/attachments', allow('ingredients.edit', { accepts: 'multipart' }), receiveFile, validate({ params: idParam }, async ({ params }, res, req) => {
+  res.status(201).json(await attachments.addAttachment(authOf(res), params.id, req.file));
+}));
 
 /** Mounted at /api/attachments: files are served only to members of the brewery that owns them. */
 export const attachmentsRouter = Router();
 
-attachmentsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }), async (_req, res) => {
-  const file = await attachments.attachmentFile(authOf(res), id(res.locals));
+attachmentsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
+  const file = await attachments.attachmentFile(authOf(res), params.id);
   res.setHeader('Content-Type', file.mimeType);
   res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/"/g, '')}"`);
   res.sendFile(file.path);
-});
+}));
 
-attachmentsRouter.delete('/:id', allow(EDITORS), validate({ params: idParam }), async (_req, res) => {
-  await attachments.deleteAttachment(authOf(res), id(res.locals));
+attachmentsRouter.delete('/:id', allow('ingredients.edit'), validate({ params: idParam }, async ({ params }, res) => {
+  await attachments.deleteAttachment(authOf(res), params.id);
   res.status(204).end();
-});
+}));

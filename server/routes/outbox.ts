@@ -17,8 +17,8 @@ outboxRouter.get('/', allow('public'), async (req, res) => {
   res.json({ messages, open: config.outboxOpen });
 });
 
-outboxRouter.get('/:id', allow('public'), validate({ params: idParam }), async (req, res) => {
-  const message = await readOutboxMessage(await optionalAuth(req), config.outboxOpen, (res.locals.params as { id: number }).id);
+outboxRouter.get('/:id', allow('public'), validate({ params: idParam }, async ({ params }, res, req) => {
+  const message = await readOutboxMessage(await optionalAuth(req), config.outboxOpen, params.id);
   if (!message) throw unauthorized();
   res.json(message);
-});
+}));

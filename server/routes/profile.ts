@@ -19,27 +19,27 @@ import { SESSION_COOKIE, sessionCookieOptions, signSessionToken } from '../servi
 
 export const profileRouter = Router();
 
-profileRouter.patch('/', allow('signed-in'), validate({ body: profileSchema }), async (_req, res) => {
-  res.json(await updateProfile(authOf(res).userId, res.locals.body as ProfileInput));
-});
+profileRouter.patch('/', allow('signed-in'), validate({ body: profileSchema }, async ({ body }, res) => {
+  res.json(await updateProfile(authOf(res).userId, body));
+}));
 
-profileRouter.patch('/preferences', allow('signed-in'), validate({ body: preferencesSchema }), async (_req, res) => {
-  res.json(await updatePreferences(authOf(res).userId, res.locals.body as PreferencesInput));
-});
+profileRouter.patch('/preferences', allow('signed-in'), validate({ body: preferencesSchema }, async ({ body }, res) => {
+  res.json(await updatePreferences(authOf(res).userId, body));
+}));
 
 /** Mounted at /api/organisation: the brewery's settings. */
 export const organisationRouter = Router();
 
-organisationRouter.patch('/', allow(['owner']), validate({ body: organisationSchema }), async (_req, res) => {
+organisationRouter.patch('/', allow('brewery.settings'), validate({ body: organisationSchema }, async ({ body }, res) => {
   const auth = authOf(res);
-  res.json(await updateOrganisation(auth.organisationId, auth.userId, res.locals.body as OrganisationInput));
-});
+  res.json(await updateOrganisation(auth.organisationId, auth.userId, body));
+}));
 
 const passwordChanges = [perAddressLimit(), perAccountLimit('password-change', accountKeys.signedIn)];
 
-profileRouter.post('/password', allow('signed-in'), ...passwordChanges, validate({ body: changePasswordSchema }), async (_req, res) => {
-  const user = await changePassword(authOf(res).userId, res.locals.body as ChangePasswordInput);
+profileRouter.post('/password', allow('signed-in'), ...passwordChanges, validate({ body: changePasswordSchema }, async ({ body }, res) => {
+  const user = await changePassword(authOf(res).userId, body);
   // Other sessions end with the password change; this one goes on with a fresh token.
   res.cookie(SESSION_COOKIE, signSessionToken(user), sessionCookieOptions());
   res.json(await sessionFor(user.id));
-});
+}));

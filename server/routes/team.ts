@@ -8,33 +8,32 @@ import * as team from '../services/team';
 
 export const teamRouter = Router();
 
-const id = (locals: { params?: unknown }) => (locals.params as { id: number }).id;
 
-teamRouter.get('/', allow(['owner']), async (_req, res) => {
+teamRouter.get('/', allow('team.manage'), async (_req, res) => {
   res.json(await team.listTeam(authOf(res).organisationId));
 });
 
-teamRouter.post('/invitations', allow(['owner']), validate({ body: inviteSchema }), async (_req, res) => {
-  res.status(201).json(await team.invite(authOf(res), res.locals.body as InviteInput));
-});
+teamRouter.post('/invitations', allow('team.manage'), validate({ body: inviteSchema }, async ({ body }, res) => {
+  res.status(201).json(await team.invite(authOf(res), body));
+}));
 
-teamRouter.post('/invitations/:id/resend', allow(['owner']), validate({ params: idParam }), async (_req, res) => {
-  res.json(await team.resendInvitation(authOf(res), id(res.locals)));
-});
+teamRouter.post('/invitations/:id/resend', allow('team.manage'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await team.resendInvitation(authOf(res), params.id));
+}));
 
-teamRouter.delete('/invitations/:id', allow(['owner']), validate({ params: idParam }), async (_req, res) => {
-  await team.revokeInvitation(authOf(res).organisationId, id(res.locals));
+teamRouter.delete('/invitations/:id', allow('team.manage'), validate({ params: idParam }, async ({ params }, res) => {
+  await team.revokeInvitation(authOf(res).organisationId, params.id);
   res.status(204).end();
-});
+}));
 
-teamRouter.patch('/members/:id', allow(['owner']), validate({ params: idParam, body: changeRoleSchema }), async (_req, res) => {
-  res.json(await team.changeRole(authOf(res), id(res.locals), (res.locals.body as ChangeRoleInput).role));
-});
+teamRouter.patch('/members/:id', allow('team.manage'), validate({ params: idParam, body: changeRoleSchema }, async ({ params, body }, res) => {
+  res.json(await team.changeRole(authOf(res), params.id, body.role));
+}));
 
-teamRouter.post('/members/:id/deactivate', allow(['owner']), validate({ params: idParam }), async (_req, res) => {
-  res.json(await team.setMemberActive(authOf(res), id(res.locals), false));
-});
+teamRouter.post('/members/:id/deactivate', allow('team.manage'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await team.setMemberActive(authOf(res), params.id, false));
+}));
 
-teamRouter.post('/members/:id/reactivate', allow(['owner']), validate({ params: idParam }), async (_req, res) => {
-  res.json(await team.setMemberActive(authOf(res), id(res.locals), true));
-});
+teamRouter.post('/members/:id/reactivate', allow('team.manage'), validate({ params: idParam }, async ({ params }, res) => {
+  res.json(await team.setMemberActive(authOf(res), params.id, true));
+}));

@@ -1,3 +1,4 @@
+import { FOUNDER_ROLE } from '../../lib/roles';
 import { Op } from 'sequelize';
 
 import type { InvitationPreview, Session } from '../../lib/api/types';
@@ -54,7 +55,7 @@ export async function confirmSignUp(token: string): Promise<{ user: User; sessio
     const organisation = await Organisation.create({ name: pending.breweryName }, { transaction: t });
     await seedStarterFormats(organisation.id, t);
     return User.create(
-      { organisationId: organisation.id, email: pending.email, name: pending.name, role: 'owner', passwordHash: pending.passwordHash },
+      { organisationId: organisation.id, email: pending.email, name: pending.name, role: FOUNDER_ROLE, passwordHash: pending.passwordHash },
       { transaction: t },
     );
   });

@@ -1,3 +1,4 @@
+import { can } from '../../lib/roles';
 import { Op, type WhereOptions } from 'sequelize';
 
 import type { OutboxMessage as OutboxMessageDto } from '../../lib/api/types';
@@ -17,7 +18,7 @@ function visibleTo(reader: AuthContext | undefined, open: boolean): WhereOptions
   if (open) return {};
   if (!reader) return null;
   const own = { userId: reader.userId };
-  if (reader.role === 'owner') {
+  if (can(reader.role, 'outbox.brewery')) {
     return { organisationId: reader.organisationId, [Op.or]: [own, { kind: BREWERY_KINDS }] };
   }
   return { organisationId: reader.organisationId, ...own };

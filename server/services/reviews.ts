@@ -1,3 +1,4 @@
+import { rolesWith } from '../../lib/roles';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 
 import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
@@ -81,7 +82,7 @@ export async function submit(auth: AuthContext, id: number, input: SubmitInput) 
     );
     await RecipeReview.create({ recipeId: id, versionNumber: recipe.currentVersion, action: 'submitted', userId: auth.userId, comment: input.message, overrideReason: null }, { transaction });
   });
-  const [author, owners] = await Promise.all([User.findByPk(auth.userId), User.findAll({ where: { organisationId: auth.organisationId, role: 'owner', id: { [Op.ne]: auth.userId } } })]);
+  const [author, owners] = await Promise.all([User.findByPk(auth.userId), User.findAll({ where: { organisationId: auth.organisationId, role: [...rolesWith('recipes.approve')], id: { [Op.ne]: auth.userId } } })]);
   await notify(owners.map((o) => o.id), reviewSubmittedMail({ recipeName: recipe.name, version: recipe.currentVersion, author: author?.name ?? 'Someone', message: input.message, recipeId: id }), auth.organisationId);
   return reviewTimeline(auth, id);
 }
@@ -108,7 +109,7 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
   const author = await submitter(recipe);
   let selfApproved = false;
   if (author === auth.userId) {
-    const otherOwners = await User.count({ where: { organisationId: auth.organisationId, role: 'owner', active: true, id: { [Op.ne]: auth.userId } } });
+    const otherOwners = await User.count({ where: { organisationId: auth.organisationId, role: [...rolesWith('recipes.approve')], active: true, id: { [Op.ne]: auth.userId } } });
     if (otherOwners > 0) throw forbidden('You submitted this version: another owner must approve it.');
     selfApproved = true;
   }

@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 
 import type { Invitation as InvitationDto, Member, Team } from '../../lib/api/types';
-import type { Role } from '../../lib/roles';
+import { can, rolesWith, type Role } from '../../lib/roles';
 import type { InviteInput } from '../../lib/schemas/team';
 import { Invitation, Organisation, transaction, User } from '../db';
 import { badRequest, conflict, gone, notFound } from '../errors';
@@ -105,13 +105,13 @@ async function memberOf(organisationId: number, id: number): Promise<User> {
 }
 
 async function assertAnotherActiveOwner(organisationId: number, exceptUserId: number): Promise<void> {
-  const owners = await User.count({ where: { organisationId, role: 'owner', active: true, id: { [Op.ne]: exceptUserId } } });
+  const owners = await User.count({ where: { organisationId, role: [...rolesWith('team.manage')], active: true, id: { [Op.ne]: exceptUserId } } });
   if (owners === 0) throw badRequest('A brewery needs at least one active owner. Make someone else owner first.');
 }
 
 export async function changeRole(actor: AuthContext, memberId: number, role: Role): Promise<Member> {
   const member = await memberOf(actor.organisationId, memberId);
-  if (member.role === 'owner' && role !== 'owner') await assertAnotherActiveOwner(actor.organisationId, member.id);
+  if (can(member.role, 'team.manage') && !can(role, 'team.manage')) await assertAnotherActiveOwner(actor.organisationId, member.id);
   await member.update({ role });
   return toMember(member);
 }
@@ -123,7 +123,7 @@ export async function changeRole(actor: AuthContext, memberId: number, role: Rol
 export async function setMemberActive(actor: AuthContext, memberId: number, active: boolean): Promise<Member> {
   const member = await memberOf(actor.organisationId, memberId);
   if (!active && member.id === actor.userId) throw badRequest('You cannot deactivate yourself.');
-  if (!active && member.role === 'owner') await assertAnotherActiveOwner(actor.organisationId, member.id);
+  if (!active && can(member.role, 'team.manage')) await assertAnotherActiveOwner(actor.organisationId, member.id);
   await member.update(active ? { active } : { active, tokenVersion: member.tokenVersion + 1 });
   return toMember(member);
 }

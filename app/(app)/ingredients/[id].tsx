@@ -4,6 +4,7 @@ import { IngredientDetail } from '@/components/ingredients/IngredientDetail';
 import { Banner, Button, FormStatus, Loading, Screen } from '@/components/ui';
 import { useArchiveIngredientMutation, useCopyIngredientMutation, useIngredientQuery } from '@/lib/api/ingredients';
 import { useSessionQuery } from '@/lib/api/session';
+import { can } from '@/lib/roles';
 
 export default function IngredientScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -12,7 +13,7 @@ export default function IngredientScreen() {
   const ingredient = useIngredientQuery(Number(id));
   const copy = useCopyIngredientMutation();
   const archive = useArchiveIngredientMutation();
-  const canEdit = session?.user.role === 'owner' || session?.user.role === 'developer';
+  const canEdit = can(session?.user.role, 'ingredients.edit');
   if (ingredient.isError) return <Screen title="Ingredient"><Banner tone="danger">{ingredient.error.message}</Banner></Screen>;
   if (!ingredient.data) return <Loading />;
   const item = ingredient.data;

@@ -4,12 +4,13 @@ import { useState } from 'react';
 import { IngredientList } from '@/components/ingredients/IngredientList';
 import { Button, Card, Screen } from '@/components/ui';
 import { useSessionQuery } from '@/lib/api/session';
+import { can } from '@/lib/roles';
 
 export default function IngredientsScreen() {
   const router = useRouter();
   const { data: session } = useSessionQuery();
   const [showArchived, setShowArchived] = useState(false);
-  const canEdit = session?.user.role === 'owner' || session?.user.role === 'developer';
+  const canEdit = can(session?.user.role, 'ingredients.edit');
   return (
     <Screen
       title="Ingredients"

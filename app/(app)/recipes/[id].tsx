@@ -10,6 +10,7 @@ import { Banner, Button, Loading, Screen, Segmented } from '@/components/ui';
 import { useBottleFormatsQuery } from '@/lib/api/bottle-formats';
 import { useArchiveRecipeMutation, useDuplicateRecipeMutation, useRecipeQuery, useSaveRecipeMutation } from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
+import { can } from '@/lib/roles';
 
 type Tab = 'design' | 'review' | 'tastings' | 'scale' | 'history';
 
@@ -23,19 +24,19 @@ export default function RecipeScreen() {
   const save = useSaveRecipeMutation(recipeId);
   const duplicate = useDuplicateRecipeMutation(recipeId);
   const archive = useArchiveRecipeMutation(recipeId);
-  const brewer = session?.user.role === 'brewer';
+  const brewer = !can(session?.user.role, 'recipes.develop');
   const [tab, setTab] = useState<Tab>(brewer ? 'scale' : 'design');
   if (recipe.isError) return <Screen title="Recipe"><Banner tone="danger">{recipe.error.message}</Banner></Screen>;
   if (!recipe.data || !formats.data || !session) return <Loading />;
   const archived = recipe.data.status === 'archived';
-  const canEdit = (session.user.role === 'owner' || session.user.role === 'developer') && !archived;
+  const canEdit = can(session.user.role, 'recipes.edit') && !archived;
   return (
     <Screen
       title={recipe.data.name}
       subtitle={recipe.data.flavourNotes || undefined}
       maxWidth={1400}
       actions={
-        session.user.role !== 'brewer' ? (
+        can(session.user.role, 'recipes.develop') ? (
           <>
             <Button label="Duplicate" variant="secondary" busy={duplicate.isPending} onPress={() => duplicate.mutate(undefined, { onSuccess: (copy) => router.push(`/recipes/${copy.id}`) })} />
             <Button label={archived ? 'Restore' : 'Archive'} variant="quiet" busy={archive.isPending} onPress={() => archive.mutate(!archived)} />

@@ -9,14 +9,16 @@ import { useSessionQuery } from '@/lib/api/session';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { colors, fonts } from '@/lib/theme';
+import { can } from '@/lib/roles';
+import type { RecipeListFilter } from '@/lib/schemas/recipes';
 
 export default function RecipesScreen() {
   const router = useRouter();
   const { data: session } = useSessionQuery();
   const [text, setText] = useState('');
-  const [status, setStatus] = useState<'draft' | 'archived' | 'approved' | 'all'>(session?.user.role === 'brewer' ? 'approved' : 'draft');
+  const [status, setStatus] = useState<RecipeListFilter>(can(session?.user.role, 'recipes.develop') ? 'draft' : 'approved');
   const recipes = useRecipesQuery(useDebouncedValue(text, 250), status);
-  const canEdit = session?.user.role === 'owner' || session?.user.role === 'developer';
+  const canEdit = can(session?.user.role, 'recipes.edit');
   const columns: Column<RecipeSummary>[] = [
     { key: 'name', header: 'Recipe', flex: 2, render: (r) => <Link href={`/recipes/${r.id}`} style={styles.link}>{r.name}</Link> },
     { key: 'notes', header: 'Flavour', flex: 2, render: (r) => r.flavourNotes || '—' },
