@@ -10,12 +10,6 @@ import {
   resetPasswordSchema,
   signInSchema,
   signUpSchema,
-  type AcceptInvitationInput,
-  type ConfirmSignUpInput,
-  type ForgotPasswordInput,
-  type ResetPasswordInput,
-  type SignInInput,
-  type SignUpInput,
 } from '../../lib/schemas/auth';
 import { config } from '../config';
 import { allow, authOf, tokenFrom } from '../middleware/access';

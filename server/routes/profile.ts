@@ -5,10 +5,6 @@ import {
   organisationSchema,
   preferencesSchema,
   profileSchema,
-  type ChangePasswordInput,
-  type OrganisationInput,
-  type PreferencesInput,
-  type ProfileInput,
 } from '../../lib/schemas/team';
 import { allow, authOf } from '../middleware/access';
 import { accountKeys, perAccountLimit, perAddressLimit } from '../middleware/rate-limits';

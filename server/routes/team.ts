@@ -1,7 +1,7 @@
 import { Router } from 'express';
 
 import { idParam } from '../../lib/schemas/common';
-import { changeRoleSchema, inviteSchema, type ChangeRoleInput, type InviteInput } from '../../lib/schemas/team';
+import { changeRoleSchema, inviteSchema } from '../../lib/schemas/team';
 import { allow, authOf } from '../middleware/access';
 import { validate } from '../middleware/validate';
 import * as team from '../services/team';
