@@ -1,7 +1,18 @@
 /**
  * Ingredient vocabulary shared by the forms, the server and the importer.
  */
-export const CATEGORIES = ['fruit', 'juice', 'puree', 'dried-fruit', 'herb', 'spice', 'sugar-syrup', 'baked-good', 'dairy', 'other'] as const;
+export const CATEGORIES = [
+  'fruit',
+  'juice',
+  'puree',
+  'dried-fruit',
+  'herb',
+  'spice',
+  'sugar-syrup',
+  'baked-good',
+  'dairy',
+  'other',
+] as const;
 export type Category = (typeof CATEGORIES)[number];
 
 export const CATEGORY_LABELS: Record<Category, string> = {
@@ -18,7 +29,17 @@ export const CATEGORY_LABELS: Record<Category, string> = {
 };
 
 /** The US major food allergens (FALCPA 2004 plus sesame, FASTER Act 2021). */
-export const ALLERGENS = ['milk', 'eggs', 'fish', 'crustacean-shellfish', 'tree-nuts', 'peanuts', 'wheat', 'soybeans', 'sesame'] as const;
+export const ALLERGENS = [
+  'milk',
+  'eggs',
+  'fish',
+  'crustacean-shellfish',
+  'tree-nuts',
+  'peanuts',
+  'wheat',
+  'soybeans',
+  'sesame',
+] as const;
 export type Allergen = (typeof ALLERGENS)[number];
 
 export const ALLERGEN_LABELS: Record<Allergen, string> = {

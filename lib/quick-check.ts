@@ -2,7 +2,7 @@ import * as yup from 'yup';
 
 import type { SugarType } from './chemistry/sugars';
 import { parseNumber as parse } from './forms';
-import { carbonationSchema, primingSchema, type CarbonationRequest, type PrimingRequest } from './schemas/calculations';
+import { type CarbonationRequest, carbonationSchema, type PrimingRequest, primingSchema } from './schemas/calculations';
 import { convertUnit, displayUnits, type UnitSystem } from './units';
 
 /** What the Quick check form holds: text as typed, in the person's units. */
@@ -114,7 +114,10 @@ function collect(error: unknown): Record<string, string> {
  * The Quick check form as an API request, checked with the same schema the server uses. Returns the request,
  * or the messages per form field when something is off.
  */
-export function toCarbonationRequest(values: QuickCheckValues, units: UnitSystem): { request?: CarbonationRequest; errors: Record<string, string> } {
+export function toCarbonationRequest(
+  values: QuickCheckValues,
+  units: UnitSystem,
+): { request?: CarbonationRequest; errors: Record<string, string> } {
   const { temp, ...si } = toSi(values, units);
   const raw = {
     ...si,
@@ -130,9 +133,17 @@ export function toCarbonationRequest(values: QuickCheckValues, units: UnitSystem
 }
 
 /** The "sugar for target fizz" question from the same form. */
-export function toPrimingRequest(values: QuickCheckValues, units: UnitSystem): { request?: PrimingRequest; errors: Record<string, string> } {
+export function toPrimingRequest(
+  values: QuickCheckValues,
+  units: UnitSystem,
+): { request?: PrimingRequest; errors: Record<string, string> } {
   const { temp, ...si } = toSi(values, units);
-  const raw = { ...si, targetVolumes: parse(values.targetVolumes), sugarType: values.primingSugar, highestTempC: temp(values.highestTemp) };
+  const raw = {
+    ...si,
+    targetVolumes: parse(values.targetVolumes),
+    sugarType: values.primingSugar,
+    highestTempC: temp(values.highestTemp),
+  };
   try {
     return { request: primingSchema.validateSync(raw, { abortEarly: false, stripUnknown: true }), errors: {} };
   } catch (error) {
@@ -148,7 +159,12 @@ export function convertQuickCheckValues(values: QuickCheckValues, from: UnitSyst
   if (from === to) return values;
   const f = displayUnits[from];
   const t = displayUnits[to];
-  const conv = (text: string, a: Parameters<typeof convertUnit>[1], b: Parameters<typeof convertUnit>[2], digits: number) => {
+  const conv = (
+    text: string,
+    a: Parameters<typeof convertUnit>[1],
+    b: Parameters<typeof convertUnit>[2],
+    digits: number,
+  ) => {
     const n = parse(text);
     return n === undefined || Number.isNaN(n) ? text : formatInput(convertUnit(n, a, b), digits);
   };

@@ -25,7 +25,10 @@ export const gallonsToLitres = (gal: number) => convertUnit(gal, 'gal', 'l');
 export const gramsToOunces = (g: number) => convertUnit(g, 'g', 'oz');
 
 /** How a quantity of each kind is shown in each unit system. */
-export const displayUnits: Record<UnitSystem, { temperature: 'C' | 'F'; smallVolume: 'ml' | 'fl-oz'; pressure: 'bar' | 'psi' }> = {
+export const displayUnits: Record<
+  UnitSystem,
+  { temperature: 'C' | 'F'; smallVolume: 'ml' | 'fl-oz'; pressure: 'bar' | 'psi' }
+> = {
   metric: { temperature: 'C', smallVolume: 'ml', pressure: 'bar' },
   us: { temperature: 'F', smallVolume: 'fl-oz', pressure: 'psi' },
 };

@@ -1,6 +1,6 @@
 import cookieParser from 'cookie-parser';
 import cors from 'cors';
-import express, { Router, type Express, type RequestHandler } from 'express';
+import express, { type Express, type RequestHandler, Router } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 
@@ -46,7 +46,9 @@ const noStore: RequestHandler = (_req, res, next) => {
 
 /** A request's URL for the logs, with one-time link tokens (in a query or an invitation path) hidden. */
 export function redactUrl(url: string): string {
-  return url.replace(/([?&]token=)[^&#]*/gi, '$1[hidden]').replace(/(\/invitations\/)(?!\d+(?:\/|$))[^/?#]+/g, '$1[hidden]');
+  return url
+    .replace(/([?&]token=)[^&#]*/gi, '$1[hidden]')
+    .replace(/(\/invitations\/)(?!\d+(?:\/|$))[^/?#]+/g, '$1[hidden]');
 }
 
 /** Builds the Express app (API under /api plus the exported web app) without listening. */
@@ -60,7 +62,9 @@ export function createApp(): Express {
   app.use(
     helmet({
       // The exported app loads its fonts and images from this origin; RN Web injects style rules at run time.
-      contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': null } },
+      contentSecurityPolicy: {
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': null },
+      },
       strictTransportSecurity: config.appUrl.startsWith('https://'),
     }),
   );
@@ -69,7 +73,10 @@ export function createApp(): Express {
       pinoHttp({
         logger,
         autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: redactUrl(req.url) }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
+        serializers: {
+          req: (req: { method: string; url: string }) => ({ method: req.method, url: redactUrl(req.url) }),
+          res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+        },
       }),
     );
   }

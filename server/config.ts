@@ -2,7 +2,7 @@ import path from 'node:path';
 
 import * as yup from 'yup';
 
-import pkg from '../package.json';
+import pkg from '@/package.json';
 
 /** Repository root: every relative path in the configuration is taken from here. */
 export const ROOT_DIR = path.resolve(__dirname, '..');
@@ -119,7 +119,9 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     seedDemo: parsed.SEED_DEMO ?? nodeEnv !== 'production',
     nutrientDataDir: path.resolve(ROOT_DIR, parsed.NUTRIENT_DATA_DIR),
     logLevel: parsed.LOG_LEVEL ?? (nodeEnv === 'test' ? 'silent' : 'info'),
-    corsOrigins: parsed.CORS_ORIGINS.split(',').map((origin) => origin.trim()).filter(Boolean),
+    corsOrigins: parsed.CORS_ORIGINS.split(',')
+      .map((origin) => origin.trim())
+      .filter(Boolean),
     webDistDir: path.resolve(ROOT_DIR, 'dist'),
     benchRoutes: parsed.BENCH_ROUTES,
     uploadsDir: path.resolve(ROOT_DIR, parsed.UPLOADS_DIR),

@@ -10,19 +10,39 @@ import { logger } from './logger';
 import { migrations } from './migrations';
 import { Attachment } from './models/attachment';
 import { BottleFormat } from './models/bottle-format';
-import { Ingredient, IngredientChange } from './models/ingredient';
+import { Ingredient } from './models/ingredient';
+import { IngredientChange } from './models/ingredient-change';
 import { Invitation } from './models/invitation';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
 import { PasswordReset } from './models/password-reset';
 import { PendingSignUp } from './models/pending-sign-up';
-import { Recipe, RecipeReview, RecipeVersion, Tasting } from './models/recipe';
+import { Recipe } from './models/recipe';
+import { RecipeReview } from './models/recipe-review';
+import { RecipeVersion } from './models/recipe-version';
 import { RevokedSession } from './models/revoked-session';
+import { Tasting } from './models/tasting';
 import { User } from './models/user';
 import { forgetBrewery } from './services/brewery-cache';
 import { forgetCachedUser } from './services/sessions';
 
-export { Attachment, BottleFormat, Ingredient, IngredientChange, Invitation, Organisation, OutboxMessage, PasswordReset, PendingSignUp, Recipe, RecipeReview, RecipeVersion, RevokedSession, Tasting, User };
+export {
+  Attachment,
+  BottleFormat,
+  Ingredient,
+  IngredientChange,
+  Invitation,
+  Organisation,
+  OutboxMessage,
+  PasswordReset,
+  PendingSignUp,
+  Recipe,
+  RecipeReview,
+  RecipeVersion,
+  RevokedSession,
+  Tasting,
+  User,
+};
 
 /** How long a connection waits for another one's write lock before SQLite gives up with SQLITE_BUSY. */
 const BUSY_TIMEOUT_MS = 10_000;
@@ -51,7 +71,9 @@ export const sequelize = createSequelize(config.databasePath);
  * Every connection it opens gets the busy timeout and the same journal settings here, so a write that meets another
  * one's lock waits for its turn instead of failing at once with SQLITE_BUSY.
  */
-const connections = sequelize.connectionManager as unknown as { getConnection(options?: object): Promise<SqliteHandle> };
+const connections = sequelize.connectionManager as unknown as {
+  getConnection(options?: object): Promise<SqliteHandle>;
+};
 const openConnection = connections.getConnection.bind(connections);
 const configured = new WeakSet<SqliteHandle>();
 connections.getConnection = async (options?: object) => {
@@ -75,14 +97,32 @@ let lastTurn: Promise<unknown> = Promise.resolve();
  * a transaction that starts another inside itself is a programming error and throws.
  */
 export function transaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
-  if (inTurn.getStore()) return Promise.reject(new Error('A write transaction cannot start another one inside itself.'));
+  if (inTurn.getStore())
+    return Promise.reject(new Error('A write transaction cannot start another one inside itself.'));
   const run = () => inTurn.run(true, () => sequelize.transaction(work));
   const result = lastTurn.then(run, run);
   lastTurn = result.catch(() => undefined);
   return result;
 }
 
-for (const model of [Organisation, User, Invitation, PasswordReset, PendingSignUp, RevokedSession, OutboxMessage, BottleFormat, Ingredient, IngredientChange, Attachment, Recipe, RecipeVersion, Tasting, RecipeReview]) model.initModel(sequelize);
+for (const model of [
+  Organisation,
+  User,
+  Invitation,
+  PasswordReset,
+  PendingSignUp,
+  RevokedSession,
+  OutboxMessage,
+  BottleFormat,
+  Ingredient,
+  IngredientChange,
+  Attachment,
+  Recipe,
+  RecipeVersion,
+  Tasting,
+  RecipeReview,
+])
+  model.initModel(sequelize);
 
 Organisation.hasMany(User, { foreignKey: 'organisationId', as: 'users' });
 User.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });

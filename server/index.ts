@@ -4,12 +4,12 @@ import { createApp } from './app';
 import { config } from './config';
 import { prepareDatabase } from './db';
 import { logger } from './logger';
-import { removeOrphanUploads } from './services/attachments';
-import { redactExpiredLinks } from './services/outbox';
-import { sessionSigningKey } from './services/sessions';
 import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
 import { seedDemoRecipesIfEmpty } from './seed/demo-recipes';
 import { seedIngredientsIfEmpty } from './seed/ingredients';
+import { removeOrphanUploads } from './services/attachments';
+import { redactExpiredLinks } from './services/outbox';
+import { sessionSigningKey } from './services/sessions';
 
 /** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
 export async function main(): Promise<number> {

@@ -4,7 +4,12 @@ import { BottleFormatForm } from '@/components/bottles/BottleFormatForm';
 import { BottleFormatsTable } from '@/components/bottles/BottleFormatsTable';
 import { Cautions } from '@/components/calculations/Cautions';
 import { Banner, Button, Card, Loading, Screen } from '@/components/ui';
-import { useBottleFormatsQuery, useCreateBottleFormatMutation, useUpdateBottleFormatMutation, type BottleFormat } from '@/lib/api/bottle-formats';
+import {
+  type BottleFormat,
+  useBottleFormatsQuery,
+  useCreateBottleFormatMutation,
+  useUpdateBottleFormatMutation,
+} from '@/lib/api/bottle-formats';
 import { useSessionQuery } from '@/lib/api/session';
 import { can } from '@/lib/roles';
 
@@ -30,14 +35,36 @@ export default function BottlesScreen() {
             format={editing === 'new' ? undefined : editing}
             error={editing === 'new' ? create.error : update.error}
             onCancel={() => setEditing(null)}
-            onSubmit={(input) => (editing === 'new' ? create.mutateAsync(input) : update.mutateAsync({ id: editing.id, input }))}
+            onSubmit={(input) =>
+              editing === 'new' ? create.mutateAsync(input) : update.mutateAsync({ id: editing.id, input })
+            }
           />
         </Card>
       ) : null}
-      {canEdit ? null : <Banner tone="info">Only owners change this table. Ask an owner to add a bottle you use.</Banner>}
-      <Card title="Formats" aside={<Button label={showArchived ? 'Hide archived' : 'Show archived'} variant="quiet" onPress={() => setShowArchived(!showArchived)} />}>
+      {canEdit ? null : (
+        <Banner tone="info">Only owners change this table. Ask an owner to add a bottle you use.</Banner>
+      )}
+      <Card
+        title="Formats"
+        aside={
+          <Button
+            label={showArchived ? 'Hide archived' : 'Show archived'}
+            variant="quiet"
+            onPress={() => setShowArchived(!showArchived)}
+          />
+        }
+      >
         {formats.isError ? <Banner tone="danger">{formats.error.message}</Banner> : null}
-        {formats.data ? <BottleFormatsTable formats={formats.data} units={session.user.unitSystem} canEdit={canEdit} onEdit={setEditing} /> : <Loading />}
+        {formats.data ? (
+          <BottleFormatsTable
+            formats={formats.data}
+            units={session.user.unitSystem}
+            canEdit={canEdit}
+            onEdit={setEditing}
+          />
+        ) : (
+          <Loading />
+        )}
       </Card>
       <Cautions />
     </Screen>

@@ -20,7 +20,13 @@ export default function MoreScreen() {
     <Screen title="More" maxWidth={640}>
       <Card>
         {list.map((item) => (
-          <Button key={item.href} label={item.label} variant="secondary" onPress={() => router.navigate(item.href)} block />
+          <Button
+            key={item.href}
+            label={item.label}
+            variant="secondary"
+            onPress={() => router.navigate(item.href)}
+            block
+          />
         ))}
       </Card>
       <Card>

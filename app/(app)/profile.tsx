@@ -3,7 +3,13 @@ import { StyleSheet, View } from 'react-native';
 
 import { PasswordForm, ProfileForm } from '@/components/profile/ProfileForms';
 import { Badge, Button, Card, Screen, Segmented, Text } from '@/components/ui';
-import { useChangePasswordMutation, useSessionQuery, useSignOutMutation, useUpdatePreferencesMutation, useUpdateProfileMutation } from '@/lib/api/session';
+import {
+  useChangePasswordMutation,
+  useSessionQuery,
+  useSignOutMutation,
+  useUpdatePreferencesMutation,
+  useUpdateProfileMutation,
+} from '@/lib/api/session';
 import { ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
@@ -18,10 +24,19 @@ export default function ProfileScreen() {
   return (
     <Screen title="Profile" subtitle={session.user.email} maxWidth={720}>
       <Card title="You" aside={<Badge label={ROLE_LABELS[session.user.role]} tone="info" />}>
-        <ProfileForm name={session.user.name} error={update.error} saved={update.isSuccess} onSubmit={(values) => update.mutateAsync(values)} />
+        <ProfileForm
+          name={session.user.name}
+          error={update.error}
+          saved={update.isSuccess}
+          onSubmit={(values) => update.mutateAsync(values)}
+        />
       </Card>
       <Card title="Password">
-        <PasswordForm error={changePassword.error} saved={changePassword.isSuccess} onSubmit={(values) => changePassword.mutateAsync(values)} />
+        <PasswordForm
+          error={changePassword.error}
+          saved={changePassword.isSuccess}
+          onSubmit={(values) => changePassword.mutateAsync(values)}
+        />
       </Card>
       <Card title="E-mail">
         <Segmented

@@ -16,7 +16,15 @@ export default function QuickCheckScreen() {
       maxWidth={1400}
     >
       {formats.isError ? <Banner tone="danger">{formats.error.message}</Banner> : null}
-      {formats.data ? <QuickCheck formats={formats.data} units={session.user.unitSystem} limitPercent={session.organisation.abvLimitPercent} /> : <Loading />}
+      {formats.data ? (
+        <QuickCheck
+          formats={formats.data}
+          units={session.user.unitSystem}
+          limitPercent={session.organisation.abvLimitPercent}
+        />
+      ) : (
+        <Loading />
+      )}
     </Screen>
   );
 }

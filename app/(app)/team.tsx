@@ -35,7 +35,9 @@ export default function TeamScreen() {
           <Card title="Members" aside={team.data ? `${team.data.members.length}` : undefined}>
             {team.data ? <MembersTable members={team.data.members} currentUserId={session.user.id} /> : <Loading />}
           </Card>
-          <Card title="Open invitations">{team.data ? <InvitationsTable invitations={team.data.invitations} /> : <Loading />}</Card>
+          <Card title="Open invitations">
+            {team.data ? <InvitationsTable invitations={team.data.invitations} /> : <Loading />}
+          </Card>
         </View>
         <View style={styles.side}>
           <Card title="Invite someone">
@@ -45,7 +47,12 @@ export default function TeamScreen() {
             <InviteForm error={invite.error} onSubmit={(values) => invite.mutateAsync(values)} />
           </Card>
           <Card title="Brewery settings">
-            <BrewerySettingsForm organisation={session.organisation} error={settings.error} saved={settings.isSuccess} onSubmit={(input) => settings.mutateAsync(input)} />
+            <BrewerySettingsForm
+              organisation={session.organisation}
+              error={settings.error}
+              saved={settings.isSuccess}
+              onSubmit={(input) => settings.mutateAsync(input)}
+            />
           </Card>
         </View>
       </View>

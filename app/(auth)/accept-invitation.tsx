@@ -11,7 +11,8 @@ export default function AcceptInvitationScreen() {
   const router = useRouter();
   const invitation = useInvitationQuery(token);
   const accept = useAcceptInvitationMutation();
-  if (!token) return <Banner tone="danger">This invitation link is incomplete. Open the link from the e-mail again.</Banner>;
+  if (!token)
+    return <Banner tone="danger">This invitation link is incomplete. Open the link from the e-mail again.</Banner>;
   if (invitation.isPending) return <Loading label="Reading the invitation…" />;
   if (invitation.isError) {
     return (

@@ -15,7 +15,9 @@ export default function ConfirmSignUpScreen() {
         <Text variant="heading" level={1}>
           Confirm your address
         </Text>
-        <Text variant="muted">Your brewery account is created when you confirm, and you are signed in as its owner.</Text>
+        <Text variant="muted">
+          Your brewery account is created when you confirm, and you are signed in as its owner.
+        </Text>
       </View>
       {token ? (
         <>

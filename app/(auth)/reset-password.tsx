@@ -29,7 +29,9 @@ export default function ResetPasswordScreen() {
           }}
         />
       ) : (
-        <Banner tone="danger">This link is incomplete. Open the link from the e-mail again, or ask for a new one.</Banner>
+        <Banner tone="danger">
+          This link is incomplete. Open the link from the e-mail again, or ask for a new one.
+        </Banner>
       )}
       <TextLink href="/forgot-password">Ask for a new link</TextLink>
     </>

@@ -14,10 +14,13 @@ export default function SignInScreen() {
       <Text variant="heading" level={1}>
         Sign in
       </Text>
-      <SignInForm error={signIn.error} onSubmit={async (values) => {
-        await signIn.mutateAsync(values);
-        router.replace('/');
-      }} />
+      <SignInForm
+        error={signIn.error}
+        onSubmit={async (values) => {
+          await signIn.mutateAsync(values);
+          router.replace('/');
+        }}
+      />
       <View style={formStyles.links}>
         <TextLink href="/forgot-password">Forgot your password?</TextLink>
         <View style={formStyles.row}>

@@ -17,7 +17,9 @@ export default function SignUpScreen() {
         <Text variant="heading" level={1}>
           Create a brewery account
         </Text>
-        <Text variant="muted">You will be its owner, and can invite your team next. We first confirm your e-mail address.</Text>
+        <Text variant="muted">
+          You will be its owner, and can invite your team next. We first confirm your e-mail address.
+        </Text>
       </View>
       {signUp.isSuccess ? (
         <>

@@ -19,5 +19,9 @@ export default function CardCodeScreen() {
       </AuthFrame>
     );
   }
-  return <Redirect href={`/print/${parsed.recipeId}?version=${parsed.version}&kind=${parsed.batch.kind}&value=${parsed.batch.value}`} />;
+  return (
+    <Redirect
+      href={`/print/${parsed.recipeId}?version=${parsed.version}&kind=${parsed.batch.kind}&value=${parsed.batch.value}`}
+    />
+  );
 }

@@ -11,21 +11,40 @@ import { colors, space } from '@/lib/theme';
 
 /** The printable card of a recipe version at a batch size, outside the app's frame so that only the card prints. */
 export default function PrintCardScreen() {
-  const params = useLocalSearchParams<{ id: string; version?: string; kind?: string; value?: string; units?: string }>();
-  const query = cardQuery({ kind: params.kind ?? 'bottles', value: params.value ?? '', units: params.units ?? 'metric', version: params.version });
+  const params = useLocalSearchParams<{
+    id: string;
+    version?: string;
+    kind?: string;
+    value?: string;
+    units?: string;
+  }>();
+  const query = cardQuery({
+    kind: params.kind ?? 'bottles',
+    value: params.value ?? '',
+    units: params.units ?? 'metric',
+    version: params.version,
+  });
   const card = useCardQuery(Number(params.id), query);
   return (
     <ScrollView style={styles.scroll} contentContainerStyle={styles.content} dataSet={{ printScroll: 'yes' }}>
       <View role="main" style={styles.inner}>
         <View style={styles.actions} dataSet={{ print: 'hide' }}>
           {Platform.OS === 'web' ? <Button label="Print" onPress={() => window.print()} /> : null}
-          <Button label="Download PDF" variant="secondary" onPress={() => Linking.openURL(`${env.apiUrl}/api/recipes/${params.id}/card.pdf?${query}`)} />
+          <Button
+            label="Download PDF"
+            variant="secondary"
+            onPress={() => Linking.openURL(`${env.apiUrl}/api/recipes/${params.id}/card.pdf?${query}`)}
+          />
           <Link href={`/recipes/${params.id}`} style={styles.back}>
             Back to the recipe
           </Link>
         </View>
         {card.isError ? <Banner tone="danger">{card.error.message}</Banner> : null}
-        {card.data ? <RecipeCardView card={card.data} /> : card.isPending ? <Loading label="Preparing the card…" /> : null}
+        {card.data ? (
+          <RecipeCardView card={card.data} />
+        ) : card.isPending ? (
+          <Loading label="Preparing the card…" />
+        ) : null}
       </View>
     </ScrollView>
   );

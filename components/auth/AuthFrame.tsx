@@ -1,10 +1,9 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { Logo } from '@/components/ui/Logo';
+import { Text } from '@/components/ui/Text';
 import { breakpoints, colors, fonts, radius, space } from '@/lib/theme';
-
-import { Logo } from '../ui/Logo';
-import { Text } from '../ui/Text';
 
 /**
  * The frame of the signed-out pages: the form on a card, and on wide windows a panel saying what
@@ -14,14 +13,18 @@ export function AuthFrame({ children }: { children: ReactNode }) {
   const { width } = useWindowDimensions();
   const wide = width >= breakpoints.wide;
   return (
-    <ScrollView style={styles.scroll} contentContainerStyle={[styles.content, wide && styles.contentWide]} keyboardShouldPersistTaps="handled">
+    <ScrollView
+      style={styles.scroll}
+      contentContainerStyle={[styles.content, wide && styles.contentWide]}
+      keyboardShouldPersistTaps="handled"
+    >
       {wide ? (
         <View style={styles.panel}>
           <Logo inverse size={40} />
           <Text style={styles.panelTitle}>Flavour, fizz and safety for bottle-conditioned drinks.</Text>
           <Text style={styles.panelText}>
-            Design a flavour, see the sugar, CO2, bottle pressure and alcohol before anything is sealed, and send approved recipes to
-            the floor.
+            Design a flavour, see the sugar, CO2, bottle pressure and alcohol before anything is sealed, and send
+            approved recipes to the floor.
           </Text>
         </View>
       ) : (

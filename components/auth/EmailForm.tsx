@@ -1,9 +1,9 @@
 import { Formik } from 'formik';
 import { View } from 'react-native';
 
-import { forgotPasswordSchema, type ForgotPasswordInput } from '@/lib/schemas/auth';
+import { Button, FormField, FormStatus, submitTo } from '@/components/ui';
+import { type ForgotPasswordInput, forgotPasswordSchema } from '@/lib/schemas/auth';
 
-import { Button, FormField, FormStatus, submitTo } from '../ui';
 import { formStyles } from './form-styles';
 
 interface Props {
@@ -14,11 +14,22 @@ interface Props {
 /** Asks for the e-mail address that should receive a reset link. */
 export function ForgotPasswordForm({ onSubmit, error }: Props) {
   return (
-    <Formik<ForgotPasswordInput> initialValues={{ email: '' }} validationSchema={forgotPasswordSchema} onSubmit={submitTo(onSubmit, { schema: forgotPasswordSchema })}>
+    <Formik<ForgotPasswordInput>
+      initialValues={{ email: '' }}
+      validationSchema={forgotPasswordSchema}
+      onSubmit={submitTo(onSubmit, { schema: forgotPasswordSchema })}
+    >
       {({ handleSubmit, isSubmitting }) => (
         <View style={formStyles.form}>
           <FormStatus error={error} />
-          <FormField name="email" label="E-mail" autoComplete="email" inputMode="email" autoCapitalize="none" onSubmitEditing={() => handleSubmit()} />
+          <FormField
+            name="email"
+            label="E-mail"
+            autoComplete="email"
+            inputMode="email"
+            autoCapitalize="none"
+            onSubmitEditing={() => handleSubmit()}
+          />
           <Button label="Send reset link" busy={isSubmitting} onPress={() => handleSubmit()} block />
         </View>
       )}

@@ -1,10 +1,10 @@
 import { Formik } from 'formik';
 import { View } from 'react-native';
 
+import { Button, FormField, FormStatus, submitTo } from '@/components/ui';
 import { acceptInvitationSchema, resetPasswordSchema } from '@/lib/schemas/auth';
 import { PASSWORD_MIN_LENGTH } from '@/lib/schemas/common';
 
-import { Button, FormField, FormStatus, submitTo } from '../ui';
 import { formStyles } from './form-styles';
 
 interface Props {

@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Banner, Text, TextLink } from '@/components/ui';
 import type { ServerInfo } from '@/lib/api/types';
 import { space } from '@/lib/theme';
 
-import { Banner, Text, TextLink } from '../ui';
 import { formStyles } from './form-styles';
 
 interface Props {

@@ -1,9 +1,9 @@
 import { Formik } from 'formik';
 import { View } from 'react-native';
 
-import { signInSchema, type SignInInput } from '@/lib/schemas/auth';
+import { Button, FormField, FormStatus, submitTo } from '@/components/ui';
+import { type SignInInput, signInSchema } from '@/lib/schemas/auth';
 
-import { Button, FormField, FormStatus, submitTo } from '../ui';
 import { formStyles } from './form-styles';
 
 interface Props {
@@ -13,12 +13,29 @@ interface Props {
 
 export function SignInForm({ onSubmit, error }: Props) {
   return (
-    <Formik<SignInInput> initialValues={{ email: '', password: '' }} validationSchema={signInSchema} onSubmit={submitTo(onSubmit, { schema: signInSchema })}>
+    <Formik<SignInInput>
+      initialValues={{ email: '', password: '' }}
+      validationSchema={signInSchema}
+      onSubmit={submitTo(onSubmit, { schema: signInSchema })}
+    >
       {({ handleSubmit, isSubmitting }) => (
         <View style={formStyles.form}>
           <FormStatus error={error} />
-          <FormField name="email" label="E-mail" autoComplete="email" inputMode="email" autoCapitalize="none" textContentType="emailAddress" />
-          <FormField name="password" label="Password" secureTextEntry autoComplete="current-password" onSubmitEditing={() => handleSubmit()} />
+          <FormField
+            name="email"
+            label="E-mail"
+            autoComplete="email"
+            inputMode="email"
+            autoCapitalize="none"
+            textContentType="emailAddress"
+          />
+          <FormField
+            name="password"
+            label="Password"
+            secureTextEntry
+            autoComplete="current-password"
+            onSubmitEditing={() => handleSubmit()}
+          />
           <Button label="Sign in" busy={isSubmitting} onPress={() => handleSubmit()} block />
         </View>
       )}

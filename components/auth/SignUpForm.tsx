@@ -1,10 +1,10 @@
 import { Formik } from 'formik';
 import { View } from 'react-native';
 
+import { Button, FormField, FormStatus, submitTo } from '@/components/ui';
+import { type SignUpInput, signUpSchema } from '@/lib/schemas/auth';
 import { PASSWORD_MIN_LENGTH } from '@/lib/schemas/common';
-import { signUpSchema, type SignUpInput } from '@/lib/schemas/auth';
 
-import { Button, FormField, FormStatus, submitTo } from '../ui';
 import { formStyles } from './form-styles';
 
 interface Props {

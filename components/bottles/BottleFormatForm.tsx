@@ -1,12 +1,20 @@
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
+import { Button, FormField, FormStatus, Select, submitTo } from '@/components/ui';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { check, parseNumber } from '@/lib/forms';
-import { bottleFormatSchema, CLOSURE_LABELS, CLOSURES, MATERIAL_LABELS, MATERIALS, type BottleFormatInput, type Closure, type Material } from '@/lib/schemas/bottle-formats';
+import {
+  type BottleFormatInput,
+  bottleFormatSchema,
+  type Closure,
+  CLOSURE_LABELS,
+  CLOSURES,
+  type Material,
+  MATERIAL_LABELS,
+  MATERIALS,
+} from '@/lib/schemas/bottle-formats';
 import { space } from '@/lib/theme';
-
-import { Button, FormField, FormStatus, Select, submitTo } from '../ui';
 
 interface Values {
   name: string;
@@ -51,7 +59,9 @@ export function BottleFormatForm({ format, onSubmit, onCancel, error }: Props) {
     <Formik<Values>
       initialValues={toValues(format)}
       validate={(values) => check(bottleFormatSchema, toInput(values)).errors}
-      onSubmit={submitTo((values: Values) => onSubmit(check(bottleFormatSchema, toInput(values)).value!), { afterSuccess: () => onCancel() })}
+      onSubmit={submitTo((values: Values) => onSubmit(check(bottleFormatSchema, toInput(values)).value!), {
+        afterSuccess: () => onCancel(),
+      })}
     >
       {({ handleSubmit, isSubmitting, values, setFieldValue }) => (
         <View style={styles.form}>
@@ -65,12 +75,33 @@ export function BottleFormatForm({ format, onSubmit, onCancel, error }: Props) {
               <FormField name="headspaceMl" label="Headspace" suffix="mL" inputMode="decimal" />
             </View>
             <View style={styles.cell}>
-              <FormField name="maxWorkingPressureBar" label="Maximum working pressure" suffix="bar" inputMode="decimal" />
+              <FormField
+                name="maxWorkingPressureBar"
+                label="Maximum working pressure"
+                suffix="bar"
+                inputMode="decimal"
+              />
             </View>
           </View>
-          <Select compact label="Closure" value={values.closure} options={CLOSURES.map((c) => ({ value: c, label: CLOSURE_LABELS[c] }))} onChange={(c) => setFieldValue('closure', c)} />
-          <Select compact label="Material" value={values.material} options={MATERIALS.map((m) => ({ value: m, label: MATERIAL_LABELS[m] }))} onChange={(m) => setFieldValue('material', m)} />
-          <FormField name="pressureSource" label="Where the pressure figure comes from" hint="The supplier and their sheet, e.g. “Supplier spec sheet, March 2026”." />
+          <Select
+            compact
+            label="Closure"
+            value={values.closure}
+            options={CLOSURES.map((c) => ({ value: c, label: CLOSURE_LABELS[c] }))}
+            onChange={(c) => setFieldValue('closure', c)}
+          />
+          <Select
+            compact
+            label="Material"
+            value={values.material}
+            options={MATERIALS.map((m) => ({ value: m, label: MATERIAL_LABELS[m] }))}
+            onChange={(m) => setFieldValue('material', m)}
+          />
+          <FormField
+            name="pressureSource"
+            label="Where the pressure figure comes from"
+            hint="The supplier and their sheet, e.g. “Supplier spec sheet, March 2026”."
+          />
           <FormField name="notes" label="Notes" multiline />
           <View style={styles.row}>
             <Button label={format ? 'Save format' : 'Add format'} busy={isSubmitting} onPress={() => handleSubmit()} />

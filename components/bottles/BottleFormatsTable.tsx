@@ -1,11 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 
-import { useArchiveBottleFormatMutation, type BottleFormat } from '@/lib/api/bottle-formats';
+import { Badge, Button, type Column, FormStatus, Table, Text } from '@/components/ui';
+import { type BottleFormat, useArchiveBottleFormatMutation } from '@/lib/api/bottle-formats';
 import { CLOSURE_LABELS, MATERIAL_LABELS } from '@/lib/schemas/bottle-formats';
 import { space } from '@/lib/theme';
 import { formatPressure, formatSmallVolume, type UnitSystem } from '@/lib/units';
-
-import { Badge, Button, FormStatus, Table, Text, type Column } from '../ui';
 
 interface Props {
   formats: BottleFormat[];
@@ -33,7 +32,11 @@ export function BottleFormatsTable({ formats, units, canEdit, onEdit }: Props) {
         </View>
       ),
     },
-    { key: 'liquid', header: 'Liquid', render: (f) => `${formatSmallVolume(f.liquidMl, units)}, headspace ${formatSmallVolume(f.headspaceMl, units)}` },
+    {
+      key: 'liquid',
+      header: 'Liquid',
+      render: (f) => `${formatSmallVolume(f.liquidMl, units)}, headspace ${formatSmallVolume(f.headspaceMl, units)}`,
+    },
     {
       key: 'rating',
       header: 'Rated to',
@@ -41,7 +44,11 @@ export function BottleFormatsTable({ formats, units, canEdit, onEdit }: Props) {
       render: (f) => (
         <View style={styles.rating}>
           <Text>{formatPressure(f.maxWorkingPressureBar, units)}</Text>
-          {fromMemory(f) ? <Badge label="Typical value: confirm with your supplier" tone="caution" /> : <Text variant="small">{f.pressureSource}</Text>}
+          {fromMemory(f) ? (
+            <Badge label="Typical value: confirm with your supplier" tone="caution" />
+          ) : (
+            <Text variant="small">{f.pressureSource}</Text>
+          )}
         </View>
       ),
     },

@@ -1,9 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Banner, Text } from '@/components/ui';
 import { SAFETY_CAUTIONS } from '@/lib/chemistry/cautions';
 import { space } from '@/lib/theme';
-
-import { Banner, Text } from '../ui';
 
 /** The standing cautions, shown wherever pressure numbers are. */
 export function Cautions() {

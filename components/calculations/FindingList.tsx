@@ -1,9 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Badge, Text, type Tone } from '@/components/ui';
 import type { Finding } from '@/lib/chemistry/carbonation';
 import { space } from '@/lib/theme';
-
-import { Badge, Text, type Tone } from '../ui';
 
 const TONE: Record<Finding['level'], Tone> = { ok: 'success', caution: 'caution', danger: 'danger' };
 const LABEL: Record<Finding['level'], string> = { ok: 'OK', caution: 'Caution', danger: 'Danger' };
@@ -15,7 +14,12 @@ export function FindingList({ findings }: { findings: Finding[] }) {
   return (
     <View role="list" aria-label="Findings" style={styles.list}>
       {sorted.map((finding) => (
-        <View role="listitem" key={finding.code} style={styles.item} aria-label={`${LABEL[finding.level]}: ${finding.message}`}>
+        <View
+          role="listitem"
+          key={finding.code}
+          style={styles.item}
+          aria-label={`${LABEL[finding.level]}: ${finding.message}`}
+        >
           <Badge label={LABEL[finding.level]} tone={TONE[finding.level]} />
           <Text style={styles.message}>{finding.message}</Text>
         </View>

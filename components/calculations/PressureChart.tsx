@@ -2,10 +2,9 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import Svg, { Line, Path, Text as SvgText } from 'react-native-svg';
 
+import { Text } from '@/components/ui';
 import { colors, fonts, space } from '@/lib/theme';
 import { barToPsi, cToF, formatNumber, type UnitSystem } from '@/lib/units';
-
-import { Text } from '../ui';
 
 interface Point {
   tempC: number;
@@ -49,7 +48,8 @@ export function PressureChart({ worst, expected, ratingBar, units }: Props) {
   const plotH = HEIGHT - MARGIN.top - MARGIN.bottom;
   const x = (tempC: number) => MARGIN.left + ((tempC - minT) / (maxT - minT || 1)) * plotW;
   const y = (value: number) => MARGIN.top + (1 - (value - bottom) / (top - bottom || 1)) * plotH;
-  const path = (points: Point[]) => points.map((p, i) => `${i === 0 ? 'M' : 'L'}${x(p.tempC).toFixed(1)},${y(toP(p.gaugeBar)).toFixed(1)}`).join(' ');
+  const path = (points: Point[]) =>
+    points.map((p, i) => `${i === 0 ? 'M' : 'L'}${x(p.tempC).toFixed(1)},${y(toP(p.gaugeBar)).toFixed(1)}`).join(' ');
   const yTicks: number[] = [];
   for (let v = bottom; v <= top + step / 2; v += step) yTicks.push(Number(v.toFixed(6)));
   const xTicks = worst.map((p) => p.tempC).filter((t) => t % 10 === 0 || worst.length <= 6);
@@ -62,19 +62,50 @@ export function PressureChart({ worst, expected, ratingBar, units }: Props) {
         {width > 0 ? (
           <Svg width={width} height={HEIGHT}>
             {yTicks.map((v) => (
-              <Line key={`y${v}`} x1={MARGIN.left} x2={MARGIN.left + plotW} y1={y(v)} y2={y(v)} stroke="#E4DED2" strokeWidth={1} />
+              <Line
+                key={`y${v}`}
+                x1={MARGIN.left}
+                x2={MARGIN.left + plotW}
+                y1={y(v)}
+                y2={y(v)}
+                stroke="#E4DED2"
+                strokeWidth={1}
+              />
             ))}
             {yTicks.map((v) => (
-              <SvgText key={`yl${v}`} x={MARGIN.left - 6} y={y(v) + 4} fontSize={11} fontFamily={fonts.regular} fill={colors.textMuted} textAnchor="end">
+              <SvgText
+                key={`yl${v}`}
+                x={MARGIN.left - 6}
+                y={y(v) + 4}
+                fontSize={11}
+                fontFamily={fonts.regular}
+                fill={colors.textMuted}
+                textAnchor="end"
+              >
                 {formatNumber(v, step < 1 ? 1 : 0)}
               </SvgText>
             ))}
             {xTicks.map((t) => (
-              <SvgText key={`x${t}`} x={x(t)} y={HEIGHT - MARGIN.bottom + 16} fontSize={11} fontFamily={fonts.regular} fill={colors.textMuted} textAnchor="middle">
+              <SvgText
+                key={`x${t}`}
+                x={x(t)}
+                y={HEIGHT - MARGIN.bottom + 16}
+                fontSize={11}
+                fontFamily={fonts.regular}
+                fill={colors.textMuted}
+                textAnchor="middle"
+              >
                 {units === 'us' ? formatNumber(cToF(t), 0) : String(t)}
               </SvgText>
             ))}
-            <SvgText x={MARGIN.left + plotW / 2} y={HEIGHT - 4} fontSize={12} fontFamily={fonts.semibold} fill={colors.text} textAnchor="middle">
+            <SvgText
+              x={MARGIN.left + plotW / 2}
+              y={HEIGHT - 4}
+              fontSize={12}
+              fontFamily={fonts.semibold}
+              fill={colors.text}
+              textAnchor="middle"
+            >
               {`Temperature (${tUnit})`}
             </SvgText>
             <SvgText x={4} y={14} fontSize={12} fontFamily={fonts.semibold} fill={colors.text}>
@@ -82,8 +113,22 @@ export function PressureChart({ worst, expected, ratingBar, units }: Props) {
             </SvgText>
             {ratingBar ? (
               <>
-                <Line x1={MARGIN.left} x2={MARGIN.left + plotW} y1={y(toP(ratingBar))} y2={y(toP(ratingBar))} stroke={colors.danger} strokeWidth={2} strokeDasharray="6 4" />
-                <SvgText x={MARGIN.left + 4} y={y(toP(ratingBar)) - 6} fontSize={12} fontFamily={fonts.semibold} fill={colors.danger}>
+                <Line
+                  x1={MARGIN.left}
+                  x2={MARGIN.left + plotW}
+                  y1={y(toP(ratingBar))}
+                  y2={y(toP(ratingBar))}
+                  stroke={colors.danger}
+                  strokeWidth={2}
+                  strokeDasharray="6 4"
+                />
+                <SvgText
+                  x={MARGIN.left + 4}
+                  y={y(toP(ratingBar)) - 6}
+                  fontSize={12}
+                  fontFamily={fonts.semibold}
+                  fill={colors.danger}
+                >
                   {`Bottle rating ${formatNumber(toP(ratingBar), units === 'us' ? 0 : 1)} ${pUnit}`}
                 </SvgText>
               </>

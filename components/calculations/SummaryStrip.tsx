@@ -1,10 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Badge, Text } from '@/components/ui';
 import type { CarbonationResult } from '@/lib/chemistry/carbonation';
 import { colors, radius, space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
-
-import { Badge, Text } from '../ui';
 
 /**
  * The key numbers in one line, kept at the top of the screen on phones, where the results come after the inputs:
@@ -14,13 +13,18 @@ export function SummaryStrip({ result, units }: { result: CarbonationResult; uni
   const worst = result.cases.worst;
   const temps = result.pressures.map((p) => p.tempC);
   const hottest = temps.indexOf(Math.max(...temps));
-  const level = result.findings.some((f) => f.level === 'danger') ? 'danger' : result.findings.some((f) => f.level === 'caution') ? 'caution' : 'success';
+  const level = result.findings.some((f) => f.level === 'danger')
+    ? 'danger'
+    : result.findings.some((f) => f.level === 'caution')
+      ? 'caution'
+      : 'success';
   return (
     <View style={styles.strip} role="status" aria-live="polite">
       <Badge label={level === 'danger' ? 'Danger' : level === 'caution' ? 'Caution' : 'OK'} tone={level} />
       <Text style={styles.text}>
-        {formatNumber(worst.co2.totalVolumes, 2)} vol · {result.pressures[hottest]?.liquidFills ? 'bottle full' : formatPressure(worst.gaugeBar[hottest], units)} at {formatTemp(temps[hottest], units)} ·{' '}
-        {formatNumber(worst.alcohol.totalAbvPercent, 2)} % ABV
+        {formatNumber(worst.co2.totalVolumes, 2)} vol ·{' '}
+        {result.pressures[hottest]?.liquidFills ? 'bottle full' : formatPressure(worst.gaugeBar[hottest], units)} at{' '}
+        {formatTemp(temps[hottest], units)} · {formatNumber(worst.alcohol.totalAbvPercent, 2)} % ABV
       </Text>
     </View>
   );

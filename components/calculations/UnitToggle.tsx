@@ -1,7 +1,6 @@
+import { Segmented } from '@/components/ui';
 import { useSessionQuery, useUpdatePreferencesMutation } from '@/lib/api/session';
 import type { UnitSystem } from '@/lib/units';
-
-import { Segmented } from '../ui';
 
 /** Metric or US units, remembered for the signed-in person. */
 export function UnitToggle() {

@@ -1,13 +1,12 @@
-import { useRouter, type Href } from 'expo-router';
+import { type Href, useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
+import { Button, Card, Text } from '@/components/ui';
 import { useServerInfoQuery } from '@/lib/api/session';
 import { useTeamQuery } from '@/lib/api/team';
 import type { Session } from '@/lib/api/types';
 import { can } from '@/lib/roles';
 import { space } from '@/lib/theme';
-
-import { Button, Card, Text } from '../ui';
 
 interface Action {
   title: string;
@@ -61,7 +60,12 @@ export function HomeActions({ session }: { session: Session }) {
       {actions.map((action) => (
         <Card key={action.title} title={action.title} style={styles.card}>
           <Text variant="muted">{action.text}</Text>
-          <Button label={action.button} variant="secondary" onPress={() => router.navigate(action.href)} style={styles.button} />
+          <Button
+            label={action.button}
+            variant="secondary"
+            onPress={() => router.navigate(action.href)}
+            style={styles.button}
+          />
         </Card>
       ))}
     </View>

@@ -1,19 +1,36 @@
 import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
-import { useRecipesQuery, type RecipeSummary } from '@/lib/api/recipes';
+import { STATE_TONE } from '@/components/recipes/ReviewPanel';
+import { Badge, Card, SafetyBadge, Text } from '@/components/ui';
+import { type RecipeSummary, useRecipesQuery } from '@/lib/api/recipes';
 import type { Role } from '@/lib/roles';
+import { can } from '@/lib/roles';
 import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { colors, fonts, space } from '@/lib/theme';
 
-import { STATE_TONE } from '../recipes/ReviewPanel';
-import { Badge, Card, SafetyBadge, Text } from '../ui';
-import { can } from '@/lib/roles';
-
-const VIEW: Record<Role, { title: string; empty: string; status: 'draft' | 'approved'; keep: (r: RecipeSummary) => boolean }> = {
-  owner: { title: 'Waiting for your review', empty: 'Nothing waits for review.', status: 'draft', keep: (r) => r.reviewState === 'submitted' },
-  developer: { title: 'Drafts and returned versions', empty: 'No drafts: start a recipe.', status: 'draft', keep: (r) => r.reviewState === 'draft' || r.reviewState === 'returned' },
-  brewer: { title: 'Approved for production', empty: 'No recipe is approved for production yet.', status: 'approved', keep: () => true },
+const VIEW: Record<
+  Role,
+  { title: string; empty: string; status: 'draft' | 'approved'; keep: (r: RecipeSummary) => boolean }
+> = {
+  owner: {
+    title: 'Waiting for your review',
+    empty: 'Nothing waits for review.',
+    status: 'draft',
+    keep: (r) => r.reviewState === 'submitted',
+  },
+  developer: {
+    title: 'Drafts and returned versions',
+    empty: 'No drafts: start a recipe.',
+    status: 'draft',
+    keep: (r) => r.reviewState === 'draft' || r.reviewState === 'returned',
+  },
+  brewer: {
+    title: 'Approved for production',
+    empty: 'No recipe is approved for production yet.',
+    status: 'approved',
+    keep: () => true,
+  },
 };
 
 /** The recipes that need this person now, by role. */
@@ -31,7 +48,14 @@ export function RecipeShortlist({ role }: { role: Role }) {
           </Link>
           <View style={styles.badges}>
             <SafetyBadge level={r.safetyLevel} />
-            <Badge label={!can(role, 'recipes.develop') ? `v${r.approvedVersion}` : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`} tone={!can(role, 'recipes.develop') ? 'success' : STATE_TONE[r.reviewState]} />
+            <Badge
+              label={
+                !can(role, 'recipes.develop')
+                  ? `v${r.approvedVersion}`
+                  : `${REVIEW_STATE_LABELS[r.reviewState]} · v${r.currentVersion}`
+              }
+              tone={!can(role, 'recipes.develop') ? 'success' : STATE_TONE[r.reviewState]}
+            />
           </View>
         </View>
       ))}
@@ -41,6 +65,19 @@ export function RecipeShortlist({ role }: { role: Role }) {
 
 const styles = StyleSheet.create({
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
-  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm, minHeight: 36 },
-  link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
+  row: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: space.sm,
+    minHeight: 36,
+  },
+  link: {
+    color: colors.primary,
+    fontFamily: fonts.semibold,
+    fontSize: 17,
+    lineHeight: 24,
+    textDecorationLine: 'underline',
+  },
 });

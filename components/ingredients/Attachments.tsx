@@ -2,12 +2,11 @@ import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { Linking, StyleSheet, View } from 'react-native';
 
+import { Button, Card, FormStatus, Text } from '@/components/ui';
 import { useAttachmentsQuery, useDeleteAttachmentMutation, useUploadAttachmentMutation } from '@/lib/api/ingredients';
 import { env } from '@/lib/env';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
-
-import { Button, Card, FormStatus, Text } from '../ui';
 
 const ACCEPTED = ['application/pdf', 'image/jpeg', 'image/png'];
 
@@ -19,7 +18,12 @@ export function Attachments({ ingredientId, canUpload }: { ingredientId: number;
   // Deleting asks once more, on the same row: the file cannot be brought back.
   const [confirming, setConfirming] = useState<number | null>(null);
   const pick = async () => {
-    const result = await DocumentPicker.getDocumentAsync({ type: ACCEPTED, multiple: false, base64: false, copyToCacheDirectory: false });
+    const result = await DocumentPicker.getDocumentAsync({
+      type: ACCEPTED,
+      multiple: false,
+      base64: false,
+      copyToCacheDirectory: false,
+    });
     const asset = result.canceled ? null : result.assets[0];
     if (!asset) return;
     const file = asset.file ?? (await (await fetch(asset.uri)).blob());
@@ -31,12 +35,23 @@ export function Attachments({ ingredientId, canUpload }: { ingredientId: number;
       {list.data && list.data.length === 0 ? <Text variant="muted">No files yet.</Text> : null}
       {list.data?.map((a) => (
         <View key={a.id} style={styles.row}>
-          <Button label={a.name} accessibleName={`Open ${a.name}`} variant="quiet" onPress={() => Linking.openURL(`${env.apiUrl}${a.url}`)} />
+          <Button
+            label={a.name}
+            accessibleName={`Open ${a.name}`}
+            variant="quiet"
+            onPress={() => Linking.openURL(`${env.apiUrl}${a.url}`)}
+          />
           <Text variant="small">
-            {formatNumber(a.sizeBytes / 1024, 0)} KB · {a.uploadedBy ?? 'someone'} · {new Date(a.createdAt).toLocaleDateString()}
+            {formatNumber(a.sizeBytes / 1024, 0)} KB · {a.uploadedBy ?? 'someone'} ·{' '}
+            {new Date(a.createdAt).toLocaleDateString()}
           </Text>
           {canUpload && confirming !== a.id ? (
-            <Button label="Delete" accessibleName={`Delete ${a.name}`} variant="quiet" onPress={() => setConfirming(a.id)} />
+            <Button
+              label="Delete"
+              accessibleName={`Delete ${a.name}`}
+              variant="quiet"
+              onPress={() => setConfirming(a.id)}
+            />
           ) : null}
           {canUpload && confirming === a.id ? (
             <>
@@ -54,7 +69,12 @@ export function Attachments({ ingredientId, canUpload }: { ingredientId: number;
       ))}
       {canUpload ? (
         <View style={styles.row}>
-          <Button label="Attach a PDF, JPEG or PNG" variant="secondary" busy={upload.isPending} onPress={() => void pick()} />
+          <Button
+            label="Attach a PDF, JPEG or PNG"
+            variant="secondary"
+            busy={upload.isPending}
+            onPress={() => void pick()}
+          />
           <Text variant="small">Up to 10 MB.</Text>
         </View>
       ) : null}

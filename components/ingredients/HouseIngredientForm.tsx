@@ -1,14 +1,22 @@
 import { Formik } from 'formik';
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
+import { Button, FormField, FormStatus, Segmented, Select, submitTo, Text } from '@/components/ui';
 import type { Ingredient } from '@/lib/api/ingredients';
 import { check, parseNumber } from '@/lib/forms';
-import { ALLERGEN_LABELS, ALLERGENS, CATEGORIES, CATEGORY_LABELS, DEFAULT_FERMENTABLE_SHARE, DEFAULT_STEEP_SHARE, type Allergen, type Category } from '@/lib/ingredients';
-import { houseIngredientSchema, per100g, type HouseIngredientInput } from '@/lib/schemas/ingredients';
+import {
+  type Allergen,
+  ALLERGEN_LABELS,
+  ALLERGENS,
+  CATEGORIES,
+  type Category,
+  CATEGORY_LABELS,
+  DEFAULT_FERMENTABLE_SHARE,
+  DEFAULT_STEEP_SHARE,
+} from '@/lib/ingredients';
+import { type HouseIngredientInput, houseIngredientSchema, per100g } from '@/lib/schemas/ingredients';
 import { colors, fonts, radius, space, touchTarget } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
-
-import { Button, FormField, FormStatus, Segmented, Select, submitTo, Text } from '../ui';
 
 interface Values {
   name: string;
@@ -89,7 +97,8 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
       {({ values, setFieldValue, setValues, handleSubmit, isSubmitting, errors }) => {
         const grams = values.servingUnit === 'ml' ? parseNumber(values.servingGrams) : parseNumber(values.servingSize);
         const sugar = parseNumber(values.sugarsG);
-        const preview = grams && sugar !== undefined && !Number.isNaN(sugar) && !Number.isNaN(grams) ? per100g(sugar, grams) : null;
+        const preview =
+          grams && sugar !== undefined && !Number.isNaN(sugar) && !Number.isNaN(grams) ? per100g(sugar, grams) : null;
         return (
           <View style={styles.form}>
             <FormStatus error={error} />
@@ -113,10 +122,23 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
             </Text>
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField name="servingSize" label="Serving size" suffix={values.servingUnit === 'ml' ? 'mL' : 'g'} inputMode="decimal" />
+                <FormField
+                  name="servingSize"
+                  label="Serving size"
+                  suffix={values.servingUnit === 'ml' ? 'mL' : 'g'}
+                  inputMode="decimal"
+                />
               </View>
               <View style={styles.cell}>
-                <Segmented label="Serving in" value={values.servingUnit} onChange={(u) => setFieldValue('servingUnit', u)} options={[{ value: 'g', label: 'grams' }, { value: 'ml', label: 'mL' }]} />
+                <Segmented
+                  label="Serving in"
+                  value={values.servingUnit}
+                  onChange={(u) => setFieldValue('servingUnit', u)}
+                  options={[
+                    { value: 'g', label: 'grams' },
+                    { value: 'ml', label: 'mL' },
+                  ]}
+                />
               </View>
               {values.servingUnit === 'ml' ? (
                 <View style={styles.cell}>
@@ -144,16 +166,34 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
                 <FormField name="proteinG" label="Protein per serving" suffix="g" inputMode="decimal" />
               </View>
             </View>
-            {preview !== null && !errors.sugarsG ? <Text variant="muted">= {formatNumber(preview, 2)} g of sugars per 100 g</Text> : null}
+            {preview !== null && !errors.sugarsG ? (
+              <Text variant="muted">= {formatNumber(preview, 2)} g of sugars per 100 g</Text>
+            ) : null}
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField name="fermentableSharePct" label="Share of sugars yeast can ferment" suffix="%" inputMode="decimal" hint="100 % for fruit sugars and sucrose; 0 % for lactose." />
+                <FormField
+                  name="fermentableSharePct"
+                  label="Share of sugars yeast can ferment"
+                  suffix="%"
+                  inputMode="decimal"
+                  hint="100 % for fruit sugars and sucrose; 0 % for lactose."
+                />
               </View>
               <View style={styles.cell}>
-                <FormField name="steepSharePct" label="Share reaching the liquid when steeped and strained" suffix="%" inputMode="decimal" />
+                <FormField
+                  name="steepSharePct"
+                  label="Share reaching the liquid when steeped and strained"
+                  suffix="%"
+                  inputMode="decimal"
+                />
               </View>
               <View style={styles.cell}>
-                <FormField name="costPerKg" label="Cost per kg" inputMode="decimal" hint="Optional, in your currency." />
+                <FormField
+                  name="costPerKg"
+                  label="Cost per kg"
+                  inputMode="decimal"
+                  hint="Optional, in your currency."
+                />
               </View>
             </View>
             <View style={styles.field}>
@@ -167,7 +207,12 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
                       role="checkbox"
                       aria-checked={on}
                       aria-label={ALLERGEN_LABELS[allergen]}
-                      onPress={() => setFieldValue('allergens', on ? values.allergens.filter((a) => a !== allergen) : [...values.allergens, allergen])}
+                      onPress={() =>
+                        setFieldValue(
+                          'allergens',
+                          on ? values.allergens.filter((a) => a !== allergen) : [...values.allergens, allergen],
+                        )
+                      }
                       style={(state) => {
                         const { focused } = state as typeof state & { focused?: boolean };
                         return [styles.chip, on && styles.chipOn, focused && styles.focus];
@@ -194,7 +239,15 @@ const styles = StyleSheet.create({
   cell: { flexGrow: 1, flexBasis: 200 },
   field: { gap: space.xs },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  chip: { minHeight: touchTarget, paddingHorizontal: space.md, justifyContent: 'center', borderRadius: radius.pill, borderWidth: 1.5, borderColor: colors.border, backgroundColor: colors.surface },
+  chip: {
+    minHeight: touchTarget,
+    paddingHorizontal: space.md,
+    justifyContent: 'center',
+    borderRadius: radius.pill,
+    borderWidth: 1.5,
+    borderColor: colors.border,
+    backgroundColor: colors.surface,
+  },
   chipOn: { borderColor: colors.primary, backgroundColor: colors.primary },
   chipText: { fontFamily: fonts.semibold, color: colors.text },
   chipTextOn: { color: colors.textOnPrimary },

@@ -1,14 +1,15 @@
 import { StyleSheet, View } from 'react-native';
 
-import { useIngredientChangesQuery, type Ingredient } from '@/lib/api/ingredients';
+import { Badge, Card, type Column, Table, Text } from '@/components/ui';
+import { type Ingredient, useIngredientChangesQuery } from '@/lib/api/ingredients';
 import { ALLERGEN_LABELS, CATEGORY_LABELS } from '@/lib/ingredients';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
-import { Badge, Card, Table, Text, type Column } from '../ui';
 import { Attachments } from './Attachments';
 
-const value = (v: number | null, unit: string, digits = 1) => (v === null ? 'not measured' : `${formatNumber(v, digits)} ${unit}`);
+const value = (v: number | null, unit: string, digits = 1) =>
+  v === null ? 'not measured' : `${formatNumber(v, digits)} ${unit}`;
 
 interface MeasureRow {
   label: string;
@@ -22,14 +23,21 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
   const measureColumns: Column<MeasureRow>[] = [
     { key: 'measure', header: 'Measure', flex: 2, render: (m) => m.label },
     { key: 'weight', header: 'Weighs', render: (m) => `${formatNumber(m.grams, 1)} g` },
-    { key: 'sugar', header: 'Sugars', render: (m) => (sugarPerG === null ? 'not measured' : `${formatNumber(m.grams * sugarPerG, 2)} g`) },
+    {
+      key: 'sugar',
+      header: 'Sugars',
+      render: (m) => (sugarPerG === null ? 'not measured' : `${formatNumber(m.grams * sugarPerG, 2)} g`),
+    },
   ];
   const p = ingredient.per100g;
   return (
     <View style={styles.wrap}>
       <View style={styles.badges}>
         <Badge label={CATEGORY_LABELS[ingredient.category]} tone="info" />
-        <Badge label={ingredient.scope === 'house' ? 'House ingredient' : 'Dataset (read-only)'} tone={ingredient.scope === 'house' ? 'success' : 'neutral'} />
+        <Badge
+          label={ingredient.scope === 'house' ? 'House ingredient' : 'Dataset (read-only)'}
+          tone={ingredient.scope === 'house' ? 'success' : 'neutral'}
+        />
         {ingredient.archived ? <Badge label="Archived" tone="caution" /> : null}
       </View>
       <View style={styles.grid}>
@@ -37,8 +45,10 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
           <Text variant="subheading">{value(sugarPerG, 'g per gram', 4)}</Text>
           <Text variant="muted">
             {formatNumber(ingredient.fermentableSharePct, 0)} % of it yeast can ferment
-            {ingredient.perGram.fermentableSugarsG !== null ? ` (${formatNumber(ingredient.perGram.fermentableSugarsG, 4)} g per gram)` : ''}. About{' '}
-            {formatNumber(ingredient.steepSharePct, 0)} % reaches the liquid when steeped and strained.
+            {ingredient.perGram.fermentableSugarsG !== null
+              ? ` (${formatNumber(ingredient.perGram.fermentableSugarsG, 4)} g per gram)`
+              : ''}
+            . About {formatNumber(ingredient.steepSharePct, 0)} % reaches the liquid when steeped and strained.
           </Text>
         </Card>
         <Card title="Per 100 g" style={styles.card}>
@@ -60,13 +70,20 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
             <Text variant="muted">None of the US major food allergens recorded. Check the supplier’s label.</Text>
           )}
           <Text variant="small">Source: {ingredient.source}</Text>
-          {ingredient.costPerKg !== null ? <Text variant="small">Cost: {formatNumber(ingredient.costPerKg, 2)} per kg</Text> : null}
+          {ingredient.costPerKg !== null ? (
+            <Text variant="small">Cost: {formatNumber(ingredient.costPerKg, 2)} per kg</Text>
+          ) : null}
           {ingredient.notes ? <Text variant="small">{ingredient.notes}</Text> : null}
         </Card>
       </View>
       {ingredient.measures.length > 0 ? (
         <Card title="Household measures">
-          <Table label="Household measures" columns={measureColumns} rows={ingredient.measures} rowKey={(m) => m.label} />
+          <Table
+            label="Household measures"
+            columns={measureColumns}
+            rows={ingredient.measures}
+            rowKey={(m) => m.label}
+          />
         </Card>
       ) : null}
       {ingredient.scope === 'house' ? <Attachments ingredientId={ingredient.id} canUpload={canEdit} /> : null}
@@ -74,7 +91,8 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
         <Card title="Changes">
           {changes.data?.map((c) => (
             <Text key={c.id} variant="small">
-              {new Date(c.at).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })} · {c.by ?? 'someone'} · {c.action}
+              {new Date(c.at).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })} ·{' '}
+              {c.by ?? 'someone'} · {c.action}
               {c.action === 'updated' ? `: ${Object.keys(c.changes).join(', ')}` : ''}
             </Text>
           ))}

@@ -2,16 +2,27 @@ import { Link } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useIngredientSearchQuery, type Ingredient } from '@/lib/api/ingredients';
+import {
+  Badge,
+  Banner,
+  Button,
+  type Column,
+  EmptyState,
+  Loading,
+  Select,
+  Table,
+  Text,
+  TextField,
+} from '@/components/ui';
+import { type Ingredient, useIngredientSearchQuery } from '@/lib/api/ingredients';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { CATEGORIES, CATEGORY_LABELS, type Category } from '@/lib/ingredients';
+import { CATEGORIES, type Category, CATEGORY_LABELS } from '@/lib/ingredients';
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
-import { Badge, Banner, Button, EmptyState, Loading, Select, Table, Text, TextField, type Column } from '../ui';
-
 const PAGE_SIZE = 25;
-const sugars = (i: Ingredient) => (i.per100g.sugarsG === null ? 'not measured' : `${formatNumber(i.per100g.sugarsG, 1)} g`);
+const sugars = (i: Ingredient) =>
+  i.per100g.sugarsG === null ? 'not measured' : `${formatNumber(i.per100g.sugarsG, 1)} g`;
 
 /** Search the library by word beginnings ("straw rasp"), filter by category, page through the rest. */
 export function IngredientList({ showArchived }: { showArchived: boolean }) {
@@ -34,7 +45,13 @@ export function IngredientList({ showArchived }: { showArchived: boolean }) {
     },
     { key: 'category', header: 'Category', render: (i) => CATEGORY_LABELS[i.category] },
     { key: 'sugars', header: 'Sugars per 100 g', render: (i) => sugars(i) },
-    { key: 'source', header: 'Source', render: (i) => <Badge label={i.scope === 'house' ? 'House' : 'USDA'} tone={i.scope === 'house' ? 'success' : 'neutral'} /> },
+    {
+      key: 'source',
+      header: 'Source',
+      render: (i) => (
+        <Badge label={i.scope === 'house' ? 'House' : 'USDA'} tone={i.scope === 'house' ? 'success' : 'neutral'} />
+      ),
+    },
   ];
   return (
     <View style={styles.wrap}>
@@ -58,13 +75,19 @@ export function IngredientList({ showArchived }: { showArchived: boolean }) {
           setCategory(value);
           setPage(1);
         }}
-        options={[{ value: '' as const, label: 'All' }, ...CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }))]}
+        options={[
+          { value: '' as const, label: 'All' },
+          ...CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] })),
+        ]}
       />
       {search.isError ? <Banner tone="danger">{search.error.message}</Banner> : null}
       {!search.data ? (
         <Loading label="Searching…" />
       ) : search.data.items.length === 0 ? (
-        <EmptyState title="Nothing found" message="Try the beginning of a word, another category, or add a house ingredient." />
+        <EmptyState
+          title="Nothing found"
+          message="Try the beginning of a word, another category, or add a house ingredient."
+        />
       ) : (
         <View style={[styles.wrap, search.isPlaceholderData && styles.stale]}>
           <Text variant="small" aria-live="polite">
@@ -74,8 +97,18 @@ export function IngredientList({ showArchived }: { showArchived: boolean }) {
           <Table label="Ingredients" columns={columns} rows={search.data.items} rowKey={(i) => i.id} />
           {pages > 1 ? (
             <View style={styles.pager}>
-              <Button label="Previous page" variant="secondary" disabled={page <= 1} onPress={() => setPage(page - 1)} />
-              <Button label="Next page" variant="secondary" disabled={page >= pages} onPress={() => setPage(page + 1)} />
+              <Button
+                label="Previous page"
+                variant="secondary"
+                disabled={page <= 1}
+                onPress={() => setPage(page - 1)}
+              />
+              <Button
+                label="Next page"
+                variant="secondary"
+                disabled={page >= pages}
+                onPress={() => setPage(page + 1)}
+              />
             </View>
           ) : null}
         </View>
@@ -87,6 +120,12 @@ export function IngredientList({ showArchived }: { showArchived: boolean }) {
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
   stale: { opacity: 0.6 },
-  link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
+  link: {
+    color: colors.primary,
+    fontFamily: fonts.semibold,
+    fontSize: 17,
+    lineHeight: 24,
+    textDecorationLine: 'underline',
+  },
   pager: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
 });

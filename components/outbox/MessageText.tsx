@@ -1,10 +1,9 @@
 import { Link } from 'expo-router';
 import { Platform, StyleSheet } from 'react-native';
 
+import { Text } from '@/components/ui';
 import { env } from '@/lib/env';
 import { colors, fonts } from '@/lib/theme';
-
-import { Text } from '../ui';
 
 const URL_PATTERN = /(https?:\/\/[^\s]+)/g;
 
@@ -42,5 +41,10 @@ export function MessageText({ text }: { text: string }) {
 
 const styles = StyleSheet.create({
   text: { whiteSpace: 'pre-wrap' } as never,
-  link: { color: colors.primary, fontFamily: fonts.semibold, textDecorationLine: 'underline', wordBreak: 'break-all' } as never,
+  link: {
+    color: colors.primary,
+    fontFamily: fonts.semibold,
+    textDecorationLine: 'underline',
+    wordBreak: 'break-all',
+  } as never,
 });

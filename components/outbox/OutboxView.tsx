@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
+import { Badge, Banner, Button, Card, EmptyState, Loading, Text } from '@/components/ui';
 import { useOutboxQuery } from '@/lib/api/outbox';
 import type { OutboxMessage } from '@/lib/api/types';
 import { colors, fonts, radius, space } from '@/lib/theme';
 
-import { Badge, Banner, Button, Card, EmptyState, Loading, Text } from '../ui';
 import { MessageText } from './MessageText';
 
 const KIND_LABELS: Record<string, string> = { invitation: 'Invitation', 'password-reset': 'Password reset' };
@@ -34,7 +34,12 @@ export function OutboxView() {
       ) : (
         <View role="list" aria-label="Messages" style={styles.list}>
           {messages.map((message) => (
-            <MessageRow key={message.id} message={message} open={message.id === openId} onPress={() => setOpenId(message.id === openId ? null : message.id)} />
+            <MessageRow
+              key={message.id}
+              message={message}
+              open={message.id === openId}
+              onPress={() => setOpenId(message.id === openId ? null : message.id)}
+            />
           ))}
         </View>
       )}

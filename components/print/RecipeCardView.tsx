@@ -1,9 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Text } from '@/components/ui';
 import type { RecipeCard } from '@/lib/recipes/card';
 import { colors, fonts, space } from '@/lib/theme';
-
-import { Text } from '../ui';
 
 const SAFETY_WORDS = { ok: 'OK', caution: 'CAUTION', danger: 'DANGER' } as const;
 
@@ -23,11 +22,16 @@ export function RecipeCardView({ card }: { card: RecipeCard }) {
       ) : (
         <Text style={styles.notApproved}>NOT APPROVED FOR PRODUCTION: development version.</Text>
       )}
-      <View style={[styles.safety, card.safety.level !== 'ok' && styles.safetyAlert]} role={card.safety.level === 'danger' ? 'alert' : undefined}>
+      <View
+        style={[styles.safety, card.safety.level !== 'ok' && styles.safetyAlert]}
+        role={card.safety.level === 'danger' ? 'alert' : undefined}
+      >
         <Text style={styles.safetyLevel}>Safety: {SAFETY_WORDS[card.safety.level]}</Text>
         <Text>{card.safety.headline}</Text>
         <Text>{card.safety.rating}</Text>
-        {card.approval?.overrideReason ? <Text style={styles.safetyLevel}>Approved over a danger finding. Reason: {card.approval.overrideReason}</Text> : null}
+        {card.approval?.overrideReason ? (
+          <Text style={styles.safetyLevel}>Approved over a danger finding. Reason: {card.approval.overrideReason}</Text>
+        ) : null}
         {card.approval?.comment ? <Text>Approval comment: {card.approval.comment}</Text> : null}
       </View>
       <Text>Batch: {card.batch}.</Text>
@@ -62,7 +66,11 @@ export function RecipeCardView({ card }: { card: RecipeCard }) {
         ))}
       </Section>
       <Section title="Allergens">
-        <Text>{card.allergens.length ? card.allergens.join(', ') : 'None of the major allergens recorded for these ingredients.'}</Text>
+        <Text>
+          {card.allergens.length
+            ? card.allergens.join(', ')
+            : 'None of the major allergens recorded for these ingredients.'}
+        </Text>
       </Section>
       <Section title="Cautions">
         {card.cautions.map((c) => (
@@ -71,7 +79,9 @@ export function RecipeCardView({ card }: { card: RecipeCard }) {
           </Text>
         ))}
       </Section>
-      <Text variant="small">Card code {card.code}: open it in Fizzwright at /c/{card.code}</Text>
+      <Text variant="small">
+        Card code {card.code}: open it in Fizzwright at /c/{card.code}
+      </Text>
     </View>
   );
 }
@@ -92,7 +102,14 @@ const styles = StyleSheet.create({
   safety: { borderWidth: 1, borderColor: colors.text, padding: space.sm, gap: space.xs },
   safetyAlert: { borderWidth: 3 },
   safetyLevel: { fontFamily: fonts.bold },
-  card: { backgroundColor: colors.surface, padding: space.xl, gap: space.sm, borderRadius: 12, borderWidth: 1, borderColor: '#E4DED2' },
+  card: {
+    backgroundColor: colors.surface,
+    padding: space.xl,
+    gap: space.sm,
+    borderRadius: 12,
+    borderWidth: 1,
+    borderColor: '#E4DED2',
+  },
   notApproved: { fontFamily: fonts.bold, color: colors.danger, fontSize: 20 },
   section: { gap: space.xs, paddingTop: space.md },
   amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, flexWrap: 'wrap' },

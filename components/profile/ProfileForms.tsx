@@ -1,11 +1,10 @@
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
+import { Banner, Button, FormField, FormStatus, submitTo } from '@/components/ui';
 import { PASSWORD_MIN_LENGTH } from '@/lib/schemas/common';
-import { changePasswordSchema, profileSchema, type ChangePasswordInput, type ProfileInput } from '@/lib/schemas/team';
+import { type ChangePasswordInput, changePasswordSchema, type ProfileInput, profileSchema } from '@/lib/schemas/team';
 import { space } from '@/lib/theme';
-
-import { Banner, Button, FormField, FormStatus, submitTo } from '../ui';
 
 interface FormProps<V> {
   onSubmit: (values: V) => Promise<unknown>;
@@ -15,13 +14,24 @@ interface FormProps<V> {
 
 export function ProfileForm({ name, onSubmit, error, saved }: FormProps<ProfileInput> & { name: string }) {
   return (
-    <Formik<ProfileInput> initialValues={{ name }} enableReinitialize validationSchema={profileSchema} onSubmit={submitTo(onSubmit, { schema: profileSchema })}>
+    <Formik<ProfileInput>
+      initialValues={{ name }}
+      enableReinitialize
+      validationSchema={profileSchema}
+      onSubmit={submitTo(onSubmit, { schema: profileSchema })}
+    >
       {({ handleSubmit, isSubmitting, dirty }) => (
         <View style={styles.form}>
           <FormStatus error={error} />
           {saved && !dirty ? <Banner tone="success">Your name is saved.</Banner> : null}
           <FormField name="name" label="Name" autoComplete="name" />
-          <Button label="Save name" busy={isSubmitting} disabled={!dirty} onPress={() => handleSubmit()} style={styles.submit} />
+          <Button
+            label="Save name"
+            busy={isSubmitting}
+            disabled={!dirty}
+            onPress={() => handleSubmit()}
+            style={styles.submit}
+          />
         </View>
       )}
     </Formik>

@@ -1,14 +1,13 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { Banner, Card, NumberField, Segmented, Text } from '@/components/ui';
 import { useBrixQuery } from '@/lib/api/calculations';
 import { READING_CAUTION } from '@/lib/chemistry/brix';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { brixSchema, type BrixRequest } from '@/lib/schemas/calculations';
+import { type BrixRequest, brixSchema } from '@/lib/schemas/calculations';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
-
-import { Banner, Card, NumberField, Segmented, Text } from '../ui';
 
 type Mode = 'brix' | 'specificGravity';
 
@@ -53,7 +52,8 @@ export function BrixCard() {
       {brix.data && request ? (
         <View style={styles.answer} aria-live="polite">
           <Text>
-            {formatNumber(brix.data.brix, 1)} °Bx · SG {formatNumber(brix.data.specificGravity, 4)} · about {formatNumber(brix.data.sugarGPerL, 0)} g/L of sugar
+            {formatNumber(brix.data.brix, 1)} °Bx · SG {formatNumber(brix.data.specificGravity, 4)} · about{' '}
+            {formatNumber(brix.data.sugarGPerL, 0)} g/L of sugar
           </Text>
         </View>
       ) : null}

@@ -1,15 +1,15 @@
 import { useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
+import { FindingList } from '@/components/calculations/FindingList';
+import { Banner, Button, Card, FormField, Select, Text } from '@/components/ui';
 import { usePrimingQuery } from '@/lib/api/calculations';
 import { SUGARS } from '@/lib/chemistry/sugars';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { toPrimingRequest, type QuickCheckValues } from '@/lib/quick-check';
+import { type QuickCheckValues, toPrimingRequest } from '@/lib/quick-check';
 import { space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
 
-import { FindingList } from '../calculations/FindingList';
-import { Banner, Button, Card, FormField, Select, Text } from '../ui';
 import { sugarOptions } from './QuickCheckInputs';
 
 /** "How much sugar for this fizz?": fills the sugar that reaches the target and shows the alcohol that follows. */
@@ -24,10 +24,22 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
     <Card title="Sugar for a target fizz">
       <View style={styles.row}>
         <View style={styles.cell}>
-          <FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" hint="Kombucha often has 2.5 to 3 volumes: more fizz needs a bottle rated for it." />
+          <FormField
+            name="targetVolumes"
+            label="Target carbonation"
+            suffix="volumes"
+            inputMode="decimal"
+            hint="Kombucha often has 2.5 to 3 volumes: more fizz needs a bottle rated for it."
+          />
         </View>
       </View>
-      <Select compact label="Sugar to use" value={values.primingSugar} options={sugarOptions.filter((o) => o.value !== 'lactose')} onChange={(type) => setFieldValue('primingSugar', type)} />
+      <Select
+        compact
+        label="Sugar to use"
+        value={values.primingSugar}
+        options={sugarOptions.filter((o) => o.value !== 'lactose')}
+        onChange={(type) => setFieldValue('primingSugar', type)}
+      />
       {errors.targetVolumes ? null : priming.isError ? <Banner tone="danger">{priming.error.message}</Banner> : null}
       {answer && request ? (
         <View style={styles.answer} aria-live="polite">
@@ -37,13 +49,18 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
               : `At most ${formatNumber(answer.safeSugarG, 2)} g of ${sugarName} per bottle: the target is out of reach`}
           </Text>
           <Text variant="muted">
-            {answer.targetReachable ? `${formatNumber(answer.sugarGPerL, 1)} g/L. It also makes` : `The target would take ${formatNumber(answer.sugarG, 2)} g (${formatNumber(answer.sugarGPerL, 1)} g/L) and make`} +
-            {formatNumber(answer.addedAbvPercent, 2)} % ABV ({formatNumber(answer.totalAbvPercent, 2)} % in all): in a sealed bottle the sugar that makes the fizz makes alcohol too.
+            {answer.targetReachable
+              ? `${formatNumber(answer.sugarGPerL, 1)} g/L. It also makes`
+              : `The target would take ${formatNumber(answer.sugarG, 2)} g (${formatNumber(answer.sugarGPerL, 1)} g/L) and make`}{' '}
+            +{formatNumber(answer.addedAbvPercent, 2)} % ABV ({formatNumber(answer.totalAbvPercent, 2)} % in all): in a
+            sealed bottle the sugar that makes the fizz makes alcohol too.
           </Text>
           {answer.maxSafeSugarG !== null ? (
             <Text variant="muted">
-              The most that is safe at {formatTemp(answer.checkedTempC, units)} in the worst case ({formatNumber(answer.ratingShare * 100, 0)} % of the rating, below the alcohol limit): {formatNumber(answer.maxSafeSugarG, 2)} g (
-              {formatPressure(answer.worstGaugeBarAtHighest, units)} with the amount above).
+              The most that is safe at {formatTemp(answer.checkedTempC, units)} in the worst case (
+              {formatNumber(answer.ratingShare * 100, 0)} % of the rating, below the alcohol limit):{' '}
+              {formatNumber(answer.maxSafeSugarG, 2)} g ({formatPressure(answer.worstGaugeBarAtHighest, units)} with the
+              amount above).
             </Text>
           ) : null}
           <FindingList findings={answer.findings} />
@@ -52,7 +69,11 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
             variant="secondary"
             style={styles.left}
             // Never more than the most that is safe, and rounded down so rounding cannot cross it.
-            onPress={() => setFieldValue('sugars', [{ type: values.primingSugar, grams: String(Math.floor(answer.safeSugarG * 100) / 100) }])}
+            onPress={() =>
+              setFieldValue('sugars', [
+                { type: values.primingSugar, grams: String(Math.floor(answer.safeSugarG * 100) / 100) },
+              ])
+            }
           />
         </View>
       ) : null}

@@ -2,15 +2,21 @@ import { Formik, setIn, useFormikContext } from 'formik';
 import { useEffect, useRef } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { SummaryStrip } from '@/components/calculations/SummaryStrip';
+import { Banner, Card, Loading } from '@/components/ui';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { useCarbonationQuery } from '@/lib/api/calculations';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { CHART_TEMPERATURES_C, convertQuickCheckValues, initialQuickCheckValues, toCarbonationRequest, type QuickCheckValues } from '@/lib/quick-check';
+import {
+  CHART_TEMPERATURES_C,
+  convertQuickCheckValues,
+  initialQuickCheckValues,
+  type QuickCheckValues,
+  toCarbonationRequest,
+} from '@/lib/quick-check';
 import { breakpoints, space } from '@/lib/theme';
 import type { UnitSystem } from '@/lib/units';
 
-import { SummaryStrip } from '../calculations/SummaryStrip';
-import { Banner, Card, Loading } from '../ui';
 import { BrixCard } from './BrixCard';
 import { PrimingHelper } from './PrimingHelper';
 import { QuickCheckInputs } from './QuickCheckInputs';
@@ -37,7 +43,10 @@ export function QuickCheck({ formats, units, limitPercent }: Props) {
       onSubmit={() => undefined}
       validate={(values) => {
         const { errors } = toCarbonationRequest(values, units);
-        return Object.entries(errors).reduce<Record<string, unknown>>((all, [path, message]) => setIn(all, path, message), {});
+        return Object.entries(errors).reduce<Record<string, unknown>>(
+          (all, [path, message]) => setIn(all, path, message),
+          {},
+        );
       }}
       validateOnMount
     >
@@ -95,14 +104,33 @@ function PhoneSummary({ units }: { units: UnitSystem }) {
 
 function LiveResults({ units, limitPercent }: { units: UnitSystem; limitPercent: number }) {
   const { request, answer, chart } = useQuickCheckAnswer(units);
-  if (answer.isError) return <Banner tone="danger" title="Could not work this out">{answer.error.message}</Banner>;
+  if (answer.isError)
+    return (
+      <Banner tone="danger" title="Could not work this out">
+        {answer.error.message}
+      </Banner>
+    );
   if (!answer.data) {
-    return request ? <Loading label="Working it out…" /> : <Card title="Results"><Banner tone="info">Fill in the bottle and sugar to see the numbers.</Banner></Card>;
+    return request ? (
+      <Loading label="Working it out…" />
+    ) : (
+      <Card title="Results">
+        <Banner tone="info">Fill in the bottle and sugar to see the numbers.</Banner>
+      </Card>
+    );
   }
   return (
     <View style={{ opacity: answer.isPlaceholderData || !request ? 0.6 : 1 }}>
-      {!request ? <Banner tone="caution">Some inputs need attention: these results are for the last valid values.</Banner> : null}
-      <QuickCheckResults answer={answer.data} chart={chart.data} units={units} limitPercent={limitPercent} temperatureNames={TEMPERATURE_NAMES} />
+      {!request ? (
+        <Banner tone="caution">Some inputs need attention: these results are for the last valid values.</Banner>
+      ) : null}
+      <QuickCheckResults
+        answer={answer.data}
+        chart={chart.data}
+        units={units}
+        limitPercent={limitPercent}
+        temperatureNames={TEMPERATURE_NAMES}
+      />
     </View>
   );
 }

@@ -1,13 +1,12 @@
 import { useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
+import { Button, Card, FormField, Segmented, Select, Text } from '@/components/ui';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { SUGAR_TYPES, SUGARS } from '@/lib/chemistry/sugars';
 import type { QuickCheckValues } from '@/lib/quick-check';
 import { space } from '@/lib/theme';
 import { convertUnit, displayUnits, formatPressure, unitLabels, type UnitSystem } from '@/lib/units';
-
-import { Button, Card, FormField, Segmented, Select, Text } from '../ui';
 
 const SHORT_SUGAR_LABELS: Record<(typeof SUGAR_TYPES)[number], string> = {
   sucrose: 'Sucrose',
@@ -27,12 +26,18 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
   const volumeUnit = unitLabels[u.smallVolume];
   const tempUnit = unitLabels[u.temperature];
   const chosen = formats.find((f) => String(f.id) === values.bottleFormatId);
-  const toDisplay = (ml: number) => String(Number(convertUnit(ml, 'ml', u.smallVolume).toFixed(units === 'us' ? 2 : 0)));
+  const toDisplay = (ml: number) =>
+    String(Number(convertUnit(ml, 'ml', u.smallVolume).toFixed(units === 'us' ? 2 : 0)));
 
   const chooseFormat = (id: string) => {
     const format = formats.find((f) => String(f.id) === id);
     if (!format) return setFieldValue('bottleFormatId', '');
-    return setValues({ ...values, bottleFormatId: id, liquid: toDisplay(format.liquidMl), headspace: toDisplay(format.headspaceMl) });
+    return setValues({
+      ...values,
+      bottleFormatId: id,
+      liquid: toDisplay(format.liquidMl),
+      headspace: toDisplay(format.headspaceMl),
+    });
   };
 
   return (
@@ -43,7 +48,10 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
           label="Bottle format"
           value={values.bottleFormatId}
           onChange={chooseFormat}
-          options={[...formats.map((f) => ({ value: String(f.id), label: f.name })), { value: '', label: 'Other bottle' }]}
+          options={[
+            ...formats.map((f) => ({ value: String(f.id), label: f.name })),
+            { value: '', label: 'Other bottle' },
+          ]}
         />
         {chosen ? (
           <Text variant="small">
@@ -55,7 +63,13 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
             <FormField name="liquid" label="Liquid per bottle" suffix={volumeUnit} inputMode="decimal" />
           </View>
           <View style={styles.cell}>
-            <FormField name="headspace" label="Headspace" suffix={volumeUnit} inputMode="decimal" hint="Gas space under the cap." />
+            <FormField
+              name="headspace"
+              label="Headspace"
+              suffix={volumeUnit}
+              inputMode="decimal"
+              hint="Gas space under the cap."
+            />
           </View>
         </View>
         {chosen ? null : (
@@ -72,17 +86,33 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
       <Card title="Sugar in each bottle">
         {values.sugars.map((sugar, index) => (
           <View key={index} style={styles.sugar}>
-            <Select compact label={`Sugar ${index + 1}`} value={sugar.type} options={sugarOptions} onChange={(type) => setFieldValue(`sugars.${index}.type`, type)} />
+            <Select
+              compact
+              label={`Sugar ${index + 1}`}
+              value={sugar.type}
+              options={sugarOptions}
+              onChange={(type) => setFieldValue(`sugars.${index}.type`, type)}
+            />
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField name={`sugars.${index}.grams`} label={`Grams of ${SUGARS[sugar.type].label.toLowerCase()}`} suffix="g" inputMode="decimal" />
+                <FormField
+                  name={`sugars.${index}.grams`}
+                  label={`Grams of ${SUGARS[sugar.type].label.toLowerCase()}`}
+                  suffix="g"
+                  inputMode="decimal"
+                />
               </View>
               {values.sugars.length > 1 ? (
                 <Button
                   label="Remove"
                   accessibleName={`Remove sugar ${index + 1}`}
                   variant="quiet"
-                  onPress={() => setFieldValue('sugars', values.sugars.filter((_, i) => i !== index))}
+                  onPress={() =>
+                    setFieldValue(
+                      'sugars',
+                      values.sugars.filter((_, i) => i !== index),
+                    )
+                  }
                   style={styles.remove}
                 />
               ) : null}
@@ -90,7 +120,12 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
           </View>
         ))}
         {values.sugars.length < 6 ? (
-          <Button label="Add another sugar" variant="secondary" onPress={() => setFieldValue('sugars', [...values.sugars, { type: 'sucrose', grams: '' }])} style={styles.left} />
+          <Button
+            label="Add another sugar"
+            variant="secondary"
+            onPress={() => setFieldValue('sugars', [...values.sugars, { type: 'sucrose', grams: '' }])}
+            style={styles.left}
+          />
         ) : null}
       </Card>
 
@@ -107,7 +142,13 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
         {values.residualMode === 'volumes' ? (
           <FormField name="residualVolumes" label="Residual CO2" suffix="volumes" inputMode="decimal" />
         ) : (
-          <FormField name="lastOpenTemp" label="Temperature when it was last open" suffix={tempUnit} inputMode="decimal" hint="Estimated as saturated with CO2 at that temperature." />
+          <FormField
+            name="lastOpenTemp"
+            label="Temperature when it was last open"
+            suffix={tempUnit}
+            inputMode="decimal"
+            hint="Estimated as saturated with CO2 at that temperature."
+          />
         )}
         <View style={styles.row}>
           <View style={styles.cell}>
@@ -128,7 +169,13 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
             <FormField name="coldTemp" label="Cold store" suffix={tempUnit} inputMode="decimal" />
           </View>
           <View style={styles.cell}>
-            <FormField name="highestTemp" label="Highest it may meet" suffix={tempUnit} inputMode="decimal" hint="A hot van or shelf." />
+            <FormField
+              name="highestTemp"
+              label="Highest it may meet"
+              suffix={tempUnit}
+              inputMode="decimal"
+              hint="A hot van or shelf."
+            />
           </View>
         </View>
         <Segmented

@@ -1,15 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Cautions } from '@/components/calculations/Cautions';
+import { FindingList } from '@/components/calculations/FindingList';
+import { PressureChart } from '@/components/calculations/PressureChart';
+import { Card, type Column, Table, Text } from '@/components/ui';
+import type { CarbonationAnswer } from '@/lib/api/calculations';
 import { ratingLevel } from '@/lib/chemistry/carbonation';
 import { WARM_DAY_NAME } from '@/lib/recipes/evaluate';
-import type { CarbonationAnswer } from '@/lib/api/calculations';
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatSmallVolume, formatTemp, type UnitSystem } from '@/lib/units';
-
-import { Cautions } from '../calculations/Cautions';
-import { FindingList } from '../calculations/FindingList';
-import { PressureChart } from '../calculations/PressureChart';
-import { Card, Table, Text, type Column } from '../ui';
 
 interface Props {
   answer: CarbonationAnswer;
@@ -20,7 +19,16 @@ interface Props {
   temperatureNames: string[];
 }
 
-type Row = { name: string; tempC: number; worst: number; expected: number; dissolved: number; headspaceMl: number; full: boolean; over: boolean };
+type Row = {
+  name: string;
+  tempC: number;
+  worst: number;
+  expected: number;
+  dissolved: number;
+  headspaceMl: number;
+  full: boolean;
+  over: boolean;
+};
 
 /** What a Quick check answers: sugar, fizz, alcohol, pressure at each temperature, findings and cautions. */
 export function QuickCheckResults({ answer, chart, units, limitPercent, temperatureNames }: Props) {
@@ -40,7 +48,18 @@ export function QuickCheckResults({ answer, chart, units, limitPercent, temperat
   }));
   const columns: Column<Row>[] = [
     { key: 'where', header: 'Where', flex: 1.2, render: (r) => `${r.name} · ${formatTemp(r.tempC, units)}` },
-    { key: 'worst', header: 'Worst case', flex: 1.3, render: (r) => <Text style={r.over ? styles.over : undefined}>{r.full ? 'bottle full: no gas space' : `${formatPressure(r.worst, units)}${r.over ? ' · at or over rating' : ''}`}</Text> },
+    {
+      key: 'worst',
+      header: 'Worst case',
+      flex: 1.3,
+      render: (r) => (
+        <Text style={r.over ? styles.over : undefined}>
+          {r.full
+            ? 'bottle full: no gas space'
+            : `${formatPressure(r.worst, units)}${r.over ? ' · at or over rating' : ''}`}
+        </Text>
+      ),
+    },
     { key: 'expected', header: 'Expected', flex: 1.3, render: (r) => formatPressure(r.expected, units) },
     { key: 'dissolved', header: 'In the liquid', render: (r) => `${formatNumber(r.dissolved, 2)} vol` },
     { key: 'headspace', header: 'Headspace', render: (r) => formatSmallVolume(r.headspaceMl, units) },
@@ -49,13 +68,21 @@ export function QuickCheckResults({ answer, chart, units, limitPercent, temperat
     <View style={styles.column}>
       <Card title="In each bottle">
         <View style={styles.figures}>
-          <Figure label="Fermentable sugar" value={`${formatNumber(sugar.fermentableG, 2)} g`} detail={`${formatNumber(sugar.fermentableGPerL, 1)} g/L${sugar.sweetOnlyG > 0 ? ` · ${formatNumber(sugar.sweetOnlyG, 1)} g sweetness only` : ''}`} />
+          <Figure
+            label="Fermentable sugar"
+            value={`${formatNumber(sugar.fermentableG, 2)} g`}
+            detail={`${formatNumber(sugar.fermentableGPerL, 1)} g/L${sugar.sweetOnlyG > 0 ? ` · ${formatNumber(sugar.sweetOnlyG, 1)} g sweetness only` : ''}`}
+          />
           <Figure
             label="Carbonation, worst case"
             value={`${formatNumber(cases.worst.co2.totalVolumes, 2)} volumes`}
             detail={`${formatNumber(cases.worst.co2.residualVolumes, 2)} already in the base + ${formatNumber(cases.worst.co2.fromSugarVolumes, 2)} from sugar`}
           />
-          <Figure label="Carbonation, expected" value={`${formatNumber(cases.expected.co2.totalVolumes, 2)} volumes`} detail="95 % of the sugar's theoretical yield" />
+          <Figure
+            label="Carbonation, expected"
+            value={`${formatNumber(cases.expected.co2.totalVolumes, 2)} volumes`}
+            detail="95 % of the sugar's theoretical yield"
+          />
           <Figure
             label="Alcohol, worst case"
             value={`${formatNumber(cases.worst.alcohol.totalAbvPercent, 2)} % ABV`}
@@ -67,7 +94,12 @@ export function QuickCheckResults({ answer, chart, units, limitPercent, temperat
         <FindingList findings={answer.findings} />
       </Card>
       <Card title="Pressure in the bottle">
-        <Table label="Pressure at each temperature" columns={columns} rows={rows} rowKey={(r) => `${r.name}-${r.tempC}`} />
+        <Table
+          label="Pressure at each temperature"
+          columns={columns}
+          rows={rows}
+          rowKey={(r) => `${r.name}-${r.tempC}`}
+        />
         {chart ? (
           <PressureChart
             units={units}

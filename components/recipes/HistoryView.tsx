@@ -1,10 +1,9 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { Button, Card, FormStatus, Loading, Text } from '@/components/ui';
 import { useRecipeDiffQuery, useRecipeVersionsQuery, useRestoreVersionMutation } from '@/lib/api/recipes';
 import { space } from '@/lib/theme';
-
-import { Button, Card, FormStatus, Loading, Text } from '../ui';
 
 /** Every saved version; compare any with the newest, and bring an old one back as a new version. */
 export function HistoryView({ recipeId, current, canEdit }: { recipeId: number; current: number; canEdit: boolean }) {
@@ -30,8 +29,21 @@ export function HistoryView({ recipeId, current, canEdit }: { recipeId: number; 
             </View>
             {v.number !== current ? (
               <>
-                <Button label="Compare" accessibleName={`Compare version ${v.number} with the current one`} variant="secondary" onPress={() => setCompare(v.number)} />
-                {canEdit ? <Button label="Restore" accessibleName={`Restore version ${v.number}`} variant="quiet" busy={restore.isPending && restore.variables === v.number} onPress={() => restore.mutate(v.number)} /> : null}
+                <Button
+                  label="Compare"
+                  accessibleName={`Compare version ${v.number} with the current one`}
+                  variant="secondary"
+                  onPress={() => setCompare(v.number)}
+                />
+                {canEdit ? (
+                  <Button
+                    label="Restore"
+                    accessibleName={`Restore version ${v.number}`}
+                    variant="quiet"
+                    busy={restore.isPending && restore.variables === v.number}
+                    onPress={() => restore.mutate(v.number)}
+                  />
+                ) : null}
               </>
             ) : null}
           </View>

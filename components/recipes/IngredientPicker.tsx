@@ -1,13 +1,12 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useIngredientSearchQuery, type Ingredient } from '@/lib/api/ingredients';
+import { Button, Text, TextField } from '@/components/ui';
+import { type Ingredient, useIngredientSearchQuery } from '@/lib/api/ingredients';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { CATEGORY_LABELS } from '@/lib/ingredients';
 import { colors, radius, space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
-
-import { Button, Text, TextField } from '../ui';
 
 /** Finds an ingredient in the library by word beginnings and adds it to the recipe. */
 export function IngredientPicker({ onPick, exclude }: { onPick: (ingredient: Ingredient) => void; exclude: number[] }) {
@@ -17,13 +16,23 @@ export function IngredientPicker({ onPick, exclude }: { onPick: (ingredient: Ing
   const items = q.trim() ? (search.data?.items ?? []).filter((i) => !exclude.includes(i.id)) : [];
   return (
     <View style={styles.wrap}>
-      <TextField label="Add an ingredient" value={text} onChangeText={setText} placeholder="e.g. rhubarb, ginger, shortbread" autoCapitalize="none" autoCorrect={false} />
+      <TextField
+        label="Add an ingredient"
+        value={text}
+        onChangeText={setText}
+        placeholder="e.g. rhubarb, ginger, shortbread"
+        autoCapitalize="none"
+        autoCorrect={false}
+      />
       {items.map((ingredient) => (
         <View key={ingredient.id} style={styles.row}>
           <View style={styles.text}>
             <Text>{ingredient.name}</Text>
             <Text variant="small">
-              {CATEGORY_LABELS[ingredient.category]} · {ingredient.per100g.sugarsG === null ? 'sugars not measured' : `${formatNumber(ingredient.per100g.sugarsG, 1)} g sugars per 100 g`}
+              {CATEGORY_LABELS[ingredient.category]} ·{' '}
+              {ingredient.per100g.sugarsG === null
+                ? 'sugars not measured'
+                : `${formatNumber(ingredient.per100g.sugarsG, 1)} g sugars per 100 g`}
               {ingredient.scope === 'house' ? ' · house' : ''}
             </Text>
           </View>
@@ -44,6 +53,13 @@ export function IngredientPicker({ onPick, exclude }: { onPick: (ingredient: Ing
 
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, padding: space.sm, borderRadius: radius.md, backgroundColor: colors.surfaceMuted },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.sm,
+    padding: space.sm,
+    borderRadius: radius.md,
+    backgroundColor: colors.surfaceMuted,
+  },
   text: { flex: 1 },
 });

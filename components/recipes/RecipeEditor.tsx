@@ -1,22 +1,22 @@
 import { Formik, useFormikContext } from 'formik';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { SummaryStrip } from '@/components/calculations/SummaryStrip';
+import { sugarOptions } from '@/components/quick-check/QuickCheckInputs';
+import { Badge, Banner, Button, Card, FormField, Loading, Segmented, Select, Text } from '@/components/ui';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { usePrimingQuery } from '@/lib/api/calculations';
 import { ApiError } from '@/lib/api/client';
-import { useRecipeEvaluationQuery, type RecipeDetail } from '@/lib/api/recipes';
+import { type RecipeDetail, useRecipeEvaluationQuery } from '@/lib/api/recipes';
 import { SUGARS } from '@/lib/chemistry/sugars';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { targetAdvice } from '@/lib/recipes/target';
-import { toContent, toFormValues, type RecipeFormValues } from '@/lib/recipes/form';
+import { type RecipeFormValues, toContent, toFormValues } from '@/lib/recipes/form';
 import { processStages } from '@/lib/recipes/stages';
+import { targetAdvice } from '@/lib/recipes/target';
 import { AMOUNT_UNIT_LABELS, METHOD_LABELS, METHODS } from '@/lib/schemas/recipes';
 import { breakpoints, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
-import { SummaryStrip } from '../calculations/SummaryStrip';
-import { sugarOptions } from '../quick-check/QuickCheckInputs';
-import { Badge, Banner, Button, Card, FormField, Loading, Segmented, Select, Text } from '../ui';
 import { IngredientPicker } from './IngredientPicker';
 import { RecipeResults } from './RecipeResults';
 
@@ -26,7 +26,12 @@ interface Props {
   units: UnitSystem;
   limitPercent: number;
   canEdit: boolean;
-  onSave: (values: { name: string; flavourNotes: string; content: NonNullable<ReturnType<typeof toContent>['content']>; baseVersion: number }) => Promise<unknown>;
+  onSave: (values: {
+    name: string;
+    flavourNotes: string;
+    content: NonNullable<ReturnType<typeof toContent>['content']>;
+    baseVersion: number;
+  }) => Promise<unknown>;
   saveError: unknown;
   onReload: () => void;
 }
@@ -40,10 +45,24 @@ export function RecipeEditor({ recipe, formats, units, limitPercent, canEdit, on
       validate={(values) => toContent(values).errors}
       onSubmit={async (values) => {
         const { content } = toContent(values);
-        if (content) await onSave({ name: values.name, flavourNotes: values.flavourNotes, content, baseVersion: recipe.currentVersion }).catch(() => undefined);
+        if (content)
+          await onSave({
+            name: values.name,
+            flavourNotes: values.flavourNotes,
+            content,
+            baseVersion: recipe.currentVersion,
+          }).catch(() => undefined);
       }}
     >
-      <Layout recipe={recipe} formats={formats} units={units} limitPercent={limitPercent} canEdit={canEdit} saveError={saveError} onReload={onReload} />
+      <Layout
+        recipe={recipe}
+        formats={formats}
+        units={units}
+        limitPercent={limitPercent}
+        canEdit={canEdit}
+        saveError={saveError}
+        onReload={onReload}
+      />
     </Formik>
   );
 }
@@ -62,22 +81,53 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
       {stale ? (
         <Banner tone="caution" title="Someone else saved this recipe">
           <Text>{(saveError as ApiError).message}</Text>
-          <Button label="Load their version (drops your changes)" variant="secondary" onPress={() => { resetForm(); onReload(); }} style={styles.left} />
+          <Button
+            label="Load their version (drops your changes)"
+            variant="secondary"
+            onPress={() => {
+              resetForm();
+              onReload();
+            }}
+            style={styles.left}
+          />
         </Banner>
       ) : saveError instanceof Error ? (
         <Banner tone="danger">{saveError.message}</Banner>
       ) : null}
       {canEdit ? (
         <View style={styles.saveBar}>
-          <Badge label={`Version ${recipe.currentVersion}${dirty ? ' · unsaved changes' : ''}`} tone={dirty ? 'caution' : 'neutral'} />
-          <Button label="Save as new version" busy={isSubmitting} disabled={!dirty || !content} onPress={() => handleSubmit()} />
+          <Badge
+            label={`Version ${recipe.currentVersion}${dirty ? ' · unsaved changes' : ''}`}
+            tone={dirty ? 'caution' : 'neutral'}
+          />
+          <Button
+            label="Save as new version"
+            busy={isSubmitting}
+            disabled={!dirty || !content}
+            onPress={() => handleSubmit()}
+          />
         </View>
       ) : null}
       {!wide && evaluation.data ? <SummaryStrip result={evaluation.data.carbonation} units={units} /> : null}
       <View style={[styles.layout, wide && styles.layoutWide]}>
         <View style={[styles.column, wide && styles.inputs]}>
           <Parts formats={formats} canEdit={canEdit} />
-          {format && content ? <TargetHelper units={units} content={content} liquidMl={format.liquidMl} headspaceMl={format.headspaceMl} rating={format.maxWorkingPressureBar} currentAddedGPerL={evaluation.data ? (evaluation.data.carbonation.sugar.addedG / format.liquidMl) * 1000 - content.baseBrew.residualSugarGPerL : null} fermentableGPerL={evaluation.data?.carbonation.sugar.fermentableGPerL ?? null} /> : null}
+          {format && content ? (
+            <TargetHelper
+              units={units}
+              content={content}
+              liquidMl={format.liquidMl}
+              headspaceMl={format.headspaceMl}
+              rating={format.maxWorkingPressureBar}
+              currentAddedGPerL={
+                evaluation.data
+                  ? (evaluation.data.carbonation.sugar.addedG / format.liquidMl) * 1000 -
+                    content.baseBrew.residualSugarGPerL
+                  : null
+              }
+              fermentableGPerL={evaluation.data?.carbonation.sugar.fermentableGPerL ?? null}
+            />
+          ) : null}
           {content ? (
             <Card title="Process">
               {processStages(content).map((stage, i) => (
@@ -92,17 +142,26 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
         </View>
         <View style={[styles.column, wide && styles.results]}>
           {evaluation.isError ? <Banner tone="danger">{evaluation.error.message}</Banner> : null}
-          {!content ? <Banner tone="caution">Some parts need attention: the numbers are for the last complete recipe.</Banner> : null}
+          {!content ? (
+            <Banner tone="caution">Some parts need attention: the numbers are for the last complete recipe.</Banner>
+          ) : null}
           {evaluation.data ? (
             <View style={{ opacity: evaluation.isPlaceholderData ? 0.6 : 1 }}>
-              <RecipeResults evaluation={evaluation.data} units={units} limitPercent={limitPercent} bottleName={format?.name ?? 'the bottle'} />
+              <RecipeResults
+                evaluation={evaluation.data}
+                units={units}
+                limitPercent={limitPercent}
+                bottleName={format?.name ?? 'the bottle'}
+              />
             </View>
           ) : (
             <Loading label="Working out the numbers…" />
           )}
         </View>
       </View>
-      <Text variant="small">Last saved by {recipe.savedBy ?? 'someone'} on {new Date(recipe.savedAt).toLocaleString()}.</Text>
+      <Text variant="small">
+        Last saved by {recipe.savedBy ?? 'someone'} on {new Date(recipe.savedAt).toLocaleString()}.
+      </Text>
     </View>
   );
 }
@@ -115,16 +174,38 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
       <Card title="Recipe">
         <FormField name="name" label="Recipe name" editable={canEdit} />
         <FormField name="flavourNotes" label="Flavour notes" multiline editable={canEdit} />
-        <Select compact label="Bottle format" value={values.bottleFormatId} options={formats.map((f) => ({ value: String(f.id), label: f.name }))} onChange={(id) => setFieldValue('bottleFormatId', id)} />
+        <Select
+          compact
+          label="Bottle format"
+          value={values.bottleFormatId}
+          options={formats.map((f) => ({ value: String(f.id), label: f.name }))}
+          onChange={(id) => setFieldValue('bottleFormatId', id)}
+        />
       </Card>
       <Card title="Base brew">
         <View style={styles.row}>
-          <View style={styles.cell}><FormField name="base.name" label="Base" /></View>
-          <View style={styles.cell}><FormField name="base.residualSugarGPerL" label="Residual sugar" suffix="g/L" inputMode="decimal" /></View>
-          <View style={styles.cell}><FormField name="base.abvPercent" label="Alcohol" suffix="% ABV" inputMode="decimal" /></View>
-          <View style={styles.cell}><FormField name="base.ph" label="pH" inputMode="decimal" hint="4.2 or below before flavouring." /></View>
+          <View style={styles.cell}>
+            <FormField name="base.name" label="Base" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="base.residualSugarGPerL" label="Residual sugar" suffix="g/L" inputMode="decimal" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="base.abvPercent" label="Alcohol" suffix="% ABV" inputMode="decimal" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="base.ph" label="pH" inputMode="decimal" hint="4.2 or below before flavouring." />
+          </View>
         </View>
-        <Segmented label="CO2 already in the base" value={values.base.residualMode} onChange={(m) => setFieldValue('base.residualMode', m)} options={[{ value: 'last-open', label: 'From temperature' }, { value: 'volumes', label: 'Known volumes' }]} />
+        <Segmented
+          label="CO2 already in the base"
+          value={values.base.residualMode}
+          onChange={(m) => setFieldValue('base.residualMode', m)}
+          options={[
+            { value: 'last-open', label: 'From temperature' },
+            { value: 'volumes', label: 'Known volumes' },
+          ]}
+        />
         {values.base.residualMode === 'volumes' ? (
           <FormField name="base.residualCo2Volumes" label="Residual CO2" suffix="volumes" inputMode="decimal" />
         ) : (
@@ -132,55 +213,137 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
         )}
       </Card>
       <Card title="How the flavour goes in">
-        <Segmented label="Method" value={values.method} onChange={(m) => setFieldValue('method', m)} options={METHODS.map((m) => ({ value: m, label: METHOD_LABELS[m] }))} />
+        <Segmented
+          label="Method"
+          value={values.method}
+          onChange={(m) => setFieldValue('method', m)}
+          options={METHODS.map((m) => ({ value: m, label: METHOD_LABELS[m] }))}
+        />
         {steep ? (
           <View style={styles.row}>
-            <View style={styles.cell}><FormField name="steepHours" label="Steep for" suffix="h" inputMode="decimal" /></View>
-            <View style={styles.cell}><FormField name="steepTempC" label="Steep at" suffix="°C" inputMode="decimal" /></View>
-            <View style={styles.cell}><FormField name="strainLossPct" label="Liquid lost when straining" suffix="%" inputMode="decimal" /></View>
+            <View style={styles.cell}>
+              <FormField name="steepHours" label="Steep for" suffix="h" inputMode="decimal" />
+            </View>
+            <View style={styles.cell}>
+              <FormField name="steepTempC" label="Steep at" suffix="°C" inputMode="decimal" />
+            </View>
+            <View style={styles.cell}>
+              <FormField name="strainLossPct" label="Liquid lost when straining" suffix="%" inputMode="decimal" />
+            </View>
           </View>
         ) : (
-          <Banner tone="caution">Solids stay in the bottle: pressure keeps rising as long as sugar remains. The worst case applies.</Banner>
+          <Banner tone="caution">
+            Solids stay in the bottle: pressure keeps rising as long as sugar remains. The worst case applies.
+          </Banner>
         )}
         <View style={styles.row}>
-          <View style={styles.cell}><FormField name="carbonateHours" label="Carbonate for" suffix="h" inputMode="decimal" /></View>
-          <View style={styles.cell}><FormField name="carbonateTempC" label="Carbonate at" suffix="°C" inputMode="decimal" /></View>
-          <View style={styles.cell}><FormField name="coldStoreTempC" label="Cold store at" suffix="°C" inputMode="decimal" /></View>
-          <View style={styles.cell}><FormField name="highestTempC" label="Highest it may meet" suffix="°C" inputMode="decimal" /></View>
+          <View style={styles.cell}>
+            <FormField name="carbonateHours" label="Carbonate for" suffix="h" inputMode="decimal" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="carbonateTempC" label="Carbonate at" suffix="°C" inputMode="decimal" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="coldStoreTempC" label="Cold store at" suffix="°C" inputMode="decimal" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="highestTempC" label="Highest it may meet" suffix="°C" inputMode="decimal" />
+          </View>
         </View>
       </Card>
       <Card title="Ingredients">
-        {values.lines.length === 0 ? <Text variant="muted">No ingredients yet: add the first from the library.</Text> : null}
+        {values.lines.length === 0 ? (
+          <Text variant="muted">No ingredients yet: add the first from the library.</Text>
+        ) : null}
         {values.lines.map((line, index) => (
           <View key={line.ingredientId} style={styles.line}>
             <Text style={styles.lineName}>{line.name}</Text>
             <View style={styles.row}>
-              <View style={styles.cell}><FormField name={`lines.${index}.amount`} label={`Amount of ${line.name}`} inputMode="decimal" /></View>
-              <View style={styles.wideCell}>
-                <Select compact label="Unit" value={line.unit} options={(Object.keys(AMOUNT_UNIT_LABELS) as (keyof typeof AMOUNT_UNIT_LABELS)[]).map((u) => ({ value: u, label: AMOUNT_UNIT_LABELS[u] }))} onChange={(u) => setFieldValue(`lines.${index}.unit`, u)} />
+              <View style={styles.cell}>
+                <FormField name={`lines.${index}.amount`} label={`Amount of ${line.name}`} inputMode="decimal" />
               </View>
-              {steep ? <View style={styles.cell}><FormField name={`lines.${index}.extractionPct`} label="Sugar reaching the liquid" suffix="%" inputMode="decimal" /></View> : null}
+              <View style={styles.wideCell}>
+                <Select
+                  compact
+                  label="Unit"
+                  value={line.unit}
+                  options={(Object.keys(AMOUNT_UNIT_LABELS) as (keyof typeof AMOUNT_UNIT_LABELS)[]).map((u) => ({
+                    value: u,
+                    label: AMOUNT_UNIT_LABELS[u],
+                  }))}
+                  onChange={(u) => setFieldValue(`lines.${index}.unit`, u)}
+                />
+              </View>
+              {steep ? (
+                <View style={styles.cell}>
+                  <FormField
+                    name={`lines.${index}.extractionPct`}
+                    label="Sugar reaching the liquid"
+                    suffix="%"
+                    inputMode="decimal"
+                  />
+                </View>
+              ) : null}
             </View>
-            {canEdit ? <Button label="Remove" accessibleName={`Remove ${line.name}`} variant="quiet" onPress={() => setFieldValue('lines', values.lines.filter((_, i) => i !== index))} style={styles.left} /> : null}
+            {canEdit ? (
+              <Button
+                label="Remove"
+                accessibleName={`Remove ${line.name}`}
+                variant="quiet"
+                onPress={() =>
+                  setFieldValue(
+                    'lines',
+                    values.lines.filter((_, i) => i !== index),
+                  )
+                }
+                style={styles.left}
+              />
+            ) : null}
           </View>
         ))}
         {canEdit ? (
           <IngredientPicker
             exclude={values.lines.map((l) => l.ingredientId)}
-            onPick={(ingredient) => setFieldValue('lines', [...values.lines, { ingredientId: ingredient.id, name: ingredient.name, amount: '', unit: 'g-per-l', extractionPct: String(ingredient.steepSharePct) }])}
+            onPick={(ingredient) =>
+              setFieldValue('lines', [
+                ...values.lines,
+                {
+                  ingredientId: ingredient.id,
+                  name: ingredient.name,
+                  amount: '',
+                  unit: 'g-per-l',
+                  extractionPct: String(ingredient.steepSharePct),
+                },
+              ])
+            }
           />
         ) : null}
       </Card>
       <Card title="Added sugar">
         {values.sugars.map((sugar, index) => (
           <View key={index} style={styles.line}>
-            <Select compact label={`Sugar ${index + 1}`} value={sugar.type} options={sugarOptions} onChange={(type) => setFieldValue(`sugars.${index}.type`, type)} />
-            <FormField name={`sugars.${index}.gPerL`} label={`${SUGARS[sugar.type].label} per litre`} suffix="g/L" inputMode="decimal" />
+            <Select
+              compact
+              label={`Sugar ${index + 1}`}
+              value={sugar.type}
+              options={sugarOptions}
+              onChange={(type) => setFieldValue(`sugars.${index}.type`, type)}
+            />
+            <FormField
+              name={`sugars.${index}.gPerL`}
+              label={`${SUGARS[sugar.type].label} per litre`}
+              suffix="g/L"
+              inputMode="decimal"
+            />
           </View>
         ))}
         <View style={styles.row}>
-          <View style={styles.cell}><FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" /></View>
-          <View style={styles.cell}><FormField name="sweetnessNote" label="Sweetness note" placeholder="e.g. off-dry" /></View>
+          <View style={styles.cell}>
+            <FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" />
+          </View>
+          <View style={styles.cell}>
+            <FormField name="sweetnessNote" label="Sweetness note" placeholder="e.g. off-dry" />
+          </View>
         </View>
       </Card>
     </View>
@@ -188,7 +351,23 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
 }
 
 /** Fills the added sugar that reaches the target fizz, given what the base and the ingredients already bring. */
-function TargetHelper({ units, content, liquidMl, headspaceMl, rating, fermentableGPerL, currentAddedGPerL }: { units: UnitSystem; content: NonNullable<ReturnType<typeof toContent>['content']>; liquidMl: number; headspaceMl: number; rating: number; fermentableGPerL: number | null; currentAddedGPerL: number | null }) {
+function TargetHelper({
+  units,
+  content,
+  liquidMl,
+  headspaceMl,
+  rating,
+  fermentableGPerL,
+  currentAddedGPerL,
+}: {
+  units: UnitSystem;
+  content: NonNullable<ReturnType<typeof toContent>['content']>;
+  liquidMl: number;
+  headspaceMl: number;
+  rating: number;
+  fermentableGPerL: number | null;
+  currentAddedGPerL: number | null;
+}) {
   const { setFieldValue, values } = useFormikContext<RecipeFormValues>();
   const asked = {
     liquidMl,
@@ -227,9 +406,18 @@ function TargetHelper({ units, content, liquidMl, headspaceMl, rating, fermentab
         variant="secondary"
         style={styles.left}
         disabled={!current}
-        onPress={() => setFieldValue('sugars', [{ type: 'sucrose', gPerL: String(advice.addGPerL) }, ...values.sugars.filter((s) => s.type !== 'sucrose')])}
+        onPress={() =>
+          setFieldValue('sugars', [
+            { type: 'sucrose', gPerL: String(advice.addGPerL) },
+            ...values.sugars.filter((s) => s.type !== 'sucrose'),
+          ])
+        }
       />
-      <Text variant="small">{units === 'us' ? 'Amounts in the recipe are per litre; the Scale tab gives them in US units.' : 'Amounts in the recipe are per litre of finished drink.'}</Text>
+      <Text variant="small">
+        {units === 'us'
+          ? 'Amounts in the recipe are per litre; the Scale tab gives them in US units.'
+          : 'Amounts in the recipe are per litre of finished drink.'}
+      </Text>
     </Card>
   );
 }
@@ -247,5 +435,11 @@ const styles = StyleSheet.create({
   line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: '#EDE8DE' },
   lineName: { fontFamily: fonts.semibold },
   left: { alignSelf: 'flex-start' },
-  saveBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.md },
+  saveBar: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: space.md,
+  },
 });

@@ -1,22 +1,35 @@
 import { StyleSheet, View } from 'react-native';
 
+import { QuickCheckResults } from '@/components/quick-check/QuickCheckResults';
+import { Badge, Card, Text } from '@/components/ui';
 import type { RecipeEvaluation } from '@/lib/api/recipes';
 import { ALLERGEN_LABELS } from '@/lib/ingredients';
 import { space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
-import { QuickCheckResults } from '../quick-check/QuickCheckResults';
-import { Badge, Card, Text } from '../ui';
-
 /** The live numbers beside the editor: the engine's answer for one bottle, allergens and cost. */
-export function RecipeResults({ evaluation, units, limitPercent, bottleName }: { evaluation: RecipeEvaluation; units: UnitSystem; limitPercent: number; bottleName: string }) {
+export function RecipeResults({
+  evaluation,
+  units,
+  limitPercent,
+  bottleName,
+}: {
+  evaluation: RecipeEvaluation;
+  units: UnitSystem;
+  limitPercent: number;
+  bottleName: string;
+}) {
   return (
     <View style={styles.wrap}>
       <Card title="Sugar in each bottle" aside={<Text variant="small">{bottleName}</Text>}>
         <Text>
-          From the ingredients {formatNumber(evaluation.carbonation.sugar.fromIngredientsG, 2)} g · base and added sugar {formatNumber(evaluation.carbonation.sugar.addedG, 2)} g · fermentable{' '}
-          {formatNumber(evaluation.carbonation.sugar.fermentableG, 2)} g ({formatNumber(evaluation.carbonation.sugar.fermentableGPerL, 1)} g/L)
-          {evaluation.carbonation.sugar.sweetOnlyG > 0 ? ` · ${formatNumber(evaluation.carbonation.sugar.sweetOnlyG, 2)} g sweetness only` : ''}
+          From the ingredients {formatNumber(evaluation.carbonation.sugar.fromIngredientsG, 2)} g · base and added sugar{' '}
+          {formatNumber(evaluation.carbonation.sugar.addedG, 2)} g · fermentable{' '}
+          {formatNumber(evaluation.carbonation.sugar.fermentableG, 2)} g (
+          {formatNumber(evaluation.carbonation.sugar.fermentableGPerL, 1)} g/L)
+          {evaluation.carbonation.sugar.sweetOnlyG > 0
+            ? ` · ${formatNumber(evaluation.carbonation.sugar.sweetOnlyG, 2)} g sweetness only`
+            : ''}
         </Text>
       </Card>
       <Card title="Allergens and cost" aside={<Text variant="small">per bottle of {bottleName}</Text>}>
@@ -36,11 +49,18 @@ export function RecipeResults({ evaluation, units, limitPercent, bottleName }: {
         </Text>
         {evaluation.lines.map((line) => (
           <Text key={line.ingredientId} variant="small">
-            {line.name}: {formatNumber(line.gramsPerBottle, 2)} g per bottle, {formatNumber(line.sugarToLiquidG, 2)} g of sugar into the liquid
+            {line.name}: {formatNumber(line.gramsPerBottle, 2)} g per bottle, {formatNumber(line.sugarToLiquidG, 2)} g
+            of sugar into the liquid
           </Text>
         ))}
       </Card>
-      <QuickCheckResults answer={{ ...evaluation.carbonation, bottleFormat: null }} chart={undefined} units={units} limitPercent={limitPercent} temperatureNames={evaluation.temperatureNames} />
+      <QuickCheckResults
+        answer={{ ...evaluation.carbonation, bottleFormat: null }}
+        chart={undefined}
+        units={units}
+        limitPercent={limitPercent}
+        temperatureNames={evaluation.temperatureNames}
+      />
     </View>
   );
 }

@@ -1,17 +1,36 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useApproveMutation, useRecipeDiffQuery, useRecipeEvaluationQuery, useRecipeQuery, useReturnMutation, useReviewQuery, useSubmitMutation, useTastingsQuery, useWithdrawMutation } from '@/lib/api/recipes';
+import { FindingList } from '@/components/calculations/FindingList';
+import { Badge, Banner, Button, Card, FormStatus, Loading, Text, TextField, type Tone } from '@/components/ui';
+import {
+  useApproveMutation,
+  useRecipeDiffQuery,
+  useRecipeEvaluationQuery,
+  useRecipeQuery,
+  useReturnMutation,
+  useReviewQuery,
+  useSubmitMutation,
+  useTastingsQuery,
+  useWithdrawMutation,
+} from '@/lib/api/recipes';
 import type { Session } from '@/lib/api/types';
+import { can } from '@/lib/roles';
 import { REVIEW_STATE_LABELS, type ReviewState } from '@/lib/schemas/reviews';
 import { space } from '@/lib/theme';
 
-import { FindingList } from '../calculations/FindingList';
-import { Badge, Banner, Button, Card, FormStatus, Loading, Text, TextField, type Tone } from '../ui';
-import { can } from '@/lib/roles';
-
-export const STATE_TONE: Record<ReviewState, Tone> = { draft: 'neutral', submitted: 'caution', approved: 'success', returned: 'danger' };
-const ACTION_LABELS: Record<string, string> = { submitted: 'Submitted', approved: 'Approved', returned: 'Returned with changes', withdrawn: 'Approval withdrawn' };
+export const STATE_TONE: Record<ReviewState, Tone> = {
+  draft: 'neutral',
+  submitted: 'caution',
+  approved: 'success',
+  returned: 'danger',
+};
+const ACTION_LABELS: Record<string, string> = {
+  submitted: 'Submitted',
+  approved: 'Approved',
+  returned: 'Returned with changes',
+  withdrawn: 'Approval withdrawn',
+};
 
 /** The way to production: submit, and for owners what to look at before deciding, then the decision; and the record. */
 export function ReviewPanel({ recipeId, session }: { recipeId: number; session: Session }) {
@@ -26,10 +45,22 @@ export function ReviewPanel({ recipeId, session }: { recipeId: number; session: 
         <Text>
           Newest version {currentVersion}
           {submittedVersion ? ` · version ${submittedVersion} waits for review` : ''}
-          {approvedVersion ? ` · version ${approvedVersion} is approved for production` : ' · nothing approved for production yet'}.
+          {approvedVersion
+            ? ` · version ${approvedVersion} is approved for production`
+            : ' · nothing approved for production yet'}
+          .
         </Text>
-        {editor && (state === 'draft' || state === 'returned') ? <SubmitForm recipeId={recipeId} version={currentVersion} /> : null}
-        {owner && submittedVersion ? <Decision recipeId={recipeId} version={submittedVersion} approvedVersion={approvedVersion} licensed={session.organisation.licensedForAlcohol} /> : null}
+        {editor && (state === 'draft' || state === 'returned') ? (
+          <SubmitForm recipeId={recipeId} version={currentVersion} />
+        ) : null}
+        {owner && submittedVersion ? (
+          <Decision
+            recipeId={recipeId}
+            version={submittedVersion}
+            approvedVersion={approvedVersion}
+            licensed={session.organisation.licensedForAlcohol}
+          />
+        ) : null}
         {owner && approvedVersion ? <Withdraw recipeId={recipeId} /> : null}
       </Card>
       <Card title="Record">
@@ -37,7 +68,8 @@ export function ReviewPanel({ recipeId, session }: { recipeId: number; session: 
         {events.map((e) => (
           <View key={e.id} style={styles.event}>
             <Text>
-              {ACTION_LABELS[e.action] ?? e.action} · version {e.version} · {e.by ?? 'someone'} · {new Date(e.at).toLocaleString()}
+              {ACTION_LABELS[e.action] ?? e.action} · version {e.version} · {e.by ?? 'someone'} ·{' '}
+              {new Date(e.at).toLocaleString()}
               {e.selfApproved ? ' · approved by the submitter, the brewery’s only owner' : ''}
             </Text>
             {e.comment ? <Text variant="muted">“{e.comment}”</Text> : null}
@@ -60,17 +92,40 @@ function SubmitForm({ recipeId, version }: { recipeId: number; version: number }
       <FormStatus error={submit.error} />
       {dangers.length > 0 ? (
         <Banner tone="danger" title={`Version ${version} has a danger finding`}>
-          {dangers.map((f) => f.message).join(' ')} An owner can approve it only by writing why it is acceptable, and never when its alcohol reaches the limit of a brewery not licensed for alcohol. Change the recipe first if you can.
+          {dangers.map((f) => f.message).join(' ')} An owner can approve it only by writing why it is acceptable, and
+          never when its alcohol reaches the limit of a brewery not licensed for alcohol. Change the recipe first if you
+          can.
         </Banner>
       ) : null}
-      <TextField label="Message to the owners" value={message} onChangeText={setMessage} multiline placeholder="What changed, what to taste for" />
-      <Button label={`Submit version ${version} for review`} busy={submit.isPending} onPress={() => submit.mutate({ version, message })} style={styles.left} />
+      <TextField
+        label="Message to the owners"
+        value={message}
+        onChangeText={setMessage}
+        multiline
+        placeholder="What changed, what to taste for"
+      />
+      <Button
+        label={`Submit version ${version} for review`}
+        busy={submit.isPending}
+        onPress={() => submit.mutate({ version, message })}
+        style={styles.left}
+      />
     </View>
   );
 }
 
 /** What an owner sees before deciding: the submitted version's numbers and findings, tastings, and what changed. */
-function Decision({ recipeId, version, approvedVersion, licensed }: { recipeId: number; version: number; approvedVersion: number | null; licensed: boolean }) {
+function Decision({
+  recipeId,
+  version,
+  approvedVersion,
+  licensed,
+}: {
+  recipeId: number;
+  version: number;
+  approvedVersion: number | null;
+  licensed: boolean;
+}) {
   const detail = useRecipeQuery(recipeId, version);
   const evaluation = useRecipeEvaluationQuery(detail.data?.content);
   const tastings = useTastingsQuery(recipeId);
@@ -96,8 +151,10 @@ function Decision({ recipeId, version, approvedVersion, licensed }: { recipeId: 
         <>
           <FindingList findings={evaluation.data.carbonation.findings} />
           <Text variant="small">
-            Allergens: {evaluation.data.allergens.length ? evaluation.data.allergens.join(', ') : 'none recorded'} · cost per bottle:{' '}
-            {evaluation.data.cost.perBottle === null ? 'unknown' : evaluation.data.cost.perBottle.toFixed(3)} · tastings: {tastings.data?.length ?? 0}
+            Allergens: {evaluation.data.allergens.length ? evaluation.data.allergens.join(', ') : 'none recorded'} ·
+            cost per bottle:{' '}
+            {evaluation.data.cost.perBottle === null ? 'unknown' : evaluation.data.cost.perBottle.toFixed(3)} ·
+            tastings: {tastings.data?.length ?? 0}
           </Text>
         </>
       ) : (
@@ -106,15 +163,30 @@ function Decision({ recipeId, version, approvedVersion, licensed }: { recipeId: 
       {approvedVersion !== null && diff.data ? (
         <View>
           <Text variant="label">Changed since approved version {approvedVersion}</Text>
-          {diff.data.length === 0 ? <Text variant="small">Nothing.</Text> : diff.data.map((c, i) => <Text key={i} variant="small">{c.what}: {c.before ?? '—'} → {c.after ?? '—'}</Text>)}
+          {diff.data.length === 0 ? (
+            <Text variant="small">Nothing.</Text>
+          ) : (
+            diff.data.map((c, i) => (
+              <Text key={i} variant="small">
+                {c.what}: {c.before ?? '—'} → {c.after ?? '—'}
+              </Text>
+            ))
+          )}
         </View>
       ) : null}
       <FormStatus error={error} />
       <TextField label="Comment" value={comment} onChangeText={setComment} multiline />
       {dangers.length > 0 && !alcoholBlocked ? (
         <>
-          <Banner tone="danger" title="A danger finding blocks approval">Approve only if you write why it is acceptable; the reason is recorded.</Banner>
-          <TextField label="Why you approve despite the danger finding" value={override} onChangeText={setOverride} multiline />
+          <Banner tone="danger" title="A danger finding blocks approval">
+            Approve only if you write why it is acceptable; the reason is recorded.
+          </Banner>
+          <TextField
+            label="Why you approve despite the danger finding"
+            value={override}
+            onChangeText={setOverride}
+            multiline
+          />
         </>
       ) : null}
       {approveBlockedBy ? <Text variant="small">{approveBlockedBy}</Text> : null}
@@ -125,7 +197,12 @@ function Decision({ recipeId, version, approvedVersion, licensed }: { recipeId: 
           disabled={approveBlockedBy !== null || !evaluation.data}
           onPress={() => approve.mutate({ version, comment, overrideReason: override.trim() || null })}
         />
-        <Button label="Return with changes" variant="secondary" busy={giveBack.isPending} onPress={() => giveBack.mutate({ version, comment })} />
+        <Button
+          label="Return with changes"
+          variant="secondary"
+          busy={giveBack.isPending}
+          onPress={() => giveBack.mutate({ version, comment })}
+        />
       </View>
     </View>
   );
@@ -138,7 +215,13 @@ function Withdraw({ recipeId }: { recipeId: number }) {
     <View style={styles.form}>
       <FormStatus error={withdraw.error} />
       <TextField label="Reason to withdraw the approval" value={reason} onChangeText={setReason} />
-      <Button label="Withdraw approval" variant="danger" busy={withdraw.isPending} onPress={() => withdraw.mutate({ reason })} style={styles.left} />
+      <Button
+        label="Withdraw approval"
+        variant="danger"
+        busy={withdraw.isPending}
+        onPress={() => withdraw.mutate({ reason })}
+        style={styles.left}
+      />
     </View>
   );
 }

@@ -1,6 +1,5 @@
+import { Banner, Text } from '@/components/ui';
 import type { RecipeCard } from '@/lib/recipes/card';
-
-import { Banner, Text } from '../ui';
 
 const TITLES = { ok: 'Safety: OK', caution: 'Safety: caution', danger: 'Safety: DANGER' } as const;
 
@@ -14,7 +13,9 @@ export function SafetyNotice({ card }: { card: RecipeCard }) {
     <Banner tone={safety.level === 'ok' ? 'success' : safety.level} title={TITLES[safety.level]}>
       <Text>{safety.headline}</Text>
       <Text>{safety.rating}</Text>
-      {approval?.overrideReason ? <Text>{`Approved over a danger finding. Reason: ${approval.overrideReason}`}</Text> : null}
+      {approval?.overrideReason ? (
+        <Text>{`Approved over a danger finding. Reason: ${approval.overrideReason}`}</Text>
+      ) : null}
       {approval?.comment ? <Text>{`Approval comment: ${approval.comment}`}</Text> : null}
     </Banner>
   );

@@ -3,15 +3,15 @@ import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, useWindowDimensions, View, type ViewStyle } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
+import { Icon } from '@/components/ui/Icon';
+import { Logo } from '@/components/ui/Logo';
+import { Text } from '@/components/ui/Text';
 import { useServerInfoQuery, useSignOutMutation } from '@/lib/api/session';
 import type { Session } from '@/lib/api/types';
 import { ROLE_LABELS } from '@/lib/roles';
 import { breakpoints, colors, fonts, fontSize, radius, space, touchTarget } from '@/lib/theme';
 
-import { Icon } from '../ui/Icon';
-import { Logo } from '../ui/Logo';
-import { Text } from '../ui/Text';
-import { isActive, navItemsFor, phoneTabs, type NavItem } from './nav';
+import { isActive, type NavItem, navItemsFor, phoneTabs } from './nav';
 
 interface Props {
   session: Session;
@@ -103,7 +103,10 @@ function PhoneFrame({ session, items, children }: Props & { items: NavItem[] }) 
       <View style={styles.phoneContent}>{children}</View>
       <View role="navigation" aria-label="Main" style={[styles.tabBar, { paddingBottom: insets.bottom }]}>
         {tabs.map((item) => {
-          const active = item.href === '/more' ? pathname === '/more' || overflow.some((o) => isActive(o, pathname)) : isActive(item, pathname);
+          const active =
+            item.href === '/more'
+              ? pathname === '/more' || overflow.some((o) => isActive(o, pathname))
+              : isActive(item, pathname);
           return (
             <Pressable
               key={item.href}
@@ -129,12 +132,20 @@ function PhoneFrame({ session, items, children }: Props & { items: NavItem[] }) 
 
 function focusRing(state: { pressed: boolean }): ViewStyle | null {
   const { focused } = state as { focused?: boolean };
-  return focused ? ({ outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as ViewStyle) : null;
+  return focused
+    ? ({ outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as ViewStyle)
+    : null;
 }
 
 const styles = StyleSheet.create({
   wideRoot: { flex: 1, flexDirection: 'row', backgroundColor: colors.background },
-  rail: { width: 248, backgroundColor: colors.rail, paddingVertical: space.xl, paddingHorizontal: space.md, gap: space.xl },
+  rail: {
+    width: 248,
+    backgroundColor: colors.rail,
+    paddingVertical: space.xl,
+    paddingHorizontal: space.md,
+    gap: space.xl,
+  },
   railBrand: { gap: space.sm, paddingHorizontal: space.sm },
   railBrewery: { color: colors.railText, fontFamily: fonts.semibold, fontSize: fontSize.sm },
   railItems: { gap: space.xs, flex: 1 },

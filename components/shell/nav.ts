@@ -1,7 +1,6 @@
+import type { IconName } from '@/components/ui/Icon';
 import type { ServerInfo, Session } from '@/lib/api/types';
 import { can } from '@/lib/roles';
-
-import type { IconName } from '../ui/Icon';
 
 export interface NavItem {
   href: '/' | '/recipes' | '/quick-check' | '/ingredients' | '/bottles' | '/team' | '/outbox' | '/profile' | '/more';
@@ -22,7 +21,8 @@ export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined
     { href: '/bottles', label: 'Bottles', shortLabel: 'Bottles', icon: 'bottle' },
   ];
   if (can(role, 'team.manage')) items.push({ href: '/team', label: 'Team', shortLabel: 'Team', icon: 'team' });
-  if (serverInfo?.outbox && (can(role, 'outbox.brewery') || serverInfo.outboxOpen)) items.push({ href: '/outbox', label: 'Mail outbox', shortLabel: 'Outbox', icon: 'mail' });
+  if (serverInfo?.outbox && (can(role, 'outbox.brewery') || serverInfo.outboxOpen))
+    items.push({ href: '/outbox', label: 'Mail outbox', shortLabel: 'Outbox', icon: 'mail' });
   items.push({ href: '/profile', label: 'Profile', shortLabel: 'Profile', icon: 'person' });
   return items;
 }
@@ -39,5 +39,8 @@ export const PHONE_TAB_LIMIT = 5;
 export function phoneTabs(items: NavItem[]): { tabs: NavItem[]; overflow: NavItem[] } {
   if (items.length <= PHONE_TAB_LIMIT) return { tabs: items, overflow: [] };
   const tabs = items.slice(0, PHONE_TAB_LIMIT - 1);
-  return { tabs: [...tabs, { href: '/more', label: 'More', shortLabel: 'More', icon: 'more' }], overflow: items.slice(PHONE_TAB_LIMIT - 1) };
+  return {
+    tabs: [...tabs, { href: '/more', label: 'More', shortLabel: 'More', icon: 'more' }],
+    overflow: items.slice(PHONE_TAB_LIMIT - 1),
+  };
 }

@@ -1,12 +1,11 @@
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
+import { Banner, Button, FormField, FormStatus, Segmented, submitTo, Text } from '@/components/ui';
 import type { Organisation } from '@/lib/api/types';
 import { check, parseNumber } from '@/lib/forms';
-import { organisationSchema, type OrganisationInput } from '@/lib/schemas/team';
+import { type OrganisationInput, organisationSchema } from '@/lib/schemas/team';
 import { space } from '@/lib/theme';
-
-import { Banner, Button, FormField, FormStatus, Segmented, submitTo, Text } from '../ui';
 
 interface Props {
   organisation: Organisation;
@@ -15,7 +14,13 @@ interface Props {
   saved: boolean;
 }
 
-type Values = { name: string; abvLimitPercent: string; warmestTempC: string; ratingSharePercent: string; licensed: 'no' | 'yes' };
+type Values = {
+  name: string;
+  abvLimitPercent: string;
+  warmestTempC: string;
+  ratingSharePercent: string;
+  licensed: 'no' | 'yes';
+};
 const toInput = (v: Values) => ({
   name: v.name,
   abvLimitPercent: parseNumber(v.abvLimitPercent),
@@ -28,7 +33,13 @@ const toInput = (v: Values) => ({
 export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Props) {
   return (
     <Formik<Values>
-      initialValues={{ name: organisation.name, abvLimitPercent: String(organisation.abvLimitPercent), warmestTempC: String(organisation.warmestTempC), ratingSharePercent: String(organisation.ratingSharePercent), licensed: organisation.licensedForAlcohol ? 'yes' : 'no' }}
+      initialValues={{
+        name: organisation.name,
+        abvLimitPercent: String(organisation.abvLimitPercent),
+        warmestTempC: String(organisation.warmestTempC),
+        ratingSharePercent: String(organisation.ratingSharePercent),
+        licensed: organisation.licensedForAlcohol ? 'yes' : 'no',
+      }}
       enableReinitialize
       validate={(values) => check(organisationSchema, toInput(values)).errors}
       onSubmit={submitTo((values) => onSubmit(check(organisationSchema, toInput(values)).value!))}
@@ -73,7 +84,13 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
               ? 'Versions at or over the alcohol limit can be approved. Who declared this, and when, is recorded.'
               : 'A version whose worst-case alcohol reaches the limit cannot be approved, with or without an override.'}
           </Text>
-          <Button label="Save settings" busy={isSubmitting} disabled={!dirty} onPress={() => handleSubmit()} style={styles.submit} />
+          <Button
+            label="Save settings"
+            busy={isSubmitting}
+            disabled={!dirty}
+            onPress={() => handleSubmit()}
+            style={styles.submit}
+          />
         </View>
       )}
     </Formik>

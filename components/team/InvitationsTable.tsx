@@ -1,11 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Badge, Button, type Column, EmptyState, FormStatus, Table, Text, type Tone } from '@/components/ui';
 import { useResendInvitationMutation, useRevokeInvitationMutation } from '@/lib/api/team';
 import type { Invitation, InvitationStatus } from '@/lib/api/types';
 import { ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
-
-import { Badge, Button, EmptyState, FormStatus, Table, Text, type Column, type Tone } from '../ui';
 
 const STATUS: Record<InvitationStatus, { label: string; tone: Tone }> = {
   pending: { label: 'Waiting', tone: 'caution' },
@@ -14,7 +13,8 @@ const STATUS: Record<InvitationStatus, { label: string; tone: Tone }> = {
   revoked: { label: 'Withdrawn', tone: 'neutral' },
 };
 
-const formatDate = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+const formatDate = (iso: string) =>
+  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** Open invitations: resend a fresh link (7 more days) or withdraw one. */
 export function InvitationsTable({ invitations }: { invitations: Invitation[] }) {
@@ -32,7 +32,9 @@ export function InvitationsTable({ invitations }: { invitations: Invitation[] })
       render: (i) => (
         <View>
           <Badge label={STATUS[i.status].label} tone={STATUS[i.status].tone} />
-          <Text variant="small">{i.status === 'expired' ? `ended ${formatDate(i.expiresAt)}` : `until ${formatDate(i.expiresAt)}`}</Text>
+          <Text variant="small">
+            {i.status === 'expired' ? `ended ${formatDate(i.expiresAt)}` : `until ${formatDate(i.expiresAt)}`}
+          </Text>
         </View>
       ),
     },

@@ -1,11 +1,11 @@
-import { DEFAULT_INVITE_ROLE } from '@/lib/roles';
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { inviteSchema, type InviteInput } from '@/lib/schemas/team';
+import { Button, FormField, FormStatus, Select, submitTo } from '@/components/ui';
+import { DEFAULT_INVITE_ROLE } from '@/lib/roles';
+import { type InviteInput, inviteSchema } from '@/lib/schemas/team';
 import { space } from '@/lib/theme';
 
-import { Button, FormField, FormStatus, Select, submitTo } from '../ui';
 import { roleOptions } from './role-options';
 
 interface Props {
@@ -25,8 +25,20 @@ export function InviteForm({ onSubmit, error }: Props) {
       {({ handleSubmit, isSubmitting, values, setFieldValue, errors, touched }) => (
         <View style={styles.form}>
           <FormStatus error={error} />
-          <FormField name="email" label="E-mail of the person to invite" inputMode="email" autoCapitalize="none" autoComplete="off" />
-          <Select label="Role" value={values.role} options={roleOptions} onChange={(role) => setFieldValue('role', role)} error={touched.role ? errors.role : undefined} />
+          <FormField
+            name="email"
+            label="E-mail of the person to invite"
+            inputMode="email"
+            autoCapitalize="none"
+            autoComplete="off"
+          />
+          <Select
+            label="Role"
+            value={values.role}
+            options={roleOptions}
+            onChange={(role) => setFieldValue('role', role)}
+            error={touched.role ? errors.role : undefined}
+          />
           <Button label="Send invitation" busy={isSubmitting} onPress={() => handleSubmit()} style={styles.submit} />
         </View>
       )}

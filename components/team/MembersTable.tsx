@@ -1,12 +1,12 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { Badge, Button, Card, type Column, FormStatus, Select, Table, Text } from '@/components/ui';
 import { useChangeRoleMutation, useSetMemberActiveMutation } from '@/lib/api/team';
 import type { Member } from '@/lib/api/types';
-import { ROLE_LABELS, type Role } from '@/lib/roles';
+import { type Role, ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
-import { Badge, Button, Card, FormStatus, Select, Table, Text, type Column } from '../ui';
 import { roleOptions } from './role-options';
 
 /** Members with their role and status; the owner changes a role or deactivates someone from here. */
@@ -26,14 +26,23 @@ export function MembersTable({ members, currentUserId }: { members: Member[]; cu
       ),
     },
     { key: 'role', header: 'Role', render: (m) => <Badge label={ROLE_LABELS[m.role]} tone="info" /> },
-    { key: 'status', header: 'Status', render: (m) => <Badge label={m.active ? 'Active' : 'Deactivated'} tone={m.active ? 'success' : 'neutral'} /> },
+    {
+      key: 'status',
+      header: 'Status',
+      render: (m) => <Badge label={m.active ? 'Active' : 'Deactivated'} tone={m.active ? 'success' : 'neutral'} />,
+    },
     {
       key: 'actions',
       header: 'Actions',
       flex: 1.6,
       render: (m) => (
         <View style={styles.actions}>
-          <Button label="Change role" accessibleName={`Change role of ${m.name}`} variant="secondary" onPress={() => setEditing(m)} />
+          <Button
+            label="Change role"
+            accessibleName={`Change role of ${m.name}`}
+            variant="secondary"
+            onPress={() => setEditing(m)}
+          />
           {m.id !== currentUserId ? (
             <Button
               label={m.active ? 'Deactivate' : 'Reactivate'}

@@ -26,6 +26,11 @@ export function Badge({ label, tone = 'neutral' }: { label: string; tone?: Tone 
 export { toneColors };
 
 const styles = StyleSheet.create({
-  badge: { alignSelf: 'flex-start', borderRadius: radius.pill, paddingHorizontal: space.sm, paddingVertical: space.xxs },
+  badge: {
+    alignSelf: 'flex-start',
+    borderRadius: radius.pill,
+    paddingHorizontal: space.sm,
+    paddingVertical: space.xxs,
+  },
   label: { fontFamily: fonts.semibold, fontSize: fontSize.xs, lineHeight: 18 },
 });

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { fonts, radius, space } from '@/lib/theme';
 
-import { toneColors, type Tone } from './Badge';
+import { type Tone, toneColors } from './Badge';
 import { Text } from './Text';
 
 interface Props {

@@ -1,4 +1,12 @@
-import { ActivityIndicator, Pressable, StyleSheet, View, type PressableProps, type StyleProp, type ViewStyle } from 'react-native';
+import {
+  ActivityIndicator,
+  Pressable,
+  type PressableProps,
+  type StyleProp,
+  StyleSheet,
+  View,
+  type ViewStyle,
+} from 'react-native';
 
 import { colors, fonts, fontSize, radius, space, touchTarget } from '@/lib/theme';
 
@@ -18,7 +26,16 @@ interface Props extends Omit<PressableProps, 'style' | 'children'> {
 }
 
 /** The one button. At least 44 px tall, with a visible focus ring for keyboard users. */
-export function Button({ label, variant = 'primary', busy = false, disabled, block, style, accessibleName, ...rest }: Props) {
+export function Button({
+  label,
+  variant = 'primary',
+  busy = false,
+  disabled,
+  block,
+  style,
+  accessibleName,
+  ...rest
+}: Props) {
   const inactive = disabled || busy;
   return (
     <Pressable
@@ -42,7 +59,12 @@ export function Button({ label, variant = 'primary', busy = false, disabled, blo
       }}
     >
       <View style={styles.content}>
-        {busy ? <ActivityIndicator size="small" color={variant === 'primary' || variant === 'danger' ? colors.textOnPrimary : colors.primary} /> : null}
+        {busy ? (
+          <ActivityIndicator
+            size="small"
+            color={variant === 'primary' || variant === 'danger' ? colors.textOnPrimary : colors.primary}
+          />
+        ) : null}
         <Text style={[styles.label, labelStyles[variant]]}>{label}</Text>
       </View>
     </Pressable>

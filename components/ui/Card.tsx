@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
+import { type StyleProp, StyleSheet, View, type ViewStyle } from 'react-native';
 
 import { colors, radius, space } from '@/lib/theme';
 
@@ -38,5 +38,11 @@ const styles = StyleSheet.create({
     padding: space.lg,
     gap: space.md,
   },
-  header: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+  header: {
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    alignItems: 'center',
+    gap: space.sm,
+    flexWrap: 'wrap',
+  },
 });

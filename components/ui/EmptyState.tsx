@@ -10,7 +10,11 @@ export function EmptyState({ title, message, action }: { title: string; message?
   return (
     <View style={styles.box}>
       <Text variant="subheading">{title}</Text>
-      {message ? <Text variant="muted" style={styles.center}>{message}</Text> : null}
+      {message ? (
+        <Text variant="muted" style={styles.center}>
+          {message}
+        </Text>
+      ) : null}
       {action}
     </View>
   );

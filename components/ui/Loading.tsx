@@ -14,5 +14,12 @@ export function Loading({ label = 'Loading…' }: { label?: string }) {
 }
 
 const styles = StyleSheet.create({
-  box: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: space.sm, padding: space.xl, backgroundColor: colors.background },
+  box: {
+    flex: 1,
+    alignItems: 'center',
+    justifyContent: 'center',
+    gap: space.sm,
+    padding: space.xl,
+    backgroundColor: colors.background,
+  },
 });

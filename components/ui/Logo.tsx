@@ -13,7 +13,13 @@ export function LogoMark({ size = 36, inverse = false }: { size?: number; invers
   const body = inverse ? colors.railText : colors.primary;
   const hole = inverse ? colors.rail : colors.background;
   return (
-    <Svg width={size} height={size} viewBox="0 0 48 48" accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
+    <Svg
+      width={size}
+      height={size}
+      viewBox="0 0 48 48"
+      accessibilityElementsHidden
+      importantForAccessibility="no-hide-descendants"
+    >
       <Path d="M19 4h10v8c6 3 9 8 9 14v14a4 4 0 0 1-4 4H14a4 4 0 0 1-4-4V26c0-6 3-11 9-14V4z" fill={body} />
       <Rect x="10" y="27" width="28" height="7" fill="#D98E04" />
       <Circle cx="20" cy="38" r="2.2" fill={hole} />
@@ -28,7 +34,9 @@ export function Logo({ inverse = false, size = 32 }: { inverse?: boolean; size?:
   return (
     <View style={styles.row} aria-label="Fizzwright">
       <LogoMark size={size} inverse={inverse} />
-      <Text style={[styles.word, { color: inverse ? colors.railText : colors.primary, fontSize: size * 0.7 }]}>Fizzwright</Text>
+      <Text style={[styles.word, { color: inverse ? colors.railText : colors.primary, fontSize: size * 0.7 }]}>
+        Fizzwright
+      </Text>
     </View>
   );
 }

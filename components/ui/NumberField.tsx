@@ -13,5 +13,7 @@ interface Props extends Omit<TextFieldProps, 'keyboardType' | 'inputMode'> {
  * parsing to the form's schema, which says clearly what is wrong.
  */
 export const NumberField = forwardRef<TextInput, Props>(function NumberField({ unit, ...rest }, ref) {
-  return <TextField ref={ref} inputMode="decimal" keyboardType="decimal-pad" suffix={unit} autoComplete="off" {...rest} />;
+  return (
+    <TextField ref={ref} inputMode="decimal" keyboardType="decimal-pad" suffix={unit} autoComplete="off" {...rest} />
+  );
 });

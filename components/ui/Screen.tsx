@@ -39,7 +39,13 @@ const styles = StyleSheet.create({
   scroll: { flex: 1, backgroundColor: colors.background },
   scrollContent: { padding: space.lg, paddingBottom: space.xxl * 2 },
   inner: { width: '100%', alignSelf: 'center', gap: space.lg },
-  titleRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', gap: space.md },
+  titleRow: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'flex-end',
+    justifyContent: 'space-between',
+    gap: space.md,
+  },
   titleText: { flexShrink: 1, gap: space.xxs },
   actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
 });

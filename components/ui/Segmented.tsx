@@ -44,8 +44,20 @@ export function Segmented<T extends string>({ label, value, options, onChange, s
 
 const styles = StyleSheet.create({
   field: { gap: space.xs },
-  group: { flexDirection: 'row', borderWidth: 1.5, borderColor: colors.primary, borderRadius: radius.md, overflow: 'hidden', alignSelf: 'flex-start' },
-  option: { minHeight: touchTarget, paddingHorizontal: space.md, justifyContent: 'center', backgroundColor: colors.surface },
+  group: {
+    flexDirection: 'row',
+    borderWidth: 1.5,
+    borderColor: colors.primary,
+    borderRadius: radius.md,
+    overflow: 'hidden',
+    alignSelf: 'flex-start',
+  },
+  option: {
+    minHeight: touchTarget,
+    paddingHorizontal: space.md,
+    justifyContent: 'center',
+    backgroundColor: colors.surface,
+  },
   selected: { backgroundColor: colors.primary },
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as ViewStyle,
   text: { fontFamily: fonts.semibold, fontSize: fontSize.sm, color: colors.primary },

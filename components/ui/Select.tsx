@@ -22,7 +22,15 @@ interface Props<T extends string> {
 }
 
 /** A choice among a few options, shown all at once as a radio group: one tap on a phone, no hidden menu. */
-export function Select<T extends string>({ label, value, options, onChange, error, disabled, compact = false }: Props<T>) {
+export function Select<T extends string>({
+  label,
+  value,
+  options,
+  onChange,
+  error,
+  disabled,
+  compact = false,
+}: Props<T>) {
   return (
     <View style={styles.field}>
       <Text variant="label">{label}</Text>
@@ -39,7 +47,13 @@ export function Select<T extends string>({ label, value, options, onChange, erro
               onPress={() => onChange(option.value)}
               style={(state) => {
                 const { focused } = state as typeof state & { focused?: boolean };
-                return [styles.option, compact && styles.compact, selected && styles.selected, focused && styles.focused, disabled && styles.disabled];
+                return [
+                  styles.option,
+                  compact && styles.compact,
+                  selected && styles.selected,
+                  focused && styles.focused,
+                  disabled && styles.disabled,
+                ];
               }}
             >
               {compact ? null : <View style={[styles.dot, selected && styles.dotSelected]} />}
@@ -82,7 +96,11 @@ const styles = StyleSheet.create({
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 1 } as ViewStyle,
   disabled: { opacity: 0.55 },
   dot: { width: 18, height: 18, borderRadius: 9, borderWidth: 2, borderColor: colors.textMuted },
-  dotSelected: { borderColor: colors.primary, backgroundColor: colors.primary, boxShadow: `inset 0 0 0 3px ${colors.surface}` } as ViewStyle,
+  dotSelected: {
+    borderColor: colors.primary,
+    backgroundColor: colors.primary,
+    boxShadow: `inset 0 0 0 3px ${colors.surface}`,
+  } as ViewStyle,
   optionText: { flexShrink: 1 },
   optionLabel: { fontFamily: fonts.semibold, fontSize: fontSize.md },
   optionLabelSelected: { color: colors.primary },

@@ -20,7 +20,8 @@ interface Props<Row> {
   label: string;
 }
 
-const cell = (content: ReactNode) => (typeof content === 'string' || typeof content === 'number' ? <Text>{content}</Text> : content);
+const cell = (content: ReactNode) =>
+  typeof content === 'string' || typeof content === 'number' ? <Text>{content}</Text> : content;
 
 /** A table on wide windows; on phones each row becomes a small card of "header: value" lines. */
 export function Table<Row>({ columns, rows, rowKey, label }: Props<Row>) {
@@ -71,7 +72,14 @@ const styles = StyleSheet.create({
   headRow: { backgroundColor: colors.surfaceMuted, borderTopWidth: 0 },
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, minHeight: 48, justifyContent: 'center' },
   list: { gap: space.sm },
-  card: { borderWidth: 1, borderColor: '#E4DED2', borderRadius: radius.md, padding: space.md, gap: space.xs, backgroundColor: colors.surface },
+  card: {
+    borderWidth: 1,
+    borderColor: '#E4DED2',
+    borderRadius: radius.md,
+    padding: space.md,
+    gap: space.xs,
+    backgroundColor: colors.surface,
+  },
   cardLine: { flexDirection: 'row', gap: space.sm, alignItems: 'center', flexWrap: 'wrap' },
   cardHeader: { width: 96 },
   cardValue: { flex: 1, minWidth: 160 },

@@ -1,4 +1,4 @@
-import { Text as RNText, StyleSheet, type TextProps } from 'react-native';
+import { StyleSheet, Text as RNText, type TextProps } from 'react-native';
 
 import { colors, fonts, fontSize } from '@/lib/theme';
 

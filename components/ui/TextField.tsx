@@ -1,5 +1,5 @@
 import { forwardRef, useId, useState } from 'react';
-import { StyleSheet, TextInput, View, type TextInputProps, type ViewStyle } from 'react-native';
+import { StyleSheet, TextInput, type TextInputProps, View, type ViewStyle } from 'react-native';
 
 import { colors, fonts, fontSize, radius, space, touchTarget } from '@/lib/theme';
 
@@ -14,7 +14,10 @@ export interface TextFieldProps extends Omit<TextInputProps, 'style'> {
 }
 
 /** A labelled text input with its hint and error message, tied together for screen readers. */
-export const TextField = forwardRef<TextInput, TextFieldProps>(function TextField({ label, hint, error, suffix, onFocus, onBlur, ...rest }, ref) {
+export const TextField = forwardRef<TextInput, TextFieldProps>(function TextField(
+  { label, hint, error, suffix, onFocus, onBlur, ...rest },
+  ref,
+) {
   const [focused, setFocused] = useState(false);
   const id = useId();
   const messageId = `${id}-message`;
@@ -67,7 +70,12 @@ const styles = StyleSheet.create({
     borderRadius: radius.md,
     backgroundColor: colors.surface,
   },
-  boxFocused: { borderColor: colors.primary, outlineColor: colors.focus, outlineWidth: 2, outlineStyle: 'solid' } as ViewStyle,
+  boxFocused: {
+    borderColor: colors.primary,
+    outlineColor: colors.focus,
+    outlineWidth: 2,
+    outlineStyle: 'solid',
+  } as ViewStyle,
   boxError: { borderColor: colors.danger },
   input: {
     flex: 1,

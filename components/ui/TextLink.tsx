@@ -1,4 +1,4 @@
-import { Link, type Href } from 'expo-router';
+import { type Href, Link } from 'expo-router';
 import { StyleSheet } from 'react-native';
 
 import { colors, fonts } from '@/lib/theme';
@@ -13,5 +13,11 @@ export function TextLink({ href, children }: { href: Href; children: string }) {
 }
 
 const styles = StyleSheet.create({
-  link: { color: colors.primary, fontFamily: fonts.semibold, fontSize: 17, lineHeight: 24, textDecorationLine: 'underline' },
+  link: {
+    color: colors.primary,
+    fontFamily: fonts.semibold,
+    fontSize: 17,
+    lineHeight: 24,
+    textDecorationLine: 'underline',
+  },
 });

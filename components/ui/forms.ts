@@ -13,7 +13,10 @@ interface Options<Values> {
  * Wraps a mutation for formik's onSubmit: when the server answers with field messages they land on the same
  * fields the person typed into. The mutation keeps its error for the form-level banner.
  */
-export function submitTo<Values extends object>(mutate: (values: Values) => Promise<unknown>, options: Options<Values> = {}) {
+export function submitTo<Values extends object>(
+  mutate: (values: Values) => Promise<unknown>,
+  options: Options<Values> = {},
+) {
   return async (values: Values, helpers: FormikHelpers<Values>) => {
     try {
       await mutate(options.schema ? (options.schema.cast(values) as Values) : values);

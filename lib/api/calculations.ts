@@ -1,11 +1,17 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 
-import type { CarbonationResult, PrimingResult } from '../chemistry/carbonation';
-import type { BrixRequest, CarbonationRequest, PrimingRequest } from '../schemas/calculations';
+import type { CarbonationResult, PrimingResult } from '@/lib/chemistry/carbonation';
+import type { BrixRequest, CarbonationRequest, PrimingRequest } from '@/lib/schemas/calculations';
+
 import { api } from './client';
 import { staleTimes } from './query-client';
 
-export type BottleFormatRef = { id: number; name: string; maxWorkingPressureBar: number; pressureSource: string } | null;
+export type BottleFormatRef = {
+  id: number;
+  name: string;
+  maxWorkingPressureBar: number;
+  pressureSource: string;
+} | null;
 export type CarbonationAnswer = CarbonationResult & { bottleFormat: BottleFormatRef };
 export type PrimingAnswer = PrimingResult & { bottleFormat: BottleFormatRef };
 export interface BrixAnswer {

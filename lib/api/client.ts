@@ -1,4 +1,5 @@
-import { env } from '../env';
+import { env } from '@/lib/env';
+
 import type { ErrorBody } from './types';
 
 /** An API failure, with the server's code, message and per-field messages. */
@@ -22,14 +23,20 @@ const NETWORK_MESSAGE = 'Cannot reach the Fizzwright server. Check your connecti
  * Calls the API. The session travels in an httpOnly cookie (`credentials: 'include'`), so scripts never hold it.
  * Resolves with the parsed JSON (undefined for 204) or throws an ApiError.
  */
-export async function apiRequest<T>(path: string, options: { method?: Method; body?: unknown; signal?: AbortSignal } = {}): Promise<T> {
+export async function apiRequest<T>(
+  path: string,
+  options: { method?: Method; body?: unknown; signal?: AbortSignal } = {},
+): Promise<T> {
   const { method = 'GET', body, signal } = options;
   let response: Response;
   try {
     response = await fetch(`${env.apiUrl}/api${path}`, {
       method,
       credentials: 'include',
-      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      headers:
+        body === undefined
+          ? { Accept: 'application/json' }
+          : { Accept: 'application/json', 'Content-Type': 'application/json' },
       body: body === undefined ? undefined : JSON.stringify(body),
       signal,
     });
@@ -52,11 +59,15 @@ async function readResponse<T>(response: Response): Promise<T> {
   }
   if (!response.ok) {
     const error = (parsed as ErrorBody | undefined)?.error;
-    throw new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.fields);
+    throw new ApiError(
+      response.status,
+      error?.code ?? 'http_error',
+      error?.message ?? `The server answered ${response.status}.`,
+      error?.fields,
+    );
   }
   return parsed as T;
 }
-
 
 /** Sends one file as multipart form data (the browser sets the boundary). */
 async function upload<T>(path: string, file: Blob, name: string): Promise<T> {
@@ -64,7 +75,12 @@ async function upload<T>(path: string, file: Blob, name: string): Promise<T> {
   form.append('file', file, name);
   let response: Response;
   try {
-    response = await fetch(`${env.apiUrl}/api${path}`, { method: 'POST', credentials: 'include', body: form, headers: { Accept: 'application/json' } });
+    response = await fetch(`${env.apiUrl}/api${path}`, {
+      method: 'POST',
+      credentials: 'include',
+      body: form,
+      headers: { Accept: 'application/json' },
+    });
   } catch {
     throw new ApiError(0, 'network', NETWORK_MESSAGE);
   }

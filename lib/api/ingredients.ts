@@ -1,7 +1,8 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { Category } from '../ingredients';
-import type { HouseIngredientInput } from '../schemas/ingredients';
+import type { Category } from '@/lib/ingredients';
+import type { HouseIngredientInput } from '@/lib/schemas/ingredients';
+
 import { api } from './client';
 import { staleTimes } from './query-client';
 import type { Attachment, Ingredient } from './types';
@@ -39,7 +40,13 @@ export const ingredientKeys = {
 };
 
 export function useIngredientSearchQuery(query: IngredientQuery) {
-  const params = new URLSearchParams({ q: query.q, category: query.category, page: String(query.page), pageSize: String(query.pageSize ?? 25), archived: String(query.archived ?? false) });
+  const params = new URLSearchParams({
+    q: query.q,
+    category: query.category,
+    page: String(query.page),
+    pageSize: String(query.pageSize ?? 25),
+    archived: String(query.archived ?? false),
+  });
   return useQuery({
     queryKey: ingredientKeys.search(query),
     staleTime: staleTimes.list,
@@ -49,11 +56,21 @@ export function useIngredientSearchQuery(query: IngredientQuery) {
 }
 
 export function useIngredientQuery(id: number) {
-  return useQuery({ queryKey: ingredientKeys.one(id), enabled: Number.isInteger(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<Ingredient>(`/ingredients/${id}`, signal) });
+  return useQuery({
+    queryKey: ingredientKeys.one(id),
+    enabled: Number.isInteger(id),
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<Ingredient>(`/ingredients/${id}`, signal),
+  });
 }
 
 export function useIngredientChangesQuery(id: number, enabled: boolean) {
-  return useQuery({ queryKey: ingredientKeys.changes(id), enabled, staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<IngredientChangeEntry[]>(`/ingredients/${id}/changes`, signal) });
+  return useQuery({
+    queryKey: ingredientKeys.changes(id),
+    enabled,
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<IngredientChangeEntry[]>(`/ingredients/${id}/changes`, signal),
+  });
 }
 
 function useIngredientMutation<T>(mutationFn: (input: T) => Promise<Ingredient>) {
@@ -61,13 +78,20 @@ function useIngredientMutation<T>(mutationFn: (input: T) => Promise<Ingredient>)
   return useMutation({ mutationFn, onSuccess: () => queryClient.invalidateQueries({ queryKey: ingredientKeys.all }) });
 }
 
-export const useCreateIngredientMutation = () => useIngredientMutation((input: HouseIngredientInput) => api.post<Ingredient>('/ingredients', input));
+export const useCreateIngredientMutation = () =>
+  useIngredientMutation((input: HouseIngredientInput) => api.post<Ingredient>('/ingredients', input));
 export const useUpdateIngredientMutation = () =>
-  useIngredientMutation(({ id, input }: { id: number; input: HouseIngredientInput }) => api.put<Ingredient>(`/ingredients/${id}`, input));
+  useIngredientMutation(({ id, input }: { id: number; input: HouseIngredientInput }) =>
+    api.put<Ingredient>(`/ingredients/${id}`, input),
+  );
 export const useCopyIngredientMutation = () =>
-  useIngredientMutation(({ id, name }: { id: number; name: string }) => api.post<Ingredient>(`/ingredients/${id}/copy`, { name }));
+  useIngredientMutation(({ id, name }: { id: number; name: string }) =>
+    api.post<Ingredient>(`/ingredients/${id}/copy`, { name }),
+  );
 export const useArchiveIngredientMutation = () =>
-  useIngredientMutation(({ id, archived }: { id: number; archived: boolean }) => api.post<Ingredient>(`/ingredients/${id}/${archived ? 'archive' : 'restore'}`));
+  useIngredientMutation(({ id, archived }: { id: number; archived: boolean }) =>
+    api.post<Ingredient>(`/ingredients/${id}/${archived ? 'archive' : 'restore'}`),
+  );
 
 export function useAttachmentsQuery(ingredientId: number, enabled: boolean) {
   return useQuery({
@@ -81,7 +105,8 @@ export function useAttachmentsQuery(ingredientId: number, enabled: boolean) {
 export function useUploadAttachmentMutation(ingredientId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ file, name }: { file: Blob; name: string }) => api.upload<Attachment>(`/ingredients/${ingredientId}/attachments`, file, name),
+    mutationFn: ({ file, name }: { file: Blob; name: string }) =>
+      api.upload<Attachment>(`/ingredients/${ingredientId}/attachments`, file, name),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['ingredients', 'attachments', ingredientId] }),
   });
 }

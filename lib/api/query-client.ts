@@ -15,7 +15,8 @@ export function createQueryClient(): QueryClient {
     defaultOptions: {
       queries: {
         // Never retry what the server refused on purpose (4xx); retry network trouble twice.
-        retry: (failures, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failures < 2,
+        retry: (failures, error) =>
+          !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failures < 2,
         refetchOnWindowFocus: false,
       },
     },

@@ -1,14 +1,21 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { Change } from '../recipes/diff';
-import type { RecipeEvaluation } from '../recipes/evaluate';
-import type { ScaledRecipe } from '../recipes/scaling';
-import type { CreateRecipeInput, RecipeContent, SaveRecipeInput, ScaleRequest, TastingInput } from '../schemas/recipes';
-import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '../schemas/reviews';
+import type { RecipeCard } from '@/lib/recipes/card';
+import type { Change } from '@/lib/recipes/diff';
+import type { RecipeEvaluation } from '@/lib/recipes/evaluate';
+import type { ScaledRecipe } from '@/lib/recipes/scaling';
+import type {
+  CreateRecipeInput,
+  RecipeContent,
+  SaveRecipeInput,
+  ScaleRequest,
+  TastingInput,
+} from '@/lib/schemas/recipes';
+import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '@/lib/schemas/reviews';
+
 import { api } from './client';
 import { staleTimes } from './query-client';
 import type { RecipeDetail, RecipeSummary } from './types';
-import type { RecipeCard } from '../recipes/card';
 
 export type { RecipeDetail, RecipeSummary };
 
@@ -17,7 +24,16 @@ export interface ReviewTimeline {
   currentVersion: number;
   submittedVersion: number | null;
   approvedVersion: number | null;
-  events: { id: number; version: number; action: string; by: string | null; comment: string; overrideReason: string | null; selfApproved: boolean; at: string }[];
+  events: {
+    id: number;
+    version: number;
+    action: string;
+    by: string | null;
+    comment: string;
+    overrideReason: string | null;
+    selfApproved: boolean;
+    at: string;
+  }[];
 }
 
 export interface VersionEntry {
@@ -56,8 +72,18 @@ export const recipeKeys = {
 };
 
 /** The query string of a card: version, batch and units, as the card and card.pdf routes read it. */
-export function cardQuery(input: { version?: number | string | null; kind: string; value: number | string; units: string }): string {
-  return new URLSearchParams({ kind: input.kind, value: String(input.value), units: input.units, ...(input.version ? { version: String(input.version) } : {}) }).toString();
+export function cardQuery(input: {
+  version?: number | string | null;
+  kind: string;
+  value: number | string;
+  units: string;
+}): string {
+  return new URLSearchParams({
+    kind: input.kind,
+    value: String(input.value),
+    units: input.units,
+    ...(input.version ? { version: String(input.version) } : {}),
+  }).toString();
 }
 
 /** The printed card (or batch sheet) of a version at a batch size; undefined query: not asked yet. */
@@ -75,7 +101,8 @@ export function useRecipesQuery(q: string, status: 'draft' | 'archived' | 'appro
     queryKey: recipeKeys.list(q, status),
     staleTime: staleTimes.list,
     placeholderData: keepPreviousData,
-    queryFn: ({ signal }) => api.get<RecipeSummary[]>(`/recipes?${new URLSearchParams({ q, status }).toString()}`, signal),
+    queryFn: ({ signal }) =>
+      api.get<RecipeSummary[]>(`/recipes?${new URLSearchParams({ q, status }).toString()}`, signal),
   });
 }
 
@@ -89,11 +116,19 @@ export function useRecipeQuery(id: number, version?: number | null) {
 }
 
 export function useReviewQuery(id: number) {
-  return useQuery({ queryKey: recipeKeys.review(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<ReviewTimeline>(`/recipes/${id}/review`, signal) });
+  return useQuery({
+    queryKey: recipeKeys.review(id),
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<ReviewTimeline>(`/recipes/${id}/review`, signal),
+  });
 }
 
 export function useRecipeVersionsQuery(id: number) {
-  return useQuery({ queryKey: recipeKeys.versions(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<VersionEntry[]>(`/recipes/${id}/versions`, signal) });
+  return useQuery({
+    queryKey: recipeKeys.versions(id),
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<VersionEntry[]>(`/recipes/${id}/versions`, signal),
+  });
 }
 
 export function useRecipeDiffQuery(id: number, from: number | null, to: number) {
@@ -106,7 +141,11 @@ export function useRecipeDiffQuery(id: number, from: number | null, to: number) 
 }
 
 export function useTastingsQuery(id: number) {
-  return useQuery({ queryKey: recipeKeys.tastings(id), staleTime: staleTimes.list, queryFn: ({ signal }) => api.get<TastingEntry[]>(`/recipes/${id}/tastings`, signal) });
+  return useQuery({
+    queryKey: recipeKeys.tastings(id),
+    staleTime: staleTimes.list,
+    queryFn: ({ signal }) => api.get<TastingEntry[]>(`/recipes/${id}/tastings`, signal),
+  });
 }
 
 /** The numbers of the recipe being edited; the previous answer stays while the next loads. */
@@ -135,15 +174,26 @@ function useRecipeMutation<T, R>(mutationFn: (input: T) => Promise<R>) {
   return useMutation({ mutationFn, onSuccess: () => queryClient.invalidateQueries({ queryKey: recipeKeys.all }) });
 }
 
-export const useCreateRecipeMutation = () => useRecipeMutation((input: CreateRecipeInput) => api.post<RecipeDetail>('/recipes', input));
-export const useSaveRecipeMutation = (id: number) => useRecipeMutation((input: SaveRecipeInput) => api.put<RecipeDetail>(`/recipes/${id}`, input));
-export const useRestoreVersionMutation = (id: number) => useRecipeMutation((version: number) => api.post<RecipeDetail>(`/recipes/${id}/restore`, { version }));
-export const useDuplicateRecipeMutation = (id: number) => useRecipeMutation(() => api.post<RecipeDetail>(`/recipes/${id}/duplicate`));
+export const useCreateRecipeMutation = () =>
+  useRecipeMutation((input: CreateRecipeInput) => api.post<RecipeDetail>('/recipes', input));
+export const useSaveRecipeMutation = (id: number) =>
+  useRecipeMutation((input: SaveRecipeInput) => api.put<RecipeDetail>(`/recipes/${id}`, input));
+export const useRestoreVersionMutation = (id: number) =>
+  useRecipeMutation((version: number) => api.post<RecipeDetail>(`/recipes/${id}/restore`, { version }));
+export const useDuplicateRecipeMutation = (id: number) =>
+  useRecipeMutation(() => api.post<RecipeDetail>(`/recipes/${id}/duplicate`));
 export const useArchiveRecipeMutation = (id: number) =>
-  useRecipeMutation((archived: boolean) => api.post<RecipeSummary>(`/recipes/${id}/${archived ? 'archive' : 'restore-archived'}`));
-export const useAddTastingMutation = (id: number) => useRecipeMutation((input: TastingInput) => api.post<TastingEntry[]>(`/recipes/${id}/tastings`, input));
+  useRecipeMutation((archived: boolean) =>
+    api.post<RecipeSummary>(`/recipes/${id}/${archived ? 'archive' : 'restore-archived'}`),
+  );
+export const useAddTastingMutation = (id: number) =>
+  useRecipeMutation((input: TastingInput) => api.post<TastingEntry[]>(`/recipes/${id}/tastings`, input));
 
-export const useSubmitMutation = (id: number) => useRecipeMutation((input: SubmitInput) => api.post<ReviewTimeline>(`/recipes/${id}/submit`, input));
-export const useApproveMutation = (id: number) => useRecipeMutation((input: ApproveInput) => api.post<ReviewTimeline>(`/recipes/${id}/approve`, input));
-export const useReturnMutation = (id: number) => useRecipeMutation((input: ReturnInput) => api.post<ReviewTimeline>(`/recipes/${id}/return`, input));
-export const useWithdrawMutation = (id: number) => useRecipeMutation((input: WithdrawInput) => api.post<ReviewTimeline>(`/recipes/${id}/withdraw`, input));
+export const useSubmitMutation = (id: number) =>
+  useRecipeMutation((input: SubmitInput) => api.post<ReviewTimeline>(`/recipes/${id}/submit`, input));
+export const useApproveMutation = (id: number) =>
+  useRecipeMutation((input: ApproveInput) => api.post<ReviewTimeline>(`/recipes/${id}/approve`, input));
+export const useReturnMutation = (id: number) =>
+  useRecipeMutation((input: ReturnInput) => api.post<ReviewTimeline>(`/recipes/${id}/return`, input));
+export const useWithdrawMutation = (id: number) =>
+  useRecipeMutation((input: WithdrawInput) => api.post<ReviewTimeline>(`/recipes/${id}/withdraw`, input));

@@ -1,7 +1,15 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { AcceptInvitationInput, ConfirmSignUpInput, ForgotPasswordInput, ResetPasswordInput, SignInInput, SignUpInput } from '../schemas/auth';
-import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '../schemas/team';
+import type {
+  AcceptInvitationInput,
+  ConfirmSignUpInput,
+  ForgotPasswordInput,
+  ResetPasswordInput,
+  SignInInput,
+  SignUpInput,
+} from '@/lib/schemas/auth';
+import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '@/lib/schemas/team';
+
 import { api, ApiError } from './client';
 import { staleTimes } from './query-client';
 import type { InvitationPreview, ServerInfo, Session } from './types';
@@ -30,7 +38,11 @@ export function useSessionQuery() {
 
 /** Server facts the client needs (version, whether mail goes to the local outbox). */
 export function useServerInfoQuery() {
-  return useQuery({ queryKey: sessionKeys.serverInfo, staleTime: staleTimes.static, queryFn: ({ signal }) => api.get<ServerInfo>('/health', signal) });
+  return useQuery({
+    queryKey: sessionKeys.serverInfo,
+    staleTime: staleTimes.static,
+    queryFn: ({ signal }) => api.get<ServerInfo>('/health', signal),
+  });
 }
 
 /**
@@ -41,13 +53,19 @@ function useReplaceSession() {
   const queryClient = useQueryClient();
   return (session: Session | null) => {
     queryClient.setQueryData(sessionKeys.current, session);
-    queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== sessionKeys.current[0] && query.queryKey[0] !== sessionKeys.serverInfo[0] });
+    queryClient.removeQueries({
+      predicate: (query) =>
+        query.queryKey[0] !== sessionKeys.current[0] && query.queryKey[0] !== sessionKeys.serverInfo[0],
+    });
   };
 }
 
 export function useSignInMutation() {
   const start = useReplaceSession();
-  return useMutation({ mutationFn: (input: SignInInput) => api.post<Session>('/auth/sign-in', input), onSuccess: start });
+  return useMutation({
+    mutationFn: (input: SignInInput) => api.post<Session>('/auth/sign-in', input),
+    onSuccess: start,
+  });
 }
 
 /** Starts a sign-up; the account exists once the link e-mailed to the address is followed. */
@@ -57,7 +75,10 @@ export function useSignUpMutation() {
 
 export function useConfirmSignUpMutation() {
   const start = useReplaceSession();
-  return useMutation({ mutationFn: (input: ConfirmSignUpInput) => api.post<Session>('/auth/confirm-sign-up', input), onSuccess: start });
+  return useMutation({
+    mutationFn: (input: ConfirmSignUpInput) => api.post<Session>('/auth/confirm-sign-up', input),
+    onSuccess: start,
+  });
 }
 
 export function useSignOutMutation() {
@@ -66,12 +87,17 @@ export function useSignOutMutation() {
 }
 
 export function useForgotPasswordMutation() {
-  return useMutation({ mutationFn: (input: ForgotPasswordInput) => api.post<{ message: string }>('/auth/forgot-password', input) });
+  return useMutation({
+    mutationFn: (input: ForgotPasswordInput) => api.post<{ message: string }>('/auth/forgot-password', input),
+  });
 }
 
 export function useResetPasswordMutation() {
   const start = useReplaceSession();
-  return useMutation({ mutationFn: (input: ResetPasswordInput) => api.post<Session>('/auth/reset-password', input), onSuccess: start });
+  return useMutation({
+    mutationFn: (input: ResetPasswordInput) => api.post<Session>('/auth/reset-password', input),
+    onSuccess: start,
+  });
 }
 
 export function useInvitationQuery(token: string | undefined) {
@@ -85,7 +111,10 @@ export function useInvitationQuery(token: string | undefined) {
 
 export function useAcceptInvitationMutation() {
   const start = useReplaceSession();
-  return useMutation({ mutationFn: (input: AcceptInvitationInput) => api.post<Session>('/auth/accept-invitation', input), onSuccess: start });
+  return useMutation({
+    mutationFn: (input: AcceptInvitationInput) => api.post<Session>('/auth/accept-invitation', input),
+    onSuccess: start,
+  });
 }
 
 export function useUpdateProfileMutation() {
@@ -103,7 +132,8 @@ export function useUpdatePreferencesMutation() {
     mutationFn: (input: PreferencesInput) => api.patch<Session>('/profile/preferences', input),
     onMutate: (input) => {
       const previous = queryClient.getQueryData<Session | null>(sessionKeys.current);
-      if (previous) queryClient.setQueryData(sessionKeys.current, { ...previous, user: { ...previous.user, ...input } });
+      if (previous)
+        queryClient.setQueryData(sessionKeys.current, { ...previous, user: { ...previous.user, ...input } });
       return { previous };
     },
     onError: (_error, _input, context) => queryClient.setQueryData(sessionKeys.current, context?.previous),

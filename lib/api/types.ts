@@ -1,9 +1,9 @@
-import type { Allergen, Category, Measure } from '../ingredients';
-import type { Role } from '../roles';
-import type { BottleFormatInput } from '../schemas/bottle-formats';
-import type { RecipeContent } from '../schemas/recipes';
-import type { ReviewState } from '../schemas/reviews';
-import type { UnitSystem } from '../units';
+import type { Allergen, Category, Measure } from '@/lib/ingredients';
+import type { Role } from '@/lib/roles';
+import type { BottleFormatInput } from '@/lib/schemas/bottle-formats';
+import type { RecipeContent } from '@/lib/schemas/recipes';
+import type { ReviewState } from '@/lib/schemas/reviews';
+import type { UnitSystem } from '@/lib/units';
 
 /** The uniform error body every API error carries. */
 export interface ErrorBody {
@@ -101,7 +101,14 @@ export interface Ingredient {
   scope: 'dataset' | 'house';
   name: string;
   category: Category;
-  per100g: { energyKcal: number | null; carbohydrateG: number | null; sugarsG: number | null; fibreG: number | null; fatG: number | null; proteinG: number | null };
+  per100g: {
+    energyKcal: number | null;
+    carbohydrateG: number | null;
+    sugarsG: number | null;
+    fibreG: number | null;
+    fatG: number | null;
+    proteinG: number | null;
+  };
   perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
   fermentableSharePct: number;
   steepSharePct: number;

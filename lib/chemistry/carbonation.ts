@@ -1,6 +1,21 @@
 import { CO2_G_PER_VOLUME, MOLAR_VOLUME_STP_L } from './constants';
-import { abvPercent, EXPECTED_YIELD, fermentationProducts, yieldFactor, type FermentableSugar, type YieldCase } from './fermentation';
-import { equilibriumAt, liquidFills, maxCo2MolForGauge, molToVolumes, volumesToMol, type Container, type Equilibrium } from './pressure';
+import {
+  abvPercent,
+  EXPECTED_YIELD,
+  type FermentableSugar,
+  fermentationProducts,
+  type YieldCase,
+  yieldFactor,
+} from './fermentation';
+import {
+  type Container,
+  type Equilibrium,
+  equilibriumAt,
+  liquidFills,
+  maxCo2MolForGauge,
+  molToVolumes,
+  volumesToMol,
+} from './pressure';
 import { residualVolumesAfterOpen } from './solubility';
 import { SUGARS, type SugarType } from './sugars';
 
@@ -74,7 +89,13 @@ export interface CaseSummary {
 export interface CarbonationResult extends CaseResult {
   /** The warm-day temperature added after the asked ones (the last pressure), or null when none was added. */
   warmDayTempC: number | null;
-  sugar: { fermentableG: number; fermentableGPerL: number; sweetOnlyG: number; fromIngredientsG: number; addedG: number };
+  sugar: {
+    fermentableG: number;
+    fermentableGPerL: number;
+    sweetOnlyG: number;
+    fromIngredientsG: number;
+    addedG: number;
+  };
   /** Both cases side by side, in brief; the top-level co2, alcohol and pressures are those of the requested yield. */
   cases: { worst: CaseSummary; expected: CaseSummary };
   findings: Finding[];
@@ -90,8 +111,12 @@ export const MODEL_RANGE_C = { min: 0, max: 40 } as const;
 export const DEFAULT_WARMEST_TEMP_C = 35;
 
 /** The temperatures to check: those asked, and the warm day when it is hotter than all of them. */
-export function temperaturesToCheck(temperaturesC: number[], warmDayTempC: number | null | undefined): { temperaturesC: number[]; added: number | null } {
-  if (warmDayTempC === undefined || warmDayTempC === null || temperaturesC.some((t) => t >= warmDayTempC)) return { temperaturesC, added: null };
+export function temperaturesToCheck(
+  temperaturesC: number[],
+  warmDayTempC: number | null | undefined,
+): { temperaturesC: number[]; added: number | null } {
+  if (warmDayTempC === undefined || warmDayTempC === null || temperaturesC.some((t) => t >= warmDayTempC))
+    return { temperaturesC, added: null };
   return { temperaturesC: [...temperaturesC, warmDayTempC], added: warmDayTempC };
 }
 
@@ -141,7 +166,10 @@ function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients
 
 /** True when neither the residual CO2 nor the temperature the base was last open at is given. */
 export function residualCo2Unknown(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC'>): boolean {
-  return (input.residualCo2Volumes === undefined || input.residualCo2Volumes === null) && (input.lastOpenTempC === undefined || input.lastOpenTempC === null);
+  return (
+    (input.residualCo2Volumes === undefined || input.residualCo2Volumes === null) &&
+    (input.lastOpenTempC === undefined || input.lastOpenTempC === null)
+  );
 }
 
 /**
@@ -149,14 +177,19 @@ export function residualCo2Unknown(input: Pick<CarbonationInput, 'residualCo2Vol
  * was last open at. When neither is known it is never taken as zero: a fermented base holds CO2, and counting more of
  * it gives the higher pressure, so it is taken as saturated under 1 atm at the sealing temperature (and said so).
  */
-export function residualVolumes(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC' | 'sealedTempC'>): number {
+export function residualVolumes(
+  input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC' | 'sealedTempC'>,
+): number {
   if (input.residualCo2Volumes !== undefined && input.residualCo2Volumes !== null) return input.residualCo2Volumes;
-  if (input.lastOpenTempC !== undefined && input.lastOpenTempC !== null) return residualVolumesAfterOpen(input.lastOpenTempC);
+  if (input.lastOpenTempC !== undefined && input.lastOpenTempC !== null)
+    return residualVolumesAfterOpen(input.lastOpenTempC);
   return residualVolumesAfterOpen(input.sealedTempC);
 }
 
 /** The assumption shown with every answer whose residual CO2 was not given. */
-export function residualAssumption(input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC' | 'sealedTempC'>): CarbonationResult['assumptions'] {
+export function residualAssumption(
+  input: Pick<CarbonationInput, 'residualCo2Volumes' | 'lastOpenTempC' | 'sealedTempC'>,
+): CarbonationResult['assumptions'] {
   if (!residualCo2Unknown(input)) return [];
   return [
     {
@@ -167,14 +200,23 @@ export function residualAssumption(input: Pick<CarbonationInput, 'residualCo2Vol
   ];
 }
 
-function caseResult(input: CarbonationInput, container: Container, portions: FermentableSugar[], which: YieldCase): CaseResult {
+function caseResult(
+  input: CarbonationInput,
+  container: Container,
+  portions: FermentableSugar[],
+  which: YieldCase,
+): CaseResult {
   const residual = residualVolumes(input);
   const products = fermentationProducts(portions, yieldFactor(which));
   const totalMol = volumesToMol(residual, input.liquidMl) + products.co2Mol;
   const added = abvPercent(products.ethanolG, input.liquidMl);
   const rating = input.maxWorkingPressureBar ?? null;
   return {
-    co2: { residualVolumes: sig(residual), fromSugarVolumes: sig(molToVolumes(products.co2Mol, input.liquidMl)), totalVolumes: sig(molToVolumes(totalMol, input.liquidMl)) },
+    co2: {
+      residualVolumes: sig(residual),
+      fromSugarVolumes: sig(molToVolumes(products.co2Mol, input.liquidMl)),
+      totalVolumes: sig(molToVolumes(totalMol, input.liquidMl)),
+    },
     alcohol: { addedAbvPercent: sig(added), totalAbvPercent: sig(input.baseAbvPercent + added) },
     pressures: input.temperaturesC.map((tempC) => {
       const eq = equilibriumAt(container, totalMol, tempC);
@@ -199,17 +241,45 @@ function pressureFindings(worst: CaseResult, rating: number | null): Finding[] {
   const at = `${round(hottest.gaugeBar, 2)} bar (${round(hottest.gaugePsi, 0)} psi) gauge at ${hottest.tempC} °C`;
   const values = { tempC: hottest.tempC, gaugeBar: round(hottest.gaugeBar, 3), gaugePsi: round(hottest.gaugePsi, 1) };
   if (rating === null) {
-    return [{ level: 'caution', code: 'no-rating', message: `Worst case ${at}. No bottle rating was given to compare it with: choose a bottle format.`, values }];
+    return [
+      {
+        level: 'caution',
+        code: 'no-rating',
+        message: `Worst case ${at}. No bottle rating was given to compare it with: choose a bottle format.`,
+        values,
+      },
+    ];
   }
   const withRating = { ...values, ratingBar: rating };
   const level = ratingLevel(hottest.gaugeBar, rating);
   if (level === 'danger') {
-    return [{ level: 'danger', code: 'pressure-over-rating', message: `Worst case ${at} is at or over the bottle's ${rating} bar rating. Use less sugar, stronger bottles, or keep them colder.`, values: withRating }];
+    return [
+      {
+        level: 'danger',
+        code: 'pressure-over-rating',
+        message: `Worst case ${at} is at or over the bottle's ${rating} bar rating. Use less sugar, stronger bottles, or keep them colder.`,
+        values: withRating,
+      },
+    ];
   }
   if (level === 'caution') {
-    return [{ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${at} is within 25 % of the bottle's ${rating} bar rating.`, values: withRating }];
+    return [
+      {
+        level: 'caution',
+        code: 'pressure-near-rating',
+        message: `Worst case ${at} is within 25 % of the bottle's ${rating} bar rating.`,
+        values: withRating,
+      },
+    ];
   }
-  return [{ level: 'ok', code: 'pressure-within-rating', message: `Worst case ${at} stays well within the bottle's ${rating} bar rating.`, values: withRating }];
+  return [
+    {
+      level: 'ok',
+      code: 'pressure-within-rating',
+      message: `Worst case ${at} stays well within the bottle's ${rating} bar rating.`,
+      values: withRating,
+    },
+  ];
 }
 
 /**
@@ -232,17 +302,41 @@ export function fillFindings(container: Container, temperaturesC: number[]): Fin
 
 function alcoholFindings(worst: CaseResult, expected: CaseResult, limit: number): Finding[] {
   const total = worst.alcohol.totalAbvPercent;
-  const values = { worstTotalAbvPercent: round(total, 3), expectedTotalAbvPercent: round(expected.alcohol.totalAbvPercent, 3), limitAbvPercent: limit };
+  const values = {
+    worstTotalAbvPercent: round(total, 3),
+    expectedTotalAbvPercent: round(expected.alcohol.totalAbvPercent, 3),
+    limitAbvPercent: limit,
+  };
   const text = `${round(total, 2)} % ABV in the worst case`;
   // US rules (27 CFR 7.1, and 27 CFR 1.10 and 26 U.S.C. 5052 for beer: "0.5 percent or more"): at the limit is over it.
-  if (total >= limit) return [{ level: 'danger', code: 'alcohol-over-limit', message: `${text}: at or over the ${limit} % ABV limit for non-alcoholic drinks.`, values }];
-  if (total >= limit * 0.8) return [{ level: 'caution', code: 'alcohol-near-limit', message: `${text}: within 20 % of the ${limit} % ABV limit.`, values }];
+  if (total >= limit)
+    return [
+      {
+        level: 'danger',
+        code: 'alcohol-over-limit',
+        message: `${text}: at or over the ${limit} % ABV limit for non-alcoholic drinks.`,
+        values,
+      },
+    ];
+  if (total >= limit * 0.8)
+    return [
+      {
+        level: 'caution',
+        code: 'alcohol-near-limit',
+        message: `${text}: within 20 % of the ${limit} % ABV limit.`,
+        values,
+      },
+    ];
   return [{ level: 'ok', code: 'alcohol-within-limit', message: `${text}, under the ${limit} % ABV limit.`, values }];
 }
 
 function inputFindings(input: CarbonationInput, fermentableGPerL: number): Finding[] {
   const findings: Finding[] = [];
-  const temps = [...input.temperaturesC, input.sealedTempC, ...(input.lastOpenTempC != null ? [input.lastOpenTempC] : [])];
+  const temps = [
+    ...input.temperaturesC,
+    input.sealedTempC,
+    ...(input.lastOpenTempC != null ? [input.lastOpenTempC] : []),
+  ];
   const outside = temps.filter((t) => t < MODEL_RANGE_C.min || t > MODEL_RANGE_C.max);
   const freezing = temps.filter((t) => t < 0);
   if (freezing.length > 0) {
@@ -274,7 +368,8 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
     findings.push({
       level: 'caution',
       code: 'solids-in-bottle',
-      message: 'Fruit, purée or other solids stay in the bottle: fermentation and pressure keep rising as long as sugar remains. Rely on the worst case, chill on time and check a test bottle.',
+      message:
+        'Fruit, purée or other solids stay in the bottle: fermentation and pressure keep rising as long as sugar remains. Rely on the worst case, chill on time and check a test bottle.',
     });
   }
   // Steeped or in the bottle alike: fat reaches the liquid either way.
@@ -285,7 +380,12 @@ function inputFindings(input: CarbonationInput, fermentableGPerL: number): Findi
       code: 'fatty-ingredients',
       // Common practice, no source: fats go rancid in a wet acidic drink and flatten foam.
       message: `${fatty.map((i) => i.name).join(', ')} bring${fatty.length === 1 ? 's' : ''} fat: expect rancid off-flavours over time and poorer foam.`,
-      values: { fatG: round(fatty.reduce((sum, i) => sum + i.fatG, 0), 2) },
+      values: {
+        fatG: round(
+          fatty.reduce((sum, i) => sum + i.fatG, 0),
+          2,
+        ),
+      },
     });
   }
   return findings;
@@ -302,15 +402,35 @@ export const PH_CAUTION_FROM = 4.0;
 function phFindings(input: Pick<CarbonationInput, 'ph' | 'phRequired'>): Finding[] {
   if (input.ph === undefined || input.ph === null) {
     return input.phRequired
-      ? [{ level: 'caution', code: 'ph-missing', message: `No pH is given for the base. Measure it: a base must be at pH ${PH_LIMIT} or below before it is flavoured.` }]
+      ? [
+          {
+            level: 'caution',
+            code: 'ph-missing',
+            message: `No pH is given for the base. Measure it: a base must be at pH ${PH_LIMIT} or below before it is flavoured.`,
+          },
+        ]
       : [];
   }
   const values = { ph: input.ph, limitPh: PH_LIMIT };
   if (input.ph > PH_LIMIT) {
-    return [{ level: 'danger', code: 'ph-over-limit', message: `pH ${input.ph} is above ${PH_LIMIT}: the base is not acidic enough to be safe. Do not flavour it; add starter and test again.`, values }];
+    return [
+      {
+        level: 'danger',
+        code: 'ph-over-limit',
+        message: `pH ${input.ph} is above ${PH_LIMIT}: the base is not acidic enough to be safe. Do not flavour it; add starter and test again.`,
+        values,
+      },
+    ];
   }
   if (input.ph >= PH_CAUTION_FROM) {
-    return [{ level: 'caution', code: 'ph-near-limit', message: `pH ${input.ph} is close to the ${PH_LIMIT} limit: test again before flavouring.`, values }];
+    return [
+      {
+        level: 'caution',
+        code: 'ph-near-limit',
+        message: `pH ${input.ph} is close to the ${PH_LIMIT} limit: test again before flavouring.`,
+        values,
+      },
+    ];
   }
   return [{ level: 'ok', code: 'ph-within-limit', message: `pH ${input.ph} is at or below ${PH_LIMIT}.`, values }];
 }
@@ -341,23 +461,43 @@ const ASSUMPTIONS: CarbonationResult['assumptions'] = [
   { name: 'CO2 solubility', value: 'K0(T), fresh water', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
   {
     name: 'Headspace',
-    value: 'ideal gas; the air sealed in, in the headspace and dissolved in the liquid, and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)',
+    value:
+      'ideal gas; the air sealed in, in the headspace and dissolved in the liquid, and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)',
     source: 'ideal gas, Dalton; N2, O2 and Ar solubility from Weiss (1970), Deep-Sea Research 17:721–735',
   },
   {
     name: 'Liquid expansion',
-    value: 'the liquid expands as water does, shrinking the headspace as it warms; the glass taken not to expand (errs high)',
+    value:
+      'the liquid expands as water does, shrinking the headspace as it warms; the glass taken not to expand (errs high)',
     source: 'water density, Tanaka et al. (2001), Metrologia 38:301–309',
   },
-  { name: 'Fermentation', value: 'hexose → 2 ethanol + 2 CO2; sucrose + water → 4 + 4; mixed sugars at sucrose’s yield per gram', source: 'Gay-Lussac' },
+  {
+    name: 'Fermentation',
+    value: 'hexose → 2 ethanol + 2 CO2; sucrose + water → 4 + 4; mixed sugars at sucrose’s yield per gram',
+    source: 'Gay-Lussac',
+  },
   { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur (from memory)' },
-  { name: 'Volume of CO2', value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`, source: 'CODATA 2018' },
+  {
+    name: 'Volume of CO2',
+    value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`,
+    source: 'CODATA 2018',
+  },
   { name: 'Alcohol', value: 'ethanol 0.78924 g/mL at 20 °C', source: 'CRC Handbook' },
-  { name: 'Residual CO2 from temperature', value: 'saturated under 1 atm of CO2', source: 'common practice, no source' },
-  { name: 'Steeped ingredients', value: 'the expected case takes the extraction share you give; the worst case, which the findings judge, takes all of the sugar', source: 'taken high on purpose' },
+  {
+    name: 'Residual CO2 from temperature',
+    value: 'saturated under 1 atm of CO2',
+    source: 'common practice, no source',
+  },
+  {
+    name: 'Steeped ingredients',
+    value:
+      'the expected case takes the extraction share you give; the worst case, which the findings judge, takes all of the sugar',
+    source: 'taken high on purpose',
+  },
   {
     name: 'Starch',
-    value: 'not counted when sugars are measured: kombucha cultures ferment little starch (their yeasts, such as Brettanomyces and Zygosaccharomyces, have little amylase). When sugars are not measured, all available carbohydrate counts',
+    value:
+      'not counted when sugars are measured: kombucha cultures ferment little starch (their yeasts, such as Brettanomyces and Zygosaccharomyces, have little amylase). When sugars are not measured, all available carbohydrate counts',
     source: 'microbiology of kombucha cultures (from memory)',
   },
 ];
@@ -366,7 +506,11 @@ const ASSUMPTIONS: CarbonationResult['assumptions'] = [
 export function computeCarbonation(asked: CarbonationInput): CarbonationResult {
   const checked = temperaturesToCheck(asked.temperaturesC, asked.warmDayTempC);
   const input = { ...asked, temperaturesC: checked.temperaturesC };
-  const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
+  const container: Container = {
+    liquidMl: input.liquidMl,
+    headspaceMl: input.headspaceMl,
+    sealedTempC: input.sealedTempC,
+  };
   const worstSugars = fermentableSugars(input, 'worst');
   const expectedSugars = fermentableSugars(input, 'expected');
   const { addedG, fromIngredientsG, sweetOnlyG } = input.yield === 'worst' ? worstSugars : expectedSugars;
@@ -375,9 +519,19 @@ export function computeCarbonation(asked: CarbonationInput): CarbonationResult {
   const worst = caseResult(input, container, worstSugars.portions, 'worst');
   const expected = caseResult(input, container, expectedSugars.portions, 'expected');
   const chosen = input.yield === 'worst' ? worst : expected;
-  const brief = (c: CaseResult): CaseSummary => ({ co2: c.co2, alcohol: c.alcohol, gaugeBar: c.pressures.map((p) => p.gaugeBar) });
+  const brief = (c: CaseResult): CaseSummary => ({
+    co2: c.co2,
+    alcohol: c.alcohol,
+    gaugeBar: c.pressures.map((p) => p.gaugeBar),
+  });
   return {
-    sugar: { fermentableG: sig(fermentableG), fermentableGPerL: sig(fermentableGPerL), sweetOnlyG: sig(sweetOnlyG), fromIngredientsG: sig(fromIngredientsG), addedG: sig(addedG) },
+    sugar: {
+      fermentableG: sig(fermentableG),
+      fermentableGPerL: sig(fermentableGPerL),
+      sweetOnlyG: sig(sweetOnlyG),
+      fromIngredientsG: sig(fromIngredientsG),
+      addedG: sig(addedG),
+    },
     ...chosen,
     cases: { worst: brief(worst), expected: brief(expected) },
     warmDayTempC: checked.added,
@@ -450,33 +604,64 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   const input = { ...asked, highestTempC: checkedTempC };
   const info = SUGARS[input.sugarType];
   const residual = residualVolumes(input);
-  const container: Container = { liquidMl: input.liquidMl, headspaceMl: input.headspaceMl, sealedTempC: input.sealedTempC };
+  const container: Container = {
+    liquidMl: input.liquidMl,
+    headspaceMl: input.headspaceMl,
+    sealedTempC: input.sealedTempC,
+  };
   // Grams of the product that make one mole of CO2 at the chosen yield.
   const gramsPerCo2Mol = info.molarMass / info.co2PerMole / (info.sugarFraction * info.fermentableShare);
   const neededMol = volumesToMol(Math.max(0, input.targetVolumes - residual), input.liquidMl);
   const sugarG = (neededMol * gramsPerCo2Mol) / yieldFactor(input.yield);
-  const portion: FermentableSugar = { grams: sugarG * info.sugarFraction * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole };
+  const portion: FermentableSugar = {
+    grams: sugarG * info.sugarFraction * info.fermentableShare,
+    molarMass: info.molarMass,
+    co2PerMole: info.co2PerMole,
+  };
   const added = abvPercent(fermentationProducts([portion], yieldFactor(input.yield)).ethanolG, input.liquidMl);
   const worstMol = volumesToMol(residual, input.liquidMl) + fermentationProducts([portion], 1).co2Mol;
   const worstGauge = equilibriumAt(container, worstMol, input.highestTempC).gaugeBar;
   const rating = input.maxWorkingPressureBar ?? null;
   const share = input.ratingShare ?? DEFAULT_RATING_SHARE;
   const pressureCapG =
-    rating === null ? Infinity : Math.max(0, (maxCo2MolForGauge(container, rating * share, input.highestTempC) - volumesToMol(residual, input.liquidMl)) * gramsPerCo2Mol);
+    rating === null
+      ? Infinity
+      : Math.max(
+          0,
+          (maxCo2MolForGauge(container, rating * share, input.highestTempC) - volumesToMol(residual, input.liquidMl)) *
+            gramsPerCo2Mol,
+        );
   // The alcohol is linear in the sugar: stay a hair below the limit, since at the limit is over it.
   // Judged at the theoretical yield (the worst case), whatever case is shown.
-  const abvPerGram = abvPercent(fermentationProducts([{ grams: info.sugarFraction * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole }], 1).ethanolG, input.liquidMl);
+  const abvPerGram = abvPercent(
+    fermentationProducts(
+      [{ grams: info.sugarFraction * info.fermentableShare, molarMass: info.molarMass, co2PerMole: info.co2PerMole }],
+      1,
+    ).ethanolG,
+    input.liquidMl,
+  );
   const alcoholCapG = Math.max(0, ((input.abvLimitPercent - input.baseAbvPercent) / abvPerGram) * 0.999);
   const maxSafeSugarG = rating === null ? null : Math.min(pressureCapG, alcoholCapG);
-  const limitedBy: PrimingResult['limitedBy'] = sugarG <= Math.min(pressureCapG, alcoholCapG) ? null : alcoholCapG < pressureCapG ? 'alcohol' : 'pressure';
+  const limitedBy: PrimingResult['limitedBy'] =
+    sugarG <= Math.min(pressureCapG, alcoholCapG) ? null : alcoholCapG < pressureCapG ? 'alcohol' : 'pressure';
   const safeSugarG = Math.min(sugarG, pressureCapG, alcoholCapG);
 
   const findings: Finding[] = [...fillFindings(container, [input.sealedTempC, input.highestTempC])];
   if (residual >= input.targetVolumes) {
-    findings.push({ level: 'ok', code: 'already-at-target', message: `The liquid already holds ${round(residual)} volumes: no sugar is needed for ${input.targetVolumes}.` });
+    findings.push({
+      level: 'ok',
+      code: 'already-at-target',
+      message: `The liquid already holds ${round(residual)} volumes: no sugar is needed for ${input.targetVolumes}.`,
+    });
   }
   if (maxSafeSugarG !== null && rating !== null) {
-    const values = { sugarG: round(sugarG, 2), maxSafeSugarG: round(maxSafeSugarG, 2), ratingBar: rating, highestTempC: input.highestTempC, ratingShare: share };
+    const values = {
+      sugarG: round(sugarG, 2),
+      maxSafeSugarG: round(maxSafeSugarG, 2),
+      ratingBar: rating,
+      highestTempC: input.highestTempC,
+      ratingShare: share,
+    };
     if (limitedBy !== null) {
       const why =
         limitedBy === 'pressure'
@@ -489,18 +674,42 @@ export function computePriming(asked: PrimingInput): PrimingResult {
         values,
       });
     } else if (ratingLevel(worstGauge, rating) !== 'ok') {
-      findings.push({ level: 'caution', code: 'pressure-near-rating', message: `Worst case ${round(worstGauge)} bar at ${input.highestTempC} °C is within 25 % of the ${rating} bar rating.`, values });
+      findings.push({
+        level: 'caution',
+        code: 'pressure-near-rating',
+        message: `Worst case ${round(worstGauge)} bar at ${input.highestTempC} °C is within 25 % of the ${rating} bar rating.`,
+        values,
+      });
     } else {
-      findings.push({ level: 'ok', code: 'pressure-within-rating', message: `Up to ${round(maxSafeSugarG, 1)} g stays within the ${rating} bar rating at ${input.highestTempC} °C in the worst case.`, values });
+      findings.push({
+        level: 'ok',
+        code: 'pressure-within-rating',
+        message: `Up to ${round(maxSafeSugarG, 1)} g stays within the ${rating} bar rating at ${input.highestTempC} °C in the worst case.`,
+        values,
+      });
     }
   } else {
-    findings.push({ level: 'caution', code: 'no-rating', message: 'No bottle rating was given: choose a bottle format to see the most sugar it can take.' });
+    findings.push({
+      level: 'caution',
+      code: 'no-rating',
+      message: 'No bottle rating was given: choose a bottle format to see the most sugar it can take.',
+    });
   }
   const total = input.baseAbvPercent + added;
   if (total >= input.abvLimitPercent) {
-    findings.push({ level: 'danger', code: 'alcohol-over-limit', message: `This sugar brings the drink to ${round(total)} % ABV, at or over the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
+    findings.push({
+      level: 'danger',
+      code: 'alcohol-over-limit',
+      message: `This sugar brings the drink to ${round(total)} % ABV, at or over the ${input.abvLimitPercent} % limit.`,
+      values: { totalAbvPercent: round(total, 3) },
+    });
   } else if (total >= input.abvLimitPercent * 0.8) {
-    findings.push({ level: 'caution', code: 'alcohol-near-limit', message: `This sugar brings the drink to ${round(total)} % ABV, within 20 % of the ${input.abvLimitPercent} % limit.`, values: { totalAbvPercent: round(total, 3) } });
+    findings.push({
+      level: 'caution',
+      code: 'alcohol-near-limit',
+      message: `This sugar brings the drink to ${round(total)} % ABV, within 20 % of the ${input.abvLimitPercent} % limit.`,
+      values: { totalAbvPercent: round(total, 3) },
+    });
   }
   return {
     checkedTempC,

@@ -25,7 +25,10 @@ export interface FermentableSugar {
  * CO2 and ethanol from fermenting sugar, in grams (Gay-Lussac: C6H12O6 → 2 C2H5OH + 2 CO2;
  * C12H22O11 + H2O → 4 C2H5OH + 4 CO2), scaled by the yield factor (0–1).
  */
-export function fermentationProducts(sugars: FermentableSugar[], yieldFactorValue: number): { co2Mol: number; co2G: number; ethanolG: number } {
+export function fermentationProducts(
+  sugars: FermentableSugar[],
+  yieldFactorValue: number,
+): { co2Mol: number; co2G: number; ethanolG: number } {
   const moles = sugars.reduce((sum, s) => sum + (s.grams / s.molarMass) * s.co2PerMole, 0) * yieldFactorValue;
   return { co2Mol: moles, co2G: moles * M_CO2, ethanolG: moles * M_ETHANOL };
 }

@@ -35,14 +35,18 @@ export interface Equilibrium {
  * taken not to expand, which leaves less room and so errs high (soda-lime glass grows by about 3 × 9·10⁻⁶ of its volume
  * per kelvin, a tenth of water's 2·10⁻⁴ near 20 °C; from memory).
  */
-export function volumesAt(container: Container, tempC: number): { liquidMl: number; headspaceMl: number; liquidFills: boolean } {
+export function volumesAt(
+  container: Container,
+  tempC: number,
+): { liquidMl: number; headspaceMl: number; liquidFills: boolean } {
   const liquidMl = (container.liquidMl * waterDensityGPerL(container.sealedTempC)) / waterDensityGPerL(tempC);
   const headspaceMl = container.liquidMl + container.headspaceMl - liquidMl;
   return { liquidMl, headspaceMl: Math.max(0, headspaceMl), liquidFills: headspaceMl <= 0 };
 }
 
 /** kg of liquid in the container (taken as water's density at the sealing temperature). */
-const liquidKg = (container: Container) => (container.liquidMl / 1000) * (waterDensityGPerL(container.sealedTempC) / 1000);
+const liquidKg = (container: Container) =>
+  (container.liquidMl / 1000) * (waterDensityGPerL(container.sealedTempC) / 1000);
 
 /**
  * Partial pressure of the sealed-in air at `tempC`, atm. When the cap goes on, the headspace holds air and water
@@ -62,7 +66,9 @@ export function airPartialAtm(container: Container, tempC: number): number {
   let total = 0;
   for (const gas of AIR_GASES) {
     const sealedAtm = gas.moleFraction * dryAirAtm;
-    const mol = (bunsenCoefficient(gas, container.sealedTempC) * sealedAtm * sealedLiquidL) / MOLAR_VOLUME_STP_L + (sealedAtm * sealedGasL) / (R_L_ATM * sealedK);
+    const mol =
+      (bunsenCoefficient(gas, container.sealedTempC) * sealedAtm * sealedLiquidL) / MOLAR_VOLUME_STP_L +
+      (sealedAtm * sealedGasL) / (R_L_ATM * sealedK);
     total += mol / ((bunsenCoefficient(gas, tempC) * liquidL) / MOLAR_VOLUME_STP_L + gasL / (R_L_ATM * k));
   }
   return total;
@@ -89,7 +95,9 @@ export function equilibriumAt(container: Container, totalCo2Mol: number, tempC: 
     co2PartialAtm,
     gaugeBar,
     gaugePsi: gaugeBar * PSI_PER_BAR,
-    dissolvedVolumes: (co2SolubilityMolPerKgAtm(tempC) * liquidKg(container) * co2PartialAtm * MOLAR_VOLUME_STP_L) / (container.liquidMl / 1000),
+    dissolvedVolumes:
+      (co2SolubilityMolPerKgAtm(tempC) * liquidKg(container) * co2PartialAtm * MOLAR_VOLUME_STP_L) /
+      (container.liquidMl / 1000),
     headspaceMl: now.headspaceMl,
     liquidFills: now.liquidFills,
   };
@@ -111,16 +119,23 @@ export function maxCo2MolForGauge(container: Container, gaugeBar: number, tempC:
  * least headspace that keeps a gas space at all of them in a bottle of the same brimful volume. Null when a gas
  * space remains at every temperature.
  */
-export function liquidFills(container: Container, temperaturesC: number[]): { tempC: number; leastHeadspaceMl: number } | null {
+export function liquidFills(
+  container: Container,
+  temperaturesC: number[],
+): { tempC: number; leastHeadspaceMl: number } | null {
   const filling = temperaturesC.filter((t) => volumesAt(container, t).liquidFills);
   if (filling.length === 0) return null;
   const brimfulMl = container.liquidMl + container.headspaceMl;
   const sealedDensity = waterDensityGPerL(container.sealedTempC);
   // Filled at the sealing temperature, V mL of liquid takes V·ρ(sealed)/ρ(T) mL at T; it fits when that is at most the
   // brimful volume, so the headspace must be at least brimful × (1 − ρ(T)/ρ(sealed)).
-  const leastHeadspaceMl = Math.max(0, ...temperaturesC.map((t) => brimfulMl * (1 - waterDensityGPerL(t) / sealedDensity)));
+  const leastHeadspaceMl = Math.max(
+    0,
+    ...temperaturesC.map((t) => brimfulMl * (1 - waterDensityGPerL(t) / sealedDensity)),
+  );
   const warmer = filling.filter((t) => t > container.sealedTempC);
-  if (warmer.length === 0 || volumesAt(container, container.sealedTempC).liquidFills) return { tempC: Math.min(...filling), leastHeadspaceMl };
+  if (warmer.length === 0 || volumesAt(container, container.sealedTempC).liquidFills)
+    return { tempC: Math.min(...filling), leastHeadspaceMl };
   let low = container.sealedTempC;
   let high = Math.min(...warmer);
   for (let i = 0; i < 40; i++) {

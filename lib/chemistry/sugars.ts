@@ -1,7 +1,15 @@
 import { M_HEXOSE, M_SUCROSE } from './constants';
 
 /** Sugars a recipe can add by weight. */
-export const SUGAR_TYPES = ['sucrose', 'glucose', 'fructose', 'honey', 'maple-syrup', 'agave-syrup', 'lactose'] as const;
+export const SUGAR_TYPES = [
+  'sucrose',
+  'glucose',
+  'fructose',
+  'honey',
+  'maple-syrup',
+  'agave-syrup',
+  'lactose',
+] as const;
 export type SugarType = (typeof SUGAR_TYPES)[number];
 
 export interface SugarInfo {
@@ -21,9 +29,30 @@ export interface SugarInfo {
  * highest of the common sugars (0.514 g CO2/g against 0.489 for a hexose), so that the worst case stays a worst case.
  */
 export const SUGARS: Record<SugarType, SugarInfo> = {
-  sucrose: { label: 'Sucrose (table sugar)', sugarFraction: 1, fermentableShare: 1, molarMass: M_SUCROSE, co2PerMole: 4, source: 'C12H22O11 + H2O → 4 C2H5OH + 4 CO2' },
-  glucose: { label: 'Glucose (dextrose)', sugarFraction: 1, fermentableShare: 1, molarMass: M_HEXOSE, co2PerMole: 2, source: 'C6H12O6 → 2 C2H5OH + 2 CO2' },
-  fructose: { label: 'Fructose', sugarFraction: 1, fermentableShare: 1, molarMass: M_HEXOSE, co2PerMole: 2, source: 'C6H12O6 → 2 C2H5OH + 2 CO2' },
+  sucrose: {
+    label: 'Sucrose (table sugar)',
+    sugarFraction: 1,
+    fermentableShare: 1,
+    molarMass: M_SUCROSE,
+    co2PerMole: 4,
+    source: 'C12H22O11 + H2O → 4 C2H5OH + 4 CO2',
+  },
+  glucose: {
+    label: 'Glucose (dextrose)',
+    sugarFraction: 1,
+    fermentableShare: 1,
+    molarMass: M_HEXOSE,
+    co2PerMole: 2,
+    source: 'C6H12O6 → 2 C2H5OH + 2 CO2',
+  },
+  fructose: {
+    label: 'Fructose',
+    sugarFraction: 1,
+    fermentableShare: 1,
+    molarMass: M_HEXOSE,
+    co2PerMole: 2,
+    source: 'C6H12O6 → 2 C2H5OH + 2 CO2',
+  },
   honey: {
     label: 'Honey',
     sugarFraction: 0.8212,

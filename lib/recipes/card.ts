@@ -1,8 +1,9 @@
-import { SAFETY_CAUTIONS } from '../chemistry/cautions';
-import { ALLERGEN_LABELS, type Allergen } from '../ingredients';
-import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '../units';
-import type { RecipeContent } from '../schemas/recipes';
-import type { FindingLevel } from '../chemistry/carbonation';
+import type { FindingLevel } from '@/lib/chemistry/carbonation';
+import { SAFETY_CAUTIONS } from '@/lib/chemistry/cautions';
+import { type Allergen, ALLERGEN_LABELS } from '@/lib/ingredients';
+import type { RecipeContent } from '@/lib/schemas/recipes';
+import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
+
 import type { RecipeEvaluation } from './evaluate';
 import type { BatchSize, ScaledRecipe } from './scaling';
 import { batchSteps, formatRounded } from './stages';
@@ -73,16 +74,21 @@ export function buildCard(input: {
     'Initials: ________',
   ];
   const rank: Record<FindingLevel, number> = { ok: 0, caution: 1, danger: 2 };
-  const worstFinding = c.findings.reduce((a, b) => (rank[b.level] > rank[a.level] ? b : a), c.findings[0] ?? { level: 'ok' as const, code: '', message: '' });
+  const worstFinding = c.findings.reduce(
+    (a, b) => (rank[b.level] > rank[a.level] ? b : a),
+    c.findings[0] ?? { level: 'ok' as const, code: '', message: '' },
+  );
   const hottestIndex = c.pressures.reduce((best, p, i) => (p.tempC > c.pressures[best].tempC ? i : best), 0);
   const hottest = c.pressures[hottestIndex];
-  const ratingBar = worstFinding.values?.ratingBar ?? c.findings.find((f) => f.values?.ratingBar !== undefined)?.values?.ratingBar;
+  const ratingBar =
+    worstFinding.values?.ratingBar ?? c.findings.find((f) => f.values?.ratingBar !== undefined)?.values?.ratingBar;
   const rating =
     hottest === undefined
       ? 'No pressure worked out.'
       : `Bottle rating ${ratingBar !== undefined ? formatPressure(ratingBar, units) : 'not given'}; worst case ${hottest.liquidFills ? 'the liquid fills the bottle' : formatPressure(c.cases.worst.gaugeBar[hottestIndex], units)} at ${formatTemp(hottest.tempC, units)}.`;
   const temps = c.pressures.map(
-    (p, i) => `${evaluation.temperatureNames[i] ?? ''} ${formatTemp(p.tempC, units)}: ${p.liquidFills ? 'bottle full, no gas space' : formatPressure(c.cases.worst.gaugeBar[i], units)}`,
+    (p, i) =>
+      `${evaluation.temperatureNames[i] ?? ''} ${formatTemp(p.tempC, units)}: ${p.liquidFills ? 'bottle full, no gas space' : formatPressure(c.cases.worst.gaugeBar[i], units)}`,
   );
   return {
     brewery: input.brewery,
@@ -93,11 +99,17 @@ export function buildCard(input: {
     batch: `${formatRounded(scaled.finishedLitres)} of finished drink, ${scaled.bottles} bottles of ${input.bottleName}`,
     bottles: scaled.bottles,
     base: `${formatRounded(scaled.baseLitres)} of ${content.baseBrew.name}${scaled.topUpLitres.exact > 0 ? ` (${formatRounded(scaled.topUpLitres)} of it to top up after straining)` : ''}`,
-    amounts: [...scaled.lines, ...scaled.sugars.filter((s) => s.value > 0)].map((r) => ({ name: r.name, amount: formatRounded(r) })),
+    amounts: [...scaled.lines, ...scaled.sugars.filter((s) => s.value > 0)].map((r) => ({
+      name: r.name,
+      amount: formatRounded(r),
+    })),
     steps: batchSteps(content, scaled, input.bottleName),
     checkpoints,
     keyNumbers: [
-      { label: 'Carbonation', value: `${formatNumber(c.cases.worst.co2.totalVolumes, 2)} volumes worst case, ${formatNumber(c.cases.expected.co2.totalVolumes, 2)} expected` },
+      {
+        label: 'Carbonation',
+        value: `${formatNumber(c.cases.worst.co2.totalVolumes, 2)} volumes worst case, ${formatNumber(c.cases.expected.co2.totalVolumes, 2)} expected`,
+      },
       { label: 'Gauge pressure (worst case)', value: temps.join(' · ') },
       { label: 'Alcohol', value: `${formatNumber(c.cases.worst.alcohol.totalAbvPercent, 2)} % ABV worst case` },
     ],

@@ -1,7 +1,8 @@
-import { computeCarbonation, type CarbonationResult } from '../chemistry/carbonation';
-import type { YieldCase } from '../chemistry/fermentation';
-import type { Allergen } from '../ingredients';
-import type { RecipeContent } from '../schemas/recipes';
+import { type CarbonationResult, computeCarbonation } from '@/lib/chemistry/carbonation';
+import type { YieldCase } from '@/lib/chemistry/fermentation';
+import type { Allergen } from '@/lib/ingredients';
+import type { RecipeContent } from '@/lib/schemas/recipes';
+
 import { ingredientContribution, type IngredientNutrients } from './ingredient-sugar';
 import { gramsPerLitre } from './scaling';
 
@@ -33,20 +34,38 @@ export interface RecipeEvaluation {
 export const WARM_DAY_NAME = 'Warmest the bottles may meet';
 
 /** An ingredient the library no longer knows: nothing measured, so its sugar is a danger finding, never zero. */
-const UNKNOWN_INGREDIENT: IngredientNutrients = { name: 'Unknown ingredient', sugarsG: null, carbohydrateG: null, fibreG: null, fatG: null, fermentableShare: 1 };
+const UNKNOWN_INGREDIENT: IngredientNutrients = {
+  name: 'Unknown ingredient',
+  sugarsG: null,
+  carbohydrateG: null,
+  fibreG: null,
+  fatG: null,
+  fermentableShare: 1,
+};
 
 /**
  * A recipe's numbers for one bottle of its format: the sugar from the base's residual sugar, the ingredients and
  * the added sugars, then the engine's carbonation, pressure and alcohol with its findings. In the bottle the solids
  * stay and all their sugar counts; steeped and strained, each line's extraction share counts.
  */
-export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingredients: Map<number, IngredientFacts>, abvLimitPercent: number, yieldCase: YieldCase = 'worst', options: { phRequired?: boolean; warmDayTempC?: number | null } = {}): RecipeEvaluation {
+export function evaluateRecipe(
+  content: RecipeContent,
+  bottle: BottleFacts,
+  ingredients: Map<number, IngredientFacts>,
+  abvLimitPercent: number,
+  yieldCase: YieldCase = 'worst',
+  options: { phRequired?: boolean; warmDayTempC?: number | null } = {},
+): RecipeEvaluation {
   const litresPerBottle = bottle.liquidMl / 1000;
   const inBottle = content.process.method === 'in-bottle';
   const lines = content.lines.map((line) => {
     const facts = ingredients.get(line.ingredientId);
-    const gramsPerBottle = gramsPerLitre({ name: '', amount: line.amount, unit: line.unit as never }, bottle.liquidMl) * litresPerBottle;
-    const contribution = ingredientContribution(facts ?? UNKNOWN_INGREDIENT, gramsPerBottle, { inBottle, extractionShare: line.extractionPct / 100 });
+    const gramsPerBottle =
+      gramsPerLitre({ name: '', amount: line.amount, unit: line.unit as never }, bottle.liquidMl) * litresPerBottle;
+    const contribution = ingredientContribution(facts ?? UNKNOWN_INGREDIENT, gramsPerBottle, {
+      inBottle,
+      extractionShare: line.extractionPct / 100,
+    });
     return { line, facts, gramsPerBottle, contribution, sugarToLiquidG: contribution.sugarG };
   });
   const carbonation = computeCarbonation({
@@ -70,14 +89,29 @@ export function evaluateRecipe(content: RecipeContent, bottle: BottleFacts, ingr
     yield: yieldCase,
     abvLimitPercent,
   });
-  const missing = lines.filter(({ facts }) => facts?.costPerKg === null || facts?.costPerKg === undefined).map(({ facts }) => facts?.name ?? 'Unknown ingredient');
-  const perBottle = missing.length > 0 ? null : lines.reduce((sum, { facts, gramsPerBottle }) => sum + (gramsPerBottle / 1000) * (facts!.costPerKg ?? 0), 0);
+  const missing = lines
+    .filter(({ facts }) => facts?.costPerKg === null || facts?.costPerKg === undefined)
+    .map(({ facts }) => facts?.name ?? 'Unknown ingredient');
+  const perBottle =
+    missing.length > 0
+      ? null
+      : lines.reduce((sum, { facts, gramsPerBottle }) => sum + (gramsPerBottle / 1000) * (facts!.costPerKg ?? 0), 0);
   const allergens = [...new Set(lines.flatMap(({ facts }) => facts?.allergens ?? []))].sort();
   return {
     carbonation,
-    lines: lines.map(({ line, facts, gramsPerBottle, sugarToLiquidG }) => ({ ingredientId: line.ingredientId, name: facts?.name ?? 'Unknown ingredient', gramsPerBottle, sugarToLiquidG })),
+    lines: lines.map(({ line, facts, gramsPerBottle, sugarToLiquidG }) => ({
+      ingredientId: line.ingredientId,
+      name: facts?.name ?? 'Unknown ingredient',
+      gramsPerBottle,
+      sugarToLiquidG,
+    })),
     allergens,
     cost: { perBottle, perLitre: perBottle === null ? null : perBottle / litresPerBottle, missing },
-    temperatureNames: ['Carbonating', 'Cold store', 'Highest', ...(carbonation.warmDayTempC !== null ? [WARM_DAY_NAME] : [])],
+    temperatureNames: [
+      'Carbonating',
+      'Cold store',
+      'Highest',
+      ...(carbonation.warmDayTempC !== null ? [WARM_DAY_NAME] : []),
+    ],
   };
 }

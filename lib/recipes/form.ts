@@ -1,15 +1,29 @@
 import { setIn } from 'formik';
 
-import type { SugarType } from '../chemistry/sugars';
-import { check, parseNumber } from '../forms';
-import { recipeContentSchema, type Method, type RecipeContent } from '../schemas/recipes';
+import type { SugarType } from '@/lib/chemistry/sugars';
+import { check, parseNumber } from '@/lib/forms';
+import { type Method, type RecipeContent, recipeContentSchema } from '@/lib/schemas/recipes';
 
 /** The designer's form: text as typed, one field per number of the recipe. */
 export interface RecipeFormValues {
   name: string;
   flavourNotes: string;
-  base: { name: string; residualSugarGPerL: string; ph: string; abvPercent: string; residualMode: 'volumes' | 'last-open'; residualCo2Volumes: string; lastOpenTempC: string };
-  lines: { ingredientId: number; name: string; amount: string; unit: 'g-per-l' | 'g-per-bottle' | 'pct-weight'; extractionPct: string }[];
+  base: {
+    name: string;
+    residualSugarGPerL: string;
+    ph: string;
+    abvPercent: string;
+    residualMode: 'volumes' | 'last-open';
+    residualCo2Volumes: string;
+    lastOpenTempC: string;
+  };
+  lines: {
+    ingredientId: number;
+    name: string;
+    amount: string;
+    unit: 'g-per-l' | 'g-per-bottle' | 'pct-weight';
+    extractionPct: string;
+  }[];
   sugars: { type: SugarType; gPerL: string }[];
   method: Method;
   steepHours: string;
@@ -28,7 +42,12 @@ const t = (v: number | null | undefined) => (v === null || v === undefined ? '' 
 const n = (text: string) => parseNumber(text);
 const nOrNull = (text: string) => parseNumber(text) ?? null;
 
-export function toFormValues(name: string, flavourNotes: string, c: RecipeContent, names: Record<number, string>): RecipeFormValues {
+export function toFormValues(
+  name: string,
+  flavourNotes: string,
+  c: RecipeContent,
+  names: Record<number, string>,
+): RecipeFormValues {
   return {
     name,
     flavourNotes,
@@ -37,11 +56,18 @@ export function toFormValues(name: string, flavourNotes: string, c: RecipeConten
       residualSugarGPerL: t(c.baseBrew.residualSugarGPerL),
       ph: t(c.baseBrew.ph),
       abvPercent: t(c.baseBrew.abvPercent),
-      residualMode: c.baseBrew.residualCo2Volumes !== null && c.baseBrew.residualCo2Volumes !== undefined ? 'volumes' : 'last-open',
+      residualMode:
+        c.baseBrew.residualCo2Volumes !== null && c.baseBrew.residualCo2Volumes !== undefined ? 'volumes' : 'last-open',
       residualCo2Volumes: t(c.baseBrew.residualCo2Volumes),
       lastOpenTempC: t(c.baseBrew.lastOpenTempC),
     },
-    lines: c.lines.map((l) => ({ ingredientId: l.ingredientId, name: names[l.ingredientId] ?? `Ingredient ${l.ingredientId}`, amount: t(l.amount), unit: l.unit as RecipeFormValues['lines'][number]['unit'], extractionPct: t(l.extractionPct) })),
+    lines: c.lines.map((l) => ({
+      ingredientId: l.ingredientId,
+      name: names[l.ingredientId] ?? `Ingredient ${l.ingredientId}`,
+      amount: t(l.amount),
+      unit: l.unit as RecipeFormValues['lines'][number]['unit'],
+      extractionPct: t(l.extractionPct),
+    })),
     sugars: c.sugars.map((s) => ({ type: s.type, gPerL: t(s.gPerL) })),
     method: c.process.method as Method,
     steepHours: t(c.process.steepHours),
@@ -68,7 +94,12 @@ function candidate(v: RecipeFormValues) {
       residualCo2Volumes: v.base.residualMode === 'volumes' ? n(v.base.residualCo2Volumes) : null,
       lastOpenTempC: v.base.residualMode === 'last-open' ? n(v.base.lastOpenTempC) : null,
     },
-    lines: v.lines.map((l) => ({ ingredientId: l.ingredientId, amount: n(l.amount), unit: l.unit, extractionPct: n(l.extractionPct) })),
+    lines: v.lines.map((l) => ({
+      ingredientId: l.ingredientId,
+      amount: n(l.amount),
+      unit: l.unit,
+      extractionPct: n(l.extractionPct),
+    })),
     sugars: v.sugars.map((s) => ({ type: s.type, gPerL: n(s.gPerL) })),
     process: {
       method: v.method,

@@ -1,4 +1,4 @@
-import type { IngredientSugar } from '../chemistry/carbonation';
+import type { IngredientSugar } from '@/lib/chemistry/carbonation';
 
 /** What the sugar and fat of one ingredient line are worked out from, per 100 g of the ingredient. */
 export interface IngredientNutrients {
@@ -21,9 +21,15 @@ export interface IngredientNutrients {
  *   fibre), which errs high, and says so; with no carbohydrate either, the line is marked unknown (a danger finding).
  * - Fat counts whether the ingredient is steeped or left in the bottle (it goes rancid either way).
  */
-export function ingredientContribution(facts: IngredientNutrients, grams: number, how: { inBottle: boolean; extractionShare: number }): IngredientSugar {
-  const per100 = facts.sugarsG ?? (facts.carbohydrateG !== null ? Math.max(0, facts.carbohydrateG - (facts.fibreG ?? 0)) : 0);
-  const sugarBasis: IngredientSugar['sugarBasis'] = facts.sugarsG !== null ? 'measured' : facts.carbohydrateG !== null ? 'available-carbohydrate' : 'unknown';
+export function ingredientContribution(
+  facts: IngredientNutrients,
+  grams: number,
+  how: { inBottle: boolean; extractionShare: number },
+): IngredientSugar {
+  const per100 =
+    facts.sugarsG ?? (facts.carbohydrateG !== null ? Math.max(0, facts.carbohydrateG - (facts.fibreG ?? 0)) : 0);
+  const sugarBasis: IngredientSugar['sugarBasis'] =
+    facts.sugarsG !== null ? 'measured' : facts.carbohydrateG !== null ? 'available-carbohydrate' : 'unknown';
   const allSugarG = grams * (per100 / 100);
   const share = how.inBottle ? 1 : Math.min(1, Math.max(0, how.extractionShare));
   return {

@@ -1,4 +1,4 @@
-import { convertUnit, type UnitSystem } from '../units';
+import { convertUnit, type UnitSystem } from '@/lib/units';
 
 /**
  * Scaling a recipe kept per litre of finished drink to a batch, with amounts rounded to what a kitchen or brewery
@@ -8,7 +8,8 @@ import { convertUnit, type UnitSystem } from '../units';
 /** How an ingredient amount is written in a recipe. */
 export type AmountUnit = 'g-per-l' | 'g-per-bottle' | 'pct-weight';
 
-export type BatchSize = { kind: 'litres'; value: number } | { kind: 'us-gallons'; value: number } | { kind: 'bottles'; value: number };
+export type BatchSize =
+  { kind: 'litres'; value: number } | { kind: 'us-gallons'; value: number } | { kind: 'bottles'; value: number };
 
 export interface ScaleLine {
   name: string;
@@ -111,15 +112,20 @@ export function gramsPerLitre(line: ScaleLine, bottleLiquidMl: number): number {
  */
 export function scaleRecipe(input: ScaleInput): ScaledRecipe {
   const litres = batchLitres(input.batch, input.bottleLiquidMl);
-  if (!(litres > 0) || litres > MAX_BATCH_L) throw new RangeError(`A batch must be more than 0 and at most ${MAX_BATCH_L} L.`);
+  if (!(litres > 0) || litres > MAX_BATCH_L)
+    throw new RangeError(`A batch must be more than 0 and at most ${MAX_BATCH_L} L.`);
   const loss = input.process.method === 'steep-strain' ? input.process.strainLossPct / 100 : 0;
-  const bottles = input.batch.kind === 'bottles' ? input.batch.value : Math.floor((litres * 1000) / input.bottleLiquidMl + 1e-9);
+  const bottles =
+    input.batch.kind === 'bottles' ? input.batch.value : Math.floor((litres * 1000) / input.bottleLiquidMl + 1e-9);
   return {
     finishedLitres: roundVolume(litres, input.units),
     bottles,
     baseLitres: roundVolume(litres * (1 + loss), input.units),
     topUpLitres: roundVolume(litres * loss, input.units),
-    lines: input.lines.map((line) => ({ name: line.name, ...roundMass(gramsPerLitre(line, input.bottleLiquidMl) * litres, input.units) })),
+    lines: input.lines.map((line) => ({
+      name: line.name,
+      ...roundMass(gramsPerLitre(line, input.bottleLiquidMl) * litres, input.units),
+    })),
     sugars: input.sugars.map((sugar) => ({ name: sugar.name, ...roundMass(sugar.gPerL * litres, input.units) })),
   };
 }

@@ -1,5 +1,5 @@
-import type { RecipeContent } from '../schemas/recipes';
-import { formatNumber } from '../units';
+import type { RecipeContent } from '@/lib/schemas/recipes';
+import { formatNumber } from '@/lib/units';
 
 export interface Stage {
   title: string;
@@ -16,32 +16,78 @@ export function processStages(content: RecipeContent): Stage[] {
   const p = content.process;
   const stages: Stage[] = [];
   if (p.method === 'steep-strain') {
-    stages.push({ title: 'Steep', detail: 'Add the ingredients to the base and leave them to steep.', hours: p.steepHours, tempC: p.steepTempC });
-    stages.push({ title: 'Strain', detail: `Strain out the solids; expect to lose about ${p.strainLossPct} % of the liquid.`, hours: 0, tempC: null });
-    stages.push({ title: 'Top up and sugar', detail: 'Top up with fresh base to the batch volume, then dissolve the added sugar.', hours: 0, tempC: null });
+    stages.push({
+      title: 'Steep',
+      detail: 'Add the ingredients to the base and leave them to steep.',
+      hours: p.steepHours,
+      tempC: p.steepTempC,
+    });
+    stages.push({
+      title: 'Strain',
+      detail: `Strain out the solids; expect to lose about ${p.strainLossPct} % of the liquid.`,
+      hours: 0,
+      tempC: null,
+    });
+    stages.push({
+      title: 'Top up and sugar',
+      detail: 'Top up with fresh base to the batch volume, then dissolve the added sugar.',
+      hours: 0,
+      tempC: null,
+    });
   } else {
-    stages.push({ title: 'Fill', detail: 'Share the ingredients and sugar between the bottles, fill with base and cap.', hours: 0, tempC: null });
+    stages.push({
+      title: 'Fill',
+      detail: 'Share the ingredients and sugar between the bottles, fill with base and cap.',
+      hours: 0,
+      tempC: null,
+    });
   }
   stages.push({
     title: 'Carbonate',
-    detail: p.method === 'in-bottle' ? 'Keep sealed and warm while the sugar ferments; the solids keep feeding it.' : 'Bottle, cap and keep warm while the sugar ferments.',
+    detail:
+      p.method === 'in-bottle'
+        ? 'Keep sealed and warm while the sugar ferments; the solids keep feeding it.'
+        : 'Bottle, cap and keep warm while the sugar ferments.',
     hours: p.carbonateHours,
     tempC: p.carbonateTempC,
   });
-  stages.push({ title: 'Chill', detail: 'Open a test bottle; once the fizz is right, move every bottle to cold store.', hours: 0, tempC: p.coldStoreTempC });
+  stages.push({
+    title: 'Chill',
+    detail: 'Open a test bottle; once the fizz is right, move every bottle to cold store.',
+    hours: 0,
+    tempC: p.coldStoreTempC,
+  });
   return stages;
 }
 
 /** The usual process: a two-day cold steep (when steeped), three days' carbonating at 22 °C, cold store at 4 °C. */
-export function defaultProcess(method: RecipeContent['process']['method'], strainLossPct = 10): RecipeContent['process'] {
+export function defaultProcess(
+  method: RecipeContent['process']['method'],
+  strainLossPct = 10,
+): RecipeContent['process'] {
   const steep = method === 'steep-strain';
-  return { method, steepHours: steep ? 48 : 0, steepTempC: 4, strainLossPct: steep ? strainLossPct : 0, carbonateHours: 72, carbonateTempC: 22, coldStoreTempC: 4 };
+  return {
+    method,
+    steepHours: steep ? 48 : 0,
+    steepTempC: 4,
+    strainLossPct: steep ? strainLossPct : 0,
+    carbonateHours: 72,
+    carbonateTempC: 22,
+    coldStoreTempC: 4,
+  };
 }
 
 /** A sensible new recipe: a 473 mL bottle's worth of defaults a developer then changes. */
 export function defaultContent(bottleFormatId: number, method: RecipeContent['process']['method']): RecipeContent {
   return {
-    baseBrew: { name: 'House base', residualSugarGPerL: 0, ph: null, abvPercent: 0.1, residualCo2Volumes: null, lastOpenTempC: 22 },
+    baseBrew: {
+      name: 'House base',
+      residualSugarGPerL: 0,
+      ph: null,
+      abvPercent: 0.1,
+      residualCo2Volumes: null,
+      lastOpenTempC: 22,
+    },
     lines: [],
     sugars: [{ type: 'sucrose', gPerL: 0 }],
     process: defaultProcess(method),
@@ -77,14 +123,26 @@ export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleNa
   const sugars = scaled.sugars.filter((s) => s.value > 0);
   const steps: string[] = [];
   if (p.method === 'steep-strain') {
-    steps.push(`Steep ${list(scaled.lines)} in ${finished} of ${content.baseBrew.name} at ${p.steepTempC} °C for ${p.steepHours} h.`);
-    steps.push(`Strain out the solids; about ${p.strainLossPct} % of the liquid (${formatRounded(scaled.topUpLitres)}) stays in them.`);
-    steps.push(`Top up with ${formatRounded(scaled.topUpLitres)} of fresh base to ${finished}${sugars.length ? ` and dissolve ${list(sugars)}` : ''}.`);
-    steps.push(`Fill ${scaled.bottles} bottles (${bottleName}), cap and keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h.`);
+    steps.push(
+      `Steep ${list(scaled.lines)} in ${finished} of ${content.baseBrew.name} at ${p.steepTempC} °C for ${p.steepHours} h.`,
+    );
+    steps.push(
+      `Strain out the solids; about ${p.strainLossPct} % of the liquid (${formatRounded(scaled.topUpLitres)}) stays in them.`,
+    );
+    steps.push(
+      `Top up with ${formatRounded(scaled.topUpLitres)} of fresh base to ${finished}${sugars.length ? ` and dissolve ${list(sugars)}` : ''}.`,
+    );
+    steps.push(
+      `Fill ${scaled.bottles} bottles (${bottleName}), cap and keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h.`,
+    );
   } else {
-    steps.push(`Share ${list(scaled.lines)}${sugars.length ? ` and ${list(sugars)}` : ''} between ${scaled.bottles} bottles (${bottleName}).`);
+    steps.push(
+      `Share ${list(scaled.lines)}${sugars.length ? ` and ${list(sugars)}` : ''} between ${scaled.bottles} bottles (${bottleName}).`,
+    );
     steps.push(`Fill with ${finished} of ${content.baseBrew.name} and cap.`);
-    steps.push(`Keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h; the solids keep feeding the yeast, so check a test bottle.`);
+    steps.push(
+      `Keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h; the solids keep feeding the yeast, so check a test bottle.`,
+    );
   }
   steps.push(`Open a test bottle; once the fizz is right, move every bottle to cold store at ${p.coldStoreTempC} °C.`);
   return steps;

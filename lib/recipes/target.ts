@@ -1,4 +1,4 @@
-import type { PrimingResult } from '../chemistry/carbonation';
+import type { PrimingResult } from '@/lib/chemistry/carbonation';
 
 export interface TargetAdvice {
   /** False when the target is beyond the brewery's share of the rating or the alcohol limit. */
@@ -19,7 +19,12 @@ export interface TargetAdvice {
  * that is safe); the base and the ingredients bring part of it, the added sucrose the rest. `currentAddedGPerL` is the
  * fermentable added sugar the recipe has now, which the helper replaces.
  */
-export function targetAdvice(priming: PrimingResult, liquidMl: number, fermentableGPerL: number, currentAddedGPerL: number): TargetAdvice {
+export function targetAdvice(
+  priming: PrimingResult,
+  liquidMl: number,
+  fermentableGPerL: number,
+  currentAddedGPerL: number,
+): TargetAdvice {
   const fromOthersGPerL = fermentableGPerL - Math.max(0, currentAddedGPerL);
   const totalGPerL = (priming.safeSugarG / liquidMl) * 1000;
   return {

@@ -1,10 +1,13 @@
-import type { RecipeContent, TastingInput } from '../schemas/recipes';
+import type { RecipeContent, TastingInput } from '@/lib/schemas/recipes';
 
 /**
  * The content a tasting's sugar addition makes: "+4 g sucrose to 473 mL" adds 4 ÷ 473 × 1000 = 8.457 g/L of
  * sucrose to the recipe's added sugars. The same function previews the change before saving and makes the version.
  */
-export function withSugarAddition(content: RecipeContent, addition: NonNullable<TastingInput['sugarAddition']>): RecipeContent {
+export function withSugarAddition(
+  content: RecipeContent,
+  addition: NonNullable<TastingInput['sugarAddition']>,
+): RecipeContent {
   const { type, grams, toMl } = addition;
   const extra = (grams / toMl) * 1000;
   const sugars = [...content.sugars];

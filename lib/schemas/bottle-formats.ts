@@ -16,11 +16,23 @@ export type Material = (typeof MATERIALS)[number];
 export const MATERIAL_LABELS: Record<Material, string> = { glass: 'Glass', pet: 'PET plastic' };
 
 export const bottleFormatSchema = yup.object({
-  name: yup.string().trim().min(1, 'Name the format.').max(60, 'Keep the name under 60 characters.').required('Name the format.'),
-  liquidMl: numberField('Liquid volume', { positive: true, max: 30000, unit: 'mL' }).required('Enter the liquid volume in mL.'),
-  headspaceMl: numberField('Headspace', { min: 0, max: 5000, unit: 'mL' }).required('Enter the headspace in mL (0 if none).'),
+  name: yup
+    .string()
+    .trim()
+    .min(1, 'Name the format.')
+    .max(60, 'Keep the name under 60 characters.')
+    .required('Name the format.'),
+  liquidMl: numberField('Liquid volume', { positive: true, max: 30000, unit: 'mL' }).required(
+    'Enter the liquid volume in mL.',
+  ),
+  headspaceMl: numberField('Headspace', { min: 0, max: 5000, unit: 'mL' }).required(
+    'Enter the headspace in mL (0 if none).',
+  ),
   closure: yup.string().oneOf(CLOSURES, 'Choose a closure.').required('Choose a closure.') as yup.StringSchema<Closure>,
-  material: yup.string().oneOf(MATERIALS, 'Choose glass or PET.').required('Choose glass or PET.') as yup.StringSchema<Material>,
+  material: yup
+    .string()
+    .oneOf(MATERIALS, 'Choose glass or PET.')
+    .required('Choose glass or PET.') as yup.StringSchema<Material>,
   maxWorkingPressureBar: numberField('Maximum working pressure', { min: 0.5, max: 20, unit: 'bar' }).required(
     "Enter the maximum working pressure from the supplier's sheet, in bar.",
   ),

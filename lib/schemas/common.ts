@@ -22,9 +22,20 @@ export const password = (label = 'a password') =>
     .required(`Enter ${label}.`);
 
 export const personName = () =>
-  yup.string().trim().min(1, 'Enter your name.').max(80, 'Keep the name under 80 characters.').required('Enter your name.');
+  yup
+    .string()
+    .trim()
+    .min(1, 'Enter your name.')
+    .max(80, 'Keep the name under 80 characters.')
+    .required('Enter your name.');
 
-export const token = () => yup.string().trim().min(20, 'This link is incomplete.').max(200, 'This link is not valid.').required('This link is incomplete.');
+export const token = () =>
+  yup
+    .string()
+    .trim()
+    .min(20, 'This link is incomplete.')
+    .max(200, 'This link is not valid.')
+    .required('This link is incomplete.');
 
 export const idParam = yup.object({
   id: yup.number().integer('Not a valid id.').positive('Not a valid id.').required('An id is required.'),

@@ -19,7 +19,9 @@ export function numberField(label: string, { min, max, unit = '', positive = fal
   // strict() would do the same but also skip defaults.)
   let schema = yup
     .number()
-    .transform((value: number, original: unknown) => (original === undefined || original === null || typeof original === 'number' ? value : NaN))
+    .transform((value: number, original: unknown) =>
+      original === undefined || original === null || typeof original === 'number' ? value : NaN,
+    )
     .typeError(`${label} must be a number.`);
   if (positive) schema = schema.moreThan(0, `${label} must be more than 0${u}.`);
   if (min !== undefined) schema = schema.min(min, `${label} must be at least ${min}${u}.`);

@@ -1,9 +1,10 @@
 import * as yup from 'yup';
 
-import { ROLES, type Role } from '../roles';
-import { UNIT_SYSTEMS, type UnitSystem } from '../units';
-import { numberField } from './numbers';
+import { type Role, ROLES } from '@/lib/roles';
+import { UNIT_SYSTEMS, type UnitSystem } from '@/lib/units';
+
 import { email, password, personName } from './common';
+import { numberField } from './numbers';
 
 const role = () =>
   yup
@@ -24,18 +25,31 @@ export const profileSchema = yup.object({ name: personName() });
 export type ProfileInput = yup.InferType<typeof profileSchema>;
 
 export const preferencesSchema = yup.object({
-  unitSystem: yup.string().oneOf(UNIT_SYSTEMS, 'Choose metric or US units.').optional() as yup.StringSchema<UnitSystem | undefined>,
+  unitSystem: yup.string().oneOf(UNIT_SYSTEMS, 'Choose metric or US units.').optional() as yup.StringSchema<
+    UnitSystem | undefined
+  >,
   notifyReviews: yup.boolean().optional(),
 });
 export type PreferencesInput = yup.InferType<typeof preferencesSchema>;
 
 export const organisationSchema = yup.object({
-  name: yup.string().trim().min(2, 'Enter the brewery name (at least 2 characters).').max(80, 'Keep the brewery name under 80 characters.').required('Enter the brewery name.'),
-  abvLimitPercent: numberField('Alcohol limit', { positive: true, max: 5, unit: '% ABV' }).required('Enter the alcohol limit in % ABV.'),
+  name: yup
+    .string()
+    .trim()
+    .min(2, 'Enter the brewery name (at least 2 characters).')
+    .max(80, 'Keep the brewery name under 80 characters.')
+    .required('Enter the brewery name.'),
+  abvLimitPercent: numberField('Alcohol limit', { positive: true, max: 5, unit: '% ABV' }).required(
+    'Enter the alcohol limit in % ABV.',
+  ),
   // Left out, a setting keeps its value: a client that does not know a setting cannot reset it.
   warmestTempC: numberField('Warmest the bottles may meet', { min: 20, max: 60, unit: '°C' }).optional(),
   // Never above 100 %: the rating itself. Below half the rating most fizz targets become unreachable.
-  ratingSharePercent: numberField('Most sugar: share of the bottle rating', { min: 50, max: 100, unit: '%' }).optional(),
+  ratingSharePercent: numberField('Most sugar: share of the bottle rating', {
+    min: 50,
+    max: 100,
+    unit: '%',
+  }).optional(),
   licensedForAlcohol: yup.boolean().strict().optional(),
 });
 export type OrganisationInput = yup.InferType<typeof organisationSchema>;

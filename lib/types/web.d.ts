@@ -10,4 +10,3 @@ declare module 'react-native' {
     dataSet?: Record<string, string>;
   }
 }
-

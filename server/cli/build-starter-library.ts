@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 
-import { STARTER_FILE, STARTER_RECORDS } from '../seed/starter-ingredients';
-import { ingredientFromSr, readSrFoods } from '../usda/sr-files';
+import { STARTER_FILE, STARTER_RECORDS } from '@/server/seed/starter-ingredients';
+import { ingredientFromSr, readSrFoods } from '@/server/usda/sr-files';
 
 /** `npm run starter:build -- <folder>`: writes the starter library's values from the USDA SR files. */
 const folder = process.argv[2];

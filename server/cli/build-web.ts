@@ -2,10 +2,19 @@ import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 
-import { ROOT_DIR } from '../config';
+import { ROOT_DIR } from '@/server/config';
 
 /** What the web bundle is built from: a change to any of these makes the export stale. */
-const SOURCES = ['app', 'components', 'lib', 'assets', 'app.json', 'babel.config.js', 'package.json', 'package-lock.json'];
+const SOURCES = [
+  'app',
+  'components',
+  'lib',
+  'assets',
+  'app.json',
+  'babel.config.js',
+  'package.json',
+  'package-lock.json',
+];
 
 function newestMtime(target: string): number {
   if (!fs.existsSync(target)) return 0;

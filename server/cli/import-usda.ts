@@ -2,9 +2,9 @@ import path from 'node:path';
 
 import { Presets, SingleBar } from 'cli-progress';
 
-import { prepareDatabase, sequelize } from '../db';
-import { importDatasetIngredients } from '../services/ingredients';
-import { ingredientFromSr, NotSrFolderError, readSrFoods } from '../usda/sr-files';
+import { prepareDatabase, sequelize } from '@/server/db';
+import { importDatasetIngredients } from '@/server/services/ingredients';
+import { ingredientFromSr, NotSrFolderError, readSrFoods } from '@/server/usda/sr-files';
 
 /** `npm run import:usda -- <folder>`: imports or updates the dataset ingredients from the USDA SR25 files. */
 async function run(): Promise<void> {
@@ -26,7 +26,10 @@ async function run(): Promise<void> {
   const generic = foods.filter((food) => !food.branded);
   console.log(`${foods.length} foods read, ${foods.length - generic.length} branded products left out.`);
   await prepareDatabase();
-  const bar = new SingleBar({ format: 'Importing [{bar}] {percentage}% · {value}/{total} foods', hideCursor: true }, Presets.shades_classic);
+  const bar = new SingleBar(
+    { format: 'Importing [{bar}] {percentage}% · {value}/{total} foods', hideCursor: true },
+    Presets.shades_classic,
+  );
   bar.start(generic.length, 0);
   const report = await importDatasetIngredients(generic.map(ingredientFromSr), (done) => bar.update(done));
   bar.stop();

@@ -1,7 +1,7 @@
-import { email as emailSchema } from '../../lib/schemas/common';
-import { config } from '../config';
-import { prepareDatabase, sequelize } from '../db';
-import { consoleLink } from '../services/auth';
+import { email as emailSchema } from '@/lib/schemas/common';
+import { config } from '@/server/config';
+import { prepareDatabase, sequelize } from '@/server/db';
+import { consoleLink } from '@/server/services/auth';
 
 /**
  * `npm run reset-link -- <email>`, on the server's own console: prints a one-time link for an address when no
@@ -24,7 +24,11 @@ async function run(): Promise<void> {
     console.error(`No active account and no waiting sign-up uses ${address} (database ${config.databasePath}).`);
     process.exit(1);
   }
-  console.log(link.kind === 'reset' ? `One-time link to choose a new password for ${address} (works for 1 hour):` : `One-time link to confirm the sign-up of ${address} (works for 24 hours):`);
+  console.log(
+    link.kind === 'reset'
+      ? `One-time link to choose a new password for ${address} (works for 1 hour):`
+      : `One-time link to confirm the sign-up of ${address} (works for 24 hours):`,
+  );
   console.log(link.url);
 }
 

@@ -1,5 +1,6 @@
-import { main } from '../index';
-import { logger } from '../logger';
+import { main } from '@/server/index';
+import { logger } from '@/server/logger';
+
 import { buildWeb, webBuildIsStale } from './build-web';
 
 /** `npm start`: build the web app when it is missing or stale, then serve it with the API. */

@@ -1,8 +1,8 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 
-import { config } from '../config';
-import { logger } from '../logger';
-import { OutboxMessage } from '../models/outbox-message';
+import { config } from '@/server/config';
+import { logger } from '@/server/logger';
+import { OutboxMessage } from '@/server/models/outbox-message';
 
 export interface MailMessage {
   to: string;
@@ -46,7 +46,13 @@ class Mailer {
       return;
     }
     this.smtp ??= nodemailer.createTransport(config.smtpUrl);
-    await this.smtp.sendMail({ from: config.mailFrom, to: message.to, subject: message.subject, text: message.text, html: message.html });
+    await this.smtp.sendMail({
+      from: config.mailFrom,
+      to: message.to,
+      subject: message.subject,
+      text: message.text,
+      html: message.html,
+    });
     logger.info({ kind: message.kind }, 'mail sent');
   }
 }

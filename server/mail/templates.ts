@@ -1,5 +1,5 @@
-import { ROLE_LABELS, type Role } from '../../lib/roles';
-import { config } from '../config';
+import { type Role, ROLE_LABELS } from '@/lib/roles';
+import { config } from '@/server/config';
 
 interface Rendered {
   subject: string;
@@ -10,24 +10,48 @@ interface Rendered {
 const escapeHtml = (value: string) =>
   value.replace(/[&<>"']/g, (ch) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[ch]!);
 
-function render(subject: string, paragraphs: string[], link: { url: string; label: string } | null, footer: string): Rendered {
-  const text = [...paragraphs, ...(link ? ['', `${link.label}: ${link.url}`] : []), '', footer, '', '— Fizzwright'].join('\n');
+function render(
+  subject: string,
+  paragraphs: string[],
+  link: { url: string; label: string } | null,
+  footer: string,
+): Rendered {
+  const text = [
+    ...paragraphs,
+    ...(link ? ['', `${link.label}: ${link.url}`] : []),
+    '',
+    footer,
+    '',
+    '— Fizzwright',
+  ].join('\n');
   const html = [
     '<div style="font-family:sans-serif;color:#1B2422;max-width:560px">',
     ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
-    ...(link ? [`<p><a href="${escapeHtml(link.url)}" style="background:#1E4A43;color:#fff;padding:10px 16px;border-radius:8px;text-decoration:none">${escapeHtml(link.label)}</a></p>`] : []),
+    ...(link
+      ? [
+          `<p><a href="${escapeHtml(link.url)}" style="background:#1E4A43;color:#fff;padding:10px 16px;border-radius:8px;text-decoration:none">${escapeHtml(link.label)}</a></p>`,
+        ]
+      : []),
     `<p style="color:#4E5A57;font-size:13px">${escapeHtml(footer)}</p>`,
     '</div>',
   ].join('\n');
   return { subject, text, html };
 }
 
-export function invitationMail(input: { breweryName: string; inviterName: string | null; role: Role; token: string }): Rendered {
+export function invitationMail(input: {
+  breweryName: string;
+  inviterName: string | null;
+  role: Role;
+  token: string;
+}): Rendered {
   const url = `${config.appUrl}/accept-invitation?token=${encodeURIComponent(input.token)}`;
   const who = input.inviterName ? `${input.inviterName} has invited you` : 'You have been invited';
   return render(
     `Join ${input.breweryName} on Fizzwright`,
-    [`${who} to join ${input.breweryName} on Fizzwright as ${ROLE_LABELS[input.role].toLowerCase()}.`, 'Choose your name and a password to get started.'],
+    [
+      `${who} to join ${input.breweryName} on Fizzwright as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+      'Choose your name and a password to get started.',
+    ],
     { url, label: 'Accept the invitation' },
     'This link works once and expires in 7 days. If you did not expect it, ignore this message.',
   );
@@ -45,7 +69,10 @@ export function resetPasswordUrl(token: string): string {
 export function signUpConfirmationMail(input: { name: string; breweryName: string; token: string }): Rendered {
   return render(
     `Confirm your address to create ${input.breweryName} on Fizzwright`,
-    [`Hello ${input.name},`, `Follow the link to confirm this address and create the brewery account for ${input.breweryName}. You will be its owner.`],
+    [
+      `Hello ${input.name},`,
+      `Follow the link to confirm this address and create the brewery account for ${input.breweryName}. You will be its owner.`,
+    ],
     { url: confirmSignUpUrl(input.token), label: 'Confirm and create the account' },
     'This link works once and expires in 24 hours. If you did not sign up, ignore this message: nothing is created.',
   );
@@ -75,20 +102,38 @@ export function passwordResetMail(input: { name: string; token: string }): Rende
   );
 }
 
-export function reviewSubmittedMail(input: { recipeName: string; version: number; author: string; message: string; recipeId: number }): Rendered {
+export function reviewSubmittedMail(input: {
+  recipeName: string;
+  version: number;
+  author: string;
+  message: string;
+  recipeId: number;
+}): Rendered {
   return render(
     `Review: ${input.recipeName} v${input.version}`,
-    [`${input.author} submitted version ${input.version} of ${input.recipeName} for production.`, ...(input.message ? [`"${input.message}"`] : [])],
+    [
+      `${input.author} submitted version ${input.version} of ${input.recipeName} for production.`,
+      ...(input.message ? [`"${input.message}"`] : []),
+    ],
     { url: `${config.appUrl}/recipes/${input.recipeId}`, label: 'Open the recipe' },
     'You receive this because you are an owner of the brewery. Turn review e-mails off in Profile.',
   );
 }
 
-export function reviewDecisionMail(input: { recipeName: string; version: number; owner: string; approved: boolean; comment: string; recipeId: number }): Rendered {
+export function reviewDecisionMail(input: {
+  recipeName: string;
+  version: number;
+  owner: string;
+  approved: boolean;
+  comment: string;
+  recipeId: number;
+}): Rendered {
   return render(
     `${input.approved ? 'Approved' : 'Changes asked'}: ${input.recipeName} v${input.version}`,
     [
-      input.approved ? `${input.owner} approved version ${input.version} of ${input.recipeName} for production.` : `${input.owner} returned version ${input.version} of ${input.recipeName} with changes to make.`,
+      input.approved
+        ? `${input.owner} approved version ${input.version} of ${input.recipeName} for production.`
+        : `${input.owner} returned version ${input.version} of ${input.recipeName} with changes to make.`,
       ...(input.comment ? [`"${input.comment}"`] : []),
     ],
     { url: `${config.appUrl}/recipes/${input.recipeId}`, label: 'Open the recipe' },

@@ -1,8 +1,8 @@
 import type { RequestHandler } from 'express';
 
-import { can, type Capability } from '../../lib/roles';
-import { forbidden, HttpError, unauthorized } from '../errors';
-import { authenticateToken, SESSION_COOKIE, type AuthContext } from '../services/sessions';
+import { can, type Capability } from '@/lib/roles';
+import { forbidden, HttpError, unauthorized } from '@/server/errors';
+import { type AuthContext, authenticateToken, SESSION_COOKIE } from '@/server/services/sessions';
 
 /** Who may call a route: anyone, any signed-in member, or members whose role has a capability (`lib/roles.ts`). */
 export type Access = 'public' | 'signed-in' | Capability;
@@ -37,7 +37,9 @@ function assertBodyType(req: Parameters<RequestHandler>[0], accepts: 'json' | 'm
   throw new HttpError(
     415,
     'unsupported_media_type',
-    accepts === 'multipart' ? 'Send the file as multipart/form-data.' : 'Send the request body as JSON (Content-Type: application/json), even when it is empty ({}).',
+    accepts === 'multipart'
+      ? 'Send the file as multipart/form-data.'
+      : 'Send the request body as JSON (Content-Type: application/json), even when it is empty ({}).',
   );
 }
 

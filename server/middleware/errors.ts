@@ -1,9 +1,9 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 
-import type { ErrorBody } from '../../lib/api/types';
-import { HttpError, notFound } from '../errors';
-import { logger } from '../logger';
+import type { ErrorBody } from '@/lib/api/types';
+import { HttpError, notFound } from '@/server/errors';
+import { logger } from '@/server/logger';
 
 /** Any /api path no route answered. */
 export const apiNotFound: RequestHandler = (req) => {
@@ -21,11 +21,13 @@ function convert(error: unknown): HttpError {
     const fields = Object.fromEntries(error.errors.map((e) => [e.path ?? '_', e.message]));
     return new HttpError(400, 'invalid_input', 'Some values are not valid.', fields);
   }
-  const status = (error as { status?: number; statusCode?: number }).status ?? (error as { statusCode?: number }).statusCode;
+  const status =
+    (error as { status?: number; statusCode?: number }).status ?? (error as { statusCode?: number }).statusCode;
   const type = (error as { type?: string }).type;
   if (type === 'entity.parse.failed') return new HttpError(400, 'invalid_json', 'The request body is not valid JSON.');
   if (type === 'entity.too.large') return new HttpError(413, 'too_large', 'The request body is too large.');
-  if (status && status >= 400 && status < 500) return new HttpError(status, 'bad_request', 'The request could not be read.');
+  if (status && status >= 400 && status < 500)
+    return new HttpError(status, 'bad_request', 'The request could not be read.');
   return new HttpError(500, 'internal', 'Something went wrong on our side. Try again; if it keeps happening, tell us.');
 }
 
@@ -33,7 +35,9 @@ function convert(error: unknown): HttpError {
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   const http = convert(error);
   if (http.status >= 500) logger.error({ err: error, method: req.method, path: req.path }, 'request failed');
-  const body: ErrorBody = { error: { code: http.code, message: http.message, ...(http.fields ? { fields: http.fields } : {}) } };
+  const body: ErrorBody = {
+    error: { code: http.code, message: http.message, ...(http.fields ? { fields: http.fields } : {}) },
+  };
   if (res.headersSent) return;
   res.status(http.status).json(body);
 };

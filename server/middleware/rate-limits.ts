@@ -1,9 +1,9 @@
 import type { Request, Response } from 'express';
 import { rateLimit, type RateLimitRequestHandler } from 'express-rate-limit';
 
-import { config } from '../config';
-import { HttpError } from '../errors';
-import { hashToken } from '../services/tokens';
+import { config } from '@/server/config';
+import { HttpError } from '@/server/errors';
+import { hashToken } from '@/server/services/tokens';
 
 const tooMany = (next: (error: unknown) => void) =>
   next(new HttpError(429, 'too_many_requests', 'Too many attempts. Wait a few minutes and try again.'));
@@ -42,7 +42,11 @@ export const accountKeys = {
  * address, one link or one signed-in person. Successful sign-ins do not count, so the owner of an account is not
  * locked out by their own use of it.
  */
-export function perAccountLimit(name: string, keyOf: (req: Request, res: Response) => string | undefined, options: { countSuccess?: boolean } = {}): RateLimitRequestHandler {
+export function perAccountLimit(
+  name: string,
+  keyOf: (req: Request, res: Response) => string | undefined,
+  options: { countSuccess?: boolean } = {},
+): RateLimitRequestHandler {
   return rateLimit({
     windowMs: 15 * 60_000,
     limit: config.authAccountRateLimit,

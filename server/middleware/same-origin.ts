@@ -1,7 +1,7 @@
 import type { Request, RequestHandler } from 'express';
 
-import { config } from '../config';
-import { HttpError } from '../errors';
+import { config } from '@/server/config';
+import { HttpError } from '@/server/errors';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 

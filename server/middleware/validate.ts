@@ -1,13 +1,15 @@
 import type { Request, RequestHandler, Response } from 'express';
 import * as yup from 'yup';
 
-import { badRequest } from '../errors';
+import { badRequest } from '@/server/errors';
 
 type Part = 'body' | 'query' | 'params';
 type Schemas = Partial<Record<Part, yup.AnyObjectSchema>>;
 
 /** The cleaned values of the validated parts, typed by their schemas. */
-export type Validated<S extends Schemas> = { [K in keyof S]: S[K] extends yup.AnyObjectSchema ? yup.InferType<S[K]> : never };
+export type Validated<S extends Schemas> = {
+  [K in keyof S]: S[K] extends yup.AnyObjectSchema ? yup.InferType<S[K]> : never;
+};
 
 /** A route's own work, given the validated request values (and the response, and the raw request for headers and files). */
 export type Handler<S extends Schemas> = (values: Validated<S>, res: Response, req: Request) => unknown;
@@ -42,7 +44,13 @@ const schemaFor = (schema: Described | undefined, key: string): Described | unde
  * (not a list or an object), no NUL characters, no reserved key names, one value per query parameter. yup's own
  * transforms (trim, lowercase) would throw on such values instead of naming the field.
  */
-function shapeProblems(value: unknown, schema: Described | undefined, path: string, fields: Record<string, string>, part: Part): void {
+function shapeProblems(
+  value: unknown,
+  schema: Described | undefined,
+  path: string,
+  fields: Record<string, string>,
+  part: Part,
+): void {
   const at = path || part;
   if (typeof value === 'string') {
     if (value.includes('\u0000')) fields[at] = 'Remove the NUL character from this text.';
@@ -50,7 +58,8 @@ function shapeProblems(value: unknown, schema: Described | undefined, path: stri
   }
   if (Array.isArray(value)) {
     if (part === 'query' && !path.includes('.')) fields[at] = 'Give this parameter once.';
-    else if (schema?.type && schema.type !== 'array' && schema.type !== 'mixed') fields[at] = schema.type === 'string' ? 'Give text here, not a list.' : 'Give a single value here, not a list.';
+    else if (schema?.type && schema.type !== 'array' && schema.type !== 'mixed')
+      fields[at] = schema.type === 'string' ? 'Give text here, not a list.' : 'Give a single value here, not a list.';
     else value.forEach((item, i) => shapeProblems(item, schema?.innerType, `${path}[${i}]`, fields, part));
     return;
   }
@@ -62,7 +71,13 @@ function shapeProblems(value: unknown, schema: Described | undefined, path: stri
     for (const key of Object.keys(value)) {
       const inner = path ? `${path}.${key}` : key;
       // defineProperty, since assigning to a key named __proto__ would not make a field of it.
-      if (RESERVED_KEYS.has(key)) Object.defineProperty(fields, inner, { value: 'This field name is not accepted.', enumerable: true, writable: true, configurable: true });
+      if (RESERVED_KEYS.has(key))
+        Object.defineProperty(fields, inner, {
+          value: 'This field name is not accepted.',
+          enumerable: true,
+          writable: true,
+          configurable: true,
+        });
       else shapeProblems((value as Record<string, unknown>)[key], schemaFor(schema, key), inner, fields, part);
     }
     return;
@@ -87,7 +102,8 @@ export function validate<S extends Schemas>(schemas: S, handler: Handler<S>): Re
       const problems: Record<string, string> = {};
       shapeProblems(raw, schema as unknown as Described, '', problems, part);
       if (Object.keys(problems).length > 0) {
-        for (const [key, message] of Object.entries(problems)) Object.defineProperty(fields, key, { value: message, enumerable: true, writable: true, configurable: true });
+        for (const [key, message] of Object.entries(problems))
+          Object.defineProperty(fields, key, { value: message, enumerable: true, writable: true, configurable: true });
         continue;
       }
       try {

@@ -14,7 +14,12 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   });
   await qi.createTable('users', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    organisation_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'organisations', key: 'id' }, onDelete: 'CASCADE' },
+    organisation_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'organisations', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
     name: { type: DataTypes.STRING(80), allowNull: false },
     role: { type: DataTypes.STRING(16), allowNull: false },
@@ -26,8 +31,18 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   await qi.addIndex('users', ['organisation_id']);
   await qi.createTable('invitations', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    organisation_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'organisations', key: 'id' }, onDelete: 'CASCADE' },
-    invited_by_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    organisation_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'organisations', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    invited_by_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     email: { type: DataTypes.STRING(254), allowNull: false },
     role: { type: DataTypes.STRING(16), allowNull: false },
     token_hash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
@@ -39,7 +54,12 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   await qi.addIndex('invitations', ['organisation_id']);
   await qi.createTable('password_resets', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    user_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     token_hash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
     expires_at: { type: DataTypes.DATE, allowNull: false },
     used_at: { type: DataTypes.DATE, allowNull: true },
@@ -47,8 +67,18 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   });
   await qi.createTable('outbox_messages', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    organisation_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'organisations', key: 'id' }, onDelete: 'CASCADE' },
-    user_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    organisation_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'organisations', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     kind: { type: DataTypes.STRING(40), allowNull: false },
     to_address: { type: DataTypes.STRING(254), allowNull: false },
     from_address: { type: DataTypes.STRING(254), allowNull: false },

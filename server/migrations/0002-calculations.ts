@@ -4,7 +4,12 @@ import { DataTypes, type QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.createTable('bottle_formats', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    organisation_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'organisations', key: 'id' }, onDelete: 'CASCADE' },
+    organisation_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'organisations', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING(60), allowNull: false },
     liquid_ml: { type: DataTypes.FLOAT, allowNull: false },
     headspace_ml: { type: DataTypes.FLOAT, allowNull: false },
@@ -19,7 +24,11 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   });
   await qi.addIndex('bottle_formats', ['organisation_id', 'name'], { unique: true });
   await qi.addColumn('users', 'unit_system', { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'metric' });
-  await qi.addColumn('organisations', 'abv_limit_percent', { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 });
+  await qi.addColumn('organisations', 'abv_limit_percent', {
+    type: DataTypes.FLOAT,
+    allowNull: false,
+    defaultValue: 0.5,
+  });
 }
 
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {

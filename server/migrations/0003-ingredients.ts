@@ -7,7 +7,12 @@ import { DataTypes, type QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.createTable('ingredients', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    organisation_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'organisations', key: 'id' }, onDelete: 'CASCADE' },
+    organisation_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'organisations', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING(200), allowNull: false },
     category: { type: DataTypes.STRING(20), allowNull: false },
     energy_kcal: { type: DataTypes.FLOAT, allowNull: true },
@@ -29,8 +34,13 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
   await qi.addIndex('ingredients', ['organisation_id', 'name']);
-  await qi.addIndex('ingredients', ['source_dataset', 'source_record'], { unique: true, where: { organisation_id: null } });
-  await qi.sequelize.query(`CREATE VIRTUAL TABLE ingredient_search USING fts5(name, content='ingredients', content_rowid='id', tokenize='unicode61 remove_diacritics 2')`);
+  await qi.addIndex('ingredients', ['source_dataset', 'source_record'], {
+    unique: true,
+    where: { organisation_id: null },
+  });
+  await qi.sequelize.query(
+    `CREATE VIRTUAL TABLE ingredient_search USING fts5(name, content='ingredients', content_rowid='id', tokenize='unicode61 remove_diacritics 2')`,
+  );
   await qi.sequelize.query(`CREATE TRIGGER ingredients_ai AFTER INSERT ON ingredients BEGIN
     INSERT INTO ingredient_search(rowid, name) VALUES (new.id, new.name); END`);
   await qi.sequelize.query(`CREATE TRIGGER ingredients_ad AFTER DELETE ON ingredients BEGIN
@@ -40,8 +50,18 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     INSERT INTO ingredient_search(rowid, name) VALUES (new.id, new.name); END`);
   await qi.createTable('ingredient_changes', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    ingredient_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'ingredients', key: 'id' }, onDelete: 'CASCADE' },
-    user_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    ingredient_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'ingredients', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     action: { type: DataTypes.STRING(20), allowNull: false },
     changes: { type: DataTypes.TEXT, allowNull: false },
     created_at: { type: DataTypes.DATE, allowNull: false },

@@ -9,7 +9,12 @@ const timestamps = {
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.createTable('recipes', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    organisation_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'organisations', key: 'id' }, onDelete: 'CASCADE' },
+    organisation_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'organisations', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING(100), allowNull: false },
     flavour_notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft' },
@@ -20,21 +25,41 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   await qi.addIndex('recipes', ['organisation_id', 'name']);
   await qi.createTable('recipe_versions', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    recipe_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'recipes', key: 'id' }, onDelete: 'CASCADE' },
+    recipe_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'recipes', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     number: { type: DataTypes.INTEGER, allowNull: false },
     name: { type: DataTypes.STRING(100), allowNull: false },
     flavour_notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     content: { type: DataTypes.TEXT, allowNull: false },
     note: { type: DataTypes.STRING(300), allowNull: false, defaultValue: '' },
-    created_by_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    created_by_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     ...timestamps,
   });
   await qi.addIndex('recipe_versions', ['recipe_id', 'number'], { unique: true });
   await qi.createTable('tastings', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    recipe_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'recipes', key: 'id' }, onDelete: 'CASCADE' },
+    recipe_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'recipes', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     version_number: { type: DataTypes.INTEGER, allowNull: false },
-    user_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     tasted_on: { type: DataTypes.STRING(10), allowNull: false },
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     sweetness: { type: DataTypes.INTEGER, allowNull: false },

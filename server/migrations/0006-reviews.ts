@@ -7,10 +7,20 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   await qi.addColumn('users', 'notify_reviews', { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true });
   await qi.createTable('recipe_reviews', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    recipe_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'recipes', key: 'id' }, onDelete: 'CASCADE' },
+    recipe_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'recipes', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     version_number: { type: DataTypes.INTEGER, allowNull: false },
     action: { type: DataTypes.STRING(20), allowNull: false },
-    user_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    user_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     comment: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     override_reason: { type: DataTypes.TEXT, allowNull: true },
     self_approved: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

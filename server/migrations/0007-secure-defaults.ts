@@ -35,7 +35,13 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.bulkUpdate(
       'invitations',
       { revoked_at: new Date() },
-      { organisation_id: row.organisation_id, email: row.email, accepted_at: null, revoked_at: null, id: { [Op.ne]: row.keep } },
+      {
+        organisation_id: row.organisation_id,
+        email: row.email,
+        accepted_at: null,
+        revoked_at: null,
+        id: { [Op.ne]: row.keep },
+      },
     );
   }
   await qi.addIndex('invitations', ['organisation_id', 'email'], {

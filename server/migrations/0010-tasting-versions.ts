@@ -6,7 +6,9 @@ import { DataTypes, type QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.addColumn('tastings', 'created_version', { type: DataTypes.INTEGER, allowNull: true });
-  await qi.sequelize.query('UPDATE tastings SET created_version = version_number, version_number = version_number - 1 WHERE sugar_addition IS NOT NULL AND version_number > 1');
+  await qi.sequelize.query(
+    'UPDATE tastings SET created_version = version_number, version_number = version_number - 1 WHERE sugar_addition IS NOT NULL AND version_number > 1',
+  );
 }
 
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {

@@ -11,6 +11,7 @@ import * as warmDay from './0008-warm-day';
 import * as alcoholLicence from './0009-alcohol-licence';
 import * as tastingVersions from './0010-tasting-versions';
 import * as ratingShare from './0011-rating-share';
+import * as dropRecipeStatus from './0012-drop-recipe-status';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -30,4 +31,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0009-alcohol-licence', ...alcoholLicence },
   { name: '0010-tasting-versions', ...tastingVersions },
   { name: '0011-rating-share', ...ratingShare },
+  { name: '0012-drop-recipe-status', ...dropRecipeStatus },
 ];

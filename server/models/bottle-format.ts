@@ -1,6 +1,15 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  type CreationOptional,
+  DataTypes,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  Model,
+  type Sequelize,
+} from 'sequelize';
 
-import type { Closure, Material } from '../../lib/schemas/bottle-formats';
+import type { Closure, Material } from '@/lib/schemas/bottle-formats';
+
 import type { Organisation } from './organisation';
 
 /** A kind of container a brewery fills, with the working pressure its supplier rates it for. */

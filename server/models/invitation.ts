@@ -1,6 +1,16 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  type CreationOptional,
+  DataTypes,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  Model,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 
-import type { Role } from '../../lib/roles';
+import type { Role } from '@/lib/roles';
+
 import type { Organisation } from './organisation';
 import type { User } from './user';
 

@@ -1,5 +1,13 @@
-import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  type CreationOptional,
+  DataTypes,
+  type InferAttributes,
+  type InferCreationAttributes,
+  Model,
+  type Sequelize,
+} from 'sequelize';
+
+import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '@/lib/chemistry/carbonation';
 
 /** A brewery. Every record in Fizzwright belongs to exactly one. */
 export class Organisation extends Model<InferAttributes<Organisation>, InferCreationAttributes<Organisation>> {

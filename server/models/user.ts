@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  type CreationOptional,
+  DataTypes,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  Model,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 
-import type { Role } from '../../lib/roles';
-import type { UnitSystem } from '../../lib/units';
+import type { Role } from '@/lib/roles';
+import type { UnitSystem } from '@/lib/units';
+
 import type { Organisation } from './organisation';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -19,6 +29,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare notifyReviews: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  declare organisation?: NonAttribute<Organisation>;
 
   static initModel(sequelize: Sequelize): void {
     User.init(

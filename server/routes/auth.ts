@@ -1,6 +1,6 @@
 import { setTimeout as sleep } from 'node:timers/promises';
 
-import { Router, type Response } from 'express';
+import { type Response, Router } from 'express';
 
 import {
   acceptInvitationSchema,
@@ -10,14 +10,14 @@ import {
   resetPasswordSchema,
   signInSchema,
   signUpSchema,
-} from '../../lib/schemas/auth';
-import { config } from '../config';
-import { allow, authOf, tokenFrom } from '../middleware/access';
-import { accountKeys, perAccountLimit, perAddressLimit } from '../middleware/rate-limits';
-import { validate } from '../middleware/validate';
-import * as auth from '../services/auth';
-import { revokeToken, SESSION_COOKIE, sessionCookieOptions, signSessionToken } from '../services/sessions';
-import type { User } from '../models/user';
+} from '@/lib/schemas/auth';
+import { config } from '@/server/config';
+import { allow, authOf, tokenFrom } from '@/server/middleware/access';
+import { accountKeys, perAccountLimit, perAddressLimit } from '@/server/middleware/rate-limits';
+import { validate } from '@/server/middleware/validate';
+import type { User } from '@/server/models/user';
+import * as auth from '@/server/services/auth';
+import { revokeToken, SESSION_COOKIE, sessionCookieOptions, signSessionToken } from '@/server/services/sessions';
 
 export const authRouter = Router();
 
@@ -47,22 +47,40 @@ async function atLeastFloor<T>(work: () => Promise<T>): Promise<T> {
   }
 }
 
-authRouter.post('/sign-up', allow('public'), byAddress, limits.signUp, validate({ body: signUpSchema }, async ({ body }, res) => {
-  await atLeastFloor(() => auth.signUp(body));
-  res.status(202).json({ message: 'We sent a link to finish creating the brewery account. It works for 24 hours.' });
-}));
+authRouter.post(
+  '/sign-up',
+  allow('public'),
+  byAddress,
+  limits.signUp,
+  validate({ body: signUpSchema }, async ({ body }, res) => {
+    await atLeastFloor(() => auth.signUp(body));
+    res.status(202).json({ message: 'We sent a link to finish creating the brewery account. It works for 24 hours.' });
+  }),
+);
 
-authRouter.post('/confirm-sign-up', allow('public'), byAddress, limits.confirm, validate({ body: confirmSignUpSchema }, async ({ body }, res) => {
-  const { user, session } = await auth.confirmSignUp(body.token);
-  startSession(res, user);
-  res.status(201).json(session);
-}));
+authRouter.post(
+  '/confirm-sign-up',
+  allow('public'),
+  byAddress,
+  limits.confirm,
+  validate({ body: confirmSignUpSchema }, async ({ body }, res) => {
+    const { user, session } = await auth.confirmSignUp(body.token);
+    startSession(res, user);
+    res.status(201).json(session);
+  }),
+);
 
-authRouter.post('/sign-in', allow('public'), byAddress, limits.signIn, validate({ body: signInSchema }, async ({ body }, res) => {
-  const { user, session } = await auth.signIn(body);
-  startSession(res, user);
-  res.json(session);
-}));
+authRouter.post(
+  '/sign-in',
+  allow('public'),
+  byAddress,
+  limits.signIn,
+  validate({ body: signInSchema }, async ({ body }, res) => {
+    const { user, session } = await auth.signIn(body);
+    startSession(res, user);
+    res.json(session);
+  }),
+);
 
 /** Ends this session on the server too: the same token is refused from now on, even if someone kept a copy. */
 authRouter.post('/sign-out', allow('public'), async (req, res) => {
@@ -77,23 +95,49 @@ authRouter.get('/session', allow('signed-in'), async (_req, res) => {
   res.json(await auth.sessionFor(authOf(res).userId));
 });
 
-authRouter.post('/forgot-password', allow('public'), byAddress, limits.forgot, validate({ body: forgotPasswordSchema }, async ({ body }, res) => {
-  await atLeastFloor(() => auth.requestPasswordReset(body.email));
-  res.status(202).json({ message: 'If an account uses this address, a reset link is on its way. It works for 1 hour.' });
-}));
+authRouter.post(
+  '/forgot-password',
+  allow('public'),
+  byAddress,
+  limits.forgot,
+  validate({ body: forgotPasswordSchema }, async ({ body }, res) => {
+    await atLeastFloor(() => auth.requestPasswordReset(body.email));
+    res
+      .status(202)
+      .json({ message: 'If an account uses this address, a reset link is on its way. It works for 1 hour.' });
+  }),
+);
 
-authRouter.post('/reset-password', allow('public'), byAddress, limits.reset, validate({ body: resetPasswordSchema }, async ({ body }, res) => {
-  const { user, session } = await auth.resetPassword(body);
-  startSession(res, user);
-  res.json(session);
-}));
+authRouter.post(
+  '/reset-password',
+  allow('public'),
+  byAddress,
+  limits.reset,
+  validate({ body: resetPasswordSchema }, async ({ body }, res) => {
+    const { user, session } = await auth.resetPassword(body);
+    startSession(res, user);
+    res.json(session);
+  }),
+);
 
-authRouter.get('/invitations/:token', allow('public'), byAddress, limits.preview, validate({ params: invitationTokenParams }, async ({ params }, res) => {
-  res.json(await auth.previewInvitation(params.token));
-}));
+authRouter.get(
+  '/invitations/:token',
+  allow('public'),
+  byAddress,
+  limits.preview,
+  validate({ params: invitationTokenParams }, async ({ params }, res) => {
+    res.json(await auth.previewInvitation(params.token));
+  }),
+);
 
-authRouter.post('/accept-invitation', allow('public'), byAddress, limits.accept, validate({ body: acceptInvitationSchema }, async ({ body }, res) => {
-  const { user, session } = await auth.acceptInvitation(body);
-  startSession(res, user);
-  res.status(201).json(session);
-}));
+authRouter.post(
+  '/accept-invitation',
+  allow('public'),
+  byAddress,
+  limits.accept,
+  validate({ body: acceptInvitationSchema }, async ({ body }, res) => {
+    const { user, session } = await auth.acceptInvitation(body);
+    startSession(res, user);
+    res.status(201).json(session);
+  }),
+);

@@ -1,7 +1,8 @@
 import { Router } from 'express';
-import { carbonationSchema } from '../../lib/schemas/calculations';
-import { allow } from '../middleware/access';
-import { validate } from '../middleware/validate';
+
+import { carbonationSchema } from '@/lib/schemas/calculations';
+import { allow } from '@/server/middleware/access';
+import { validate } from '@/server/middleware/validate';
 
 /**
  * Reference endpoints for `npm run bench`, mounted only with BENCH_ROUTES=true. /noop runs exactly the middleware
@@ -10,9 +11,13 @@ import { validate } from '../middleware/validate';
  */
 export const benchRouter = Router();
 
-benchRouter.post('/noop', allow('signed-in'), validate({ body: carbonationSchema }, (_values, res) => {
-  res.json({ ok: true });
-}));
+benchRouter.post(
+  '/noop',
+  allow('signed-in'),
+  validate({ body: carbonationSchema }, (_values, res) => {
+    res.json({ ok: true });
+  }),
+);
 
 /** The same with no body, signed in and not: the difference is what the session check costs. */
 benchRouter.get('/signed-in', allow('signed-in'), (_req, res) => {

@@ -1,48 +1,79 @@
-import { Router, type RequestHandler } from 'express';
+import { type RequestHandler, Router } from 'express';
 import multer from 'multer';
 
-import { idParam } from '../../lib/schemas/common';
-import { copyIngredientSchema, houseIngredientSchema, ingredientSearchSchema } from '../../lib/schemas/ingredients';
-import { allow, authOf } from '../middleware/access';
-import { validate } from '../middleware/validate';
-import { config } from '../config';
-import * as attachments from '../services/attachments';
-import * as ingredients from '../services/ingredients';
+import { idParam } from '@/lib/schemas/common';
+import { copyIngredientSchema, houseIngredientSchema, ingredientSearchSchema } from '@/lib/schemas/ingredients';
+import { config } from '@/server/config';
+import { allow, authOf } from '@/server/middleware/access';
+import { validate } from '@/server/middleware/validate';
+import * as attachments from '@/server/services/attachments';
+import * as ingredients from '@/server/services/ingredients';
 
 export const ingredientsRouter = Router();
 
+ingredientsRouter.get(
+  '/',
+  allow('signed-in'),
+  validate({ query: ingredientSearchSchema }, async ({ query }, res) => {
+    res.json(await ingredients.searchIngredients(authOf(res), query));
+  }),
+);
 
-ingredientsRouter.get('/', allow('signed-in'), validate({ query: ingredientSearchSchema }, async ({ query }, res) => {
-  res.json(await ingredients.searchIngredients(authOf(res), query));
-}));
+ingredientsRouter.get(
+  '/:id',
+  allow('signed-in'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    res.json(ingredients.toIngredientDto(await ingredients.visibleIngredient(authOf(res), params.id)));
+  }),
+);
 
-ingredientsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
-  res.json(ingredients.toIngredientDto(await ingredients.visibleIngredient(authOf(res), params.id)));
-}));
+ingredientsRouter.get(
+  '/:id/changes',
+  allow('signed-in'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    res.json(await ingredients.ingredientChanges(authOf(res), params.id));
+  }),
+);
 
-ingredientsRouter.get('/:id/changes', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
-  res.json(await ingredients.ingredientChanges(authOf(res), params.id));
-}));
+ingredientsRouter.post(
+  '/',
+  allow('ingredients.edit'),
+  validate({ body: houseIngredientSchema }, async ({ body }, res) => {
+    res.status(201).json(await ingredients.createHouseIngredient(authOf(res), body));
+  }),
+);
 
-ingredientsRouter.post('/', allow('ingredients.edit'), validate({ body: houseIngredientSchema }, async ({ body }, res) => {
-  res.status(201).json(await ingredients.createHouseIngredient(authOf(res), body));
-}));
+ingredientsRouter.put(
+  '/:id',
+  allow('ingredients.edit'),
+  validate({ params: idParam, body: houseIngredientSchema }, async ({ params, body }, res) => {
+    res.json(await ingredients.updateHouseIngredient(authOf(res), params.id, body));
+  }),
+);
 
-ingredientsRouter.put('/:id', allow('ingredients.edit'), validate({ params: idParam, body: houseIngredientSchema }, async ({ params, body }, res) => {
-  res.json(await ingredients.updateHouseIngredient(authOf(res), params.id, body));
-}));
+ingredientsRouter.post(
+  '/:id/copy',
+  allow('ingredients.edit'),
+  validate({ params: idParam, body: copyIngredientSchema }, async ({ params, body }, res) => {
+    res.status(201).json(await ingredients.copyToHouse(authOf(res), params.id, body.name));
+  }),
+);
 
-ingredientsRouter.post('/:id/copy', allow('ingredients.edit'), validate({ params: idParam, body: copyIngredientSchema }, async ({ params, body }, res) => {
-  res.status(201).json(await ingredients.copyToHouse(authOf(res), params.id, body.name));
-}));
+ingredientsRouter.post(
+  '/:id/archive',
+  allow('ingredients.edit'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, true));
+  }),
+);
 
-ingredientsRouter.post('/:id/archive', allow('ingredients.edit'), validate({ params: idParam }, async ({ params }, res) => {
-  res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, true));
-}));
-
-ingredientsRouter.post('/:id/restore', allow('ingredients.edit'), validate({ params: idParam }, async ({ params }, res) => {
-  res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, false));
-}));
+ingredientsRouter.post(
+  '/:id/restore',
+  allow('ingredients.edit'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, false));
+  }),
+);
 
 /**
  * One file in the field "file" and nothing much else: every part, field and header is bounded, so a request of
@@ -50,7 +81,15 @@ ingredientsRouter.post('/:id/restore', allow('ingredients.edit'), validate({ par
  */
 const upload = multer({
   storage: multer.memoryStorage(),
-  limits: { fileSize: config.uploadMaxBytes, files: 1, fields: 5, fieldSize: 8 * 1024, fieldNameSize: 100, parts: 6, headerPairs: 50 },
+  limits: {
+    fileSize: config.uploadMaxBytes,
+    files: 1,
+    fields: 5,
+    fieldSize: 8 * 1024,
+    fieldNameSize: 100,
+    parts: 6,
+    headerPairs: 50,
+  },
 });
 
 /** Multer's and busboy's errors (limits, a truncated body, no boundary) are the sender's: never a 500. */
@@ -58,25 +97,42 @@ const receiveFile: RequestHandler = (req, res, next) => {
   upload.single('file')(req, res, (error: unknown) => next(error ? attachments.uploadError(error) : undefined));
 };
 
-ingredientsRouter.get('/:id/attachments', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
-  res.json(await attachments.listAttachments(authOf(res), params.id));
-}));
+ingredientsRouter.get(
+  '/:id/attachments',
+  allow('signed-in'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    res.json(await attachments.listAttachments(authOf(res), params.id));
+  }),
+);
 
-ingredientsRouter.post('/:id/attachments', allow('ingredients.edit', { accepts: 'multipart' }), receiveFile, validate({ params: idParam }, async ({ params }, res, req) => {
-  res.status(201).json(await attachments.addAttachment(authOf(res), params.id, req.file));
-}));
+ingredientsRouter.post(
+  '/:id/attachments',
+  allow('ingredients.edit', { accepts: 'multipart' }),
+  receiveFile,
+  validate({ params: idParam }, async ({ params }, res, req) => {
+    res.status(201).json(await attachments.addAttachment(authOf(res), params.id, req.file));
+  }),
+);
 
 /** Mounted at /api/attachments: files are served only to members of the brewery that owns them. */
 export const attachmentsRouter = Router();
 
-attachmentsRouter.get('/:id', allow('signed-in'), validate({ params: idParam }, async ({ params }, res) => {
-  const file = await attachments.attachmentFile(authOf(res), params.id);
-  res.setHeader('Content-Type', file.mimeType);
-  res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/"/g, '')}"`);
-  res.sendFile(file.path);
-}));
+attachmentsRouter.get(
+  '/:id',
+  allow('signed-in'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    const file = await attachments.attachmentFile(authOf(res), params.id);
+    res.setHeader('Content-Type', file.mimeType);
+    res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/"/g, '')}"`);
+    res.sendFile(file.path);
+  }),
+);
 
-attachmentsRouter.delete('/:id', allow('ingredients.edit'), validate({ params: idParam }, async ({ params }, res) => {
-  await attachments.deleteAttachment(authOf(res), params.id);
-  res.status(204).end();
-}));
+attachmentsRouter.delete(
+  '/:id',
+  allow('ingredients.edit'),
+  validate({ params: idParam }, async ({ params }, res) => {
+    await attachments.deleteAttachment(authOf(res), params.id);
+    res.status(204).end();
+  }),
+);

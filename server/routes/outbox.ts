@@ -1,11 +1,11 @@
 import { Router } from 'express';
 
-import { idParam } from '../../lib/schemas/common';
-import { config } from '../config';
-import { unauthorized } from '../errors';
-import { allow, optionalAuth } from '../middleware/access';
-import { validate } from '../middleware/validate';
-import { listOutbox, readOutboxMessage } from '../services/outbox';
+import { idParam } from '@/lib/schemas/common';
+import { config } from '@/server/config';
+import { unauthorized } from '@/server/errors';
+import { allow, optionalAuth } from '@/server/middleware/access';
+import { validate } from '@/server/middleware/validate';
+import { listOutbox, readOutboxMessage } from '@/server/services/outbox';
 
 export const outboxRouter = Router();
 
@@ -17,8 +17,12 @@ outboxRouter.get('/', allow('public'), async (req, res) => {
   res.json({ messages, open: config.outboxOpen });
 });
 
-outboxRouter.get('/:id', allow('public'), validate({ params: idParam }, async ({ params }, res, req) => {
-  const message = await readOutboxMessage(await optionalAuth(req), config.outboxOpen, params.id);
-  if (!message) throw unauthorized();
-  res.json(message);
-}));
+outboxRouter.get(
+  '/:id',
+  allow('public'),
+  validate({ params: idParam }, async ({ params }, res, req) => {
+    const message = await readOutboxMessage(await optionalAuth(req), config.outboxOpen, params.id);
+    if (!message) throw unauthorized();
+    res.json(message);
+  }),
+);

@@ -1,8 +1,9 @@
-import { defaultProcess } from '../../lib/recipes/stages';
-import type { RecipeContent, TastingInput } from '../../lib/schemas/recipes';
-import { BottleFormat, Ingredient, Organisation, Recipe, User } from '../db';
-import { logger } from '../logger';
-import { addTasting, createRecipe, saveRecipe } from '../services/recipes';
+import { defaultProcess } from '@/lib/recipes/stages';
+import type { RecipeContent, TastingInput } from '@/lib/schemas/recipes';
+import { BottleFormat, Ingredient, Organisation, Recipe, User } from '@/server/db';
+import { logger } from '@/server/logger';
+import { addTasting, createRecipe, saveRecipe } from '@/server/services/recipes';
+
 import { DEMO_BREWERY } from './demo';
 
 /** USDA SR25 record of each ingredient the demo recipes use (all in the starter library). */
@@ -59,7 +60,17 @@ const RECIPES: DemoRecipe[] = [
       sweetnessNote: 'dry',
       highestTempC: 25,
     }),
-    tastings: [{ tastedOn: '2026-11-18', notes: 'Deep colour, gentle fizz; the fruit sugar alone is enough.', sweetness: 2, sourness: 3, fizz: 3, flavour: 4, sugarAddition: null }],
+    tastings: [
+      {
+        tastedOn: '2026-11-18',
+        notes: 'Deep colour, gentle fizz; the fruit sugar alone is enough.',
+        sweetness: 2,
+        sourness: 3,
+        fizz: 3,
+        flavour: 4,
+        sugarAddition: null,
+      },
+    ],
   },
   {
     name: 'Rhubarb Custard Tart',
@@ -78,7 +89,17 @@ const RECIPES: DemoRecipe[] = [
       sweetnessNote: 'sweet',
       highestTempC: 35,
     }),
-    tastings: [{ tastedOn: '2026-11-20', notes: 'Lovely aroma; test bottle gushed after five days. Too much sugar with the biscuit in.', sweetness: 4, sourness: 2, fizz: 5, flavour: 4, sugarAddition: null }],
+    tastings: [
+      {
+        tastedOn: '2026-11-20',
+        notes: 'Lovely aroma; test bottle gushed after five days. Too much sugar with the biscuit in.',
+        sweetness: 4,
+        sourness: 2,
+        fizz: 5,
+        flavour: 4,
+        sugarAddition: null,
+      },
+    ],
   },
   {
     name: 'Ginger Lime Snap',
@@ -97,8 +118,24 @@ const RECIPES: DemoRecipe[] = [
       highestTempC: 25,
     }),
     tastings: [
-      { tastedOn: '2026-11-22', notes: 'Ginger heat is right; lime fades.', sweetness: 3, sourness: 3, fizz: 3, flavour: 3, sugarAddition: null },
-      { tastedOn: '2026-11-26', notes: 'More lime in version 2 is brighter.', sweetness: 3, sourness: 4, fizz: 4, flavour: 4, sugarAddition: null },
+      {
+        tastedOn: '2026-11-22',
+        notes: 'Ginger heat is right; lime fades.',
+        sweetness: 3,
+        sourness: 3,
+        fizz: 3,
+        flavour: 3,
+        sugarAddition: null,
+      },
+      {
+        tastedOn: '2026-11-26',
+        notes: 'More lime in version 2 is brighter.',
+        sweetness: 3,
+        sourness: 4,
+        fizz: 4,
+        flavour: 4,
+        sugarAddition: null,
+      },
     ],
     revise: (c) => ({ ...c, lines: c.lines.map((l, i) => (i === 1 ? { ...l, amount: 22 } : l)) }),
   },
@@ -118,7 +155,17 @@ const RECIPES: DemoRecipe[] = [
       sweetnessNote: 'tart',
       highestTempC: 25,
     }),
-    tastings: [{ tastedOn: '2026-11-28', notes: 'Cardamom too shy; cherries carry it. Too tart: a little sugar.', sweetness: 1, sourness: 5, fizz: 2, flavour: 3, sugarAddition: { type: 'sucrose', grams: 0.5, toMl: 473 } }],
+    tastings: [
+      {
+        tastedOn: '2026-11-28',
+        notes: 'Cardamom too shy; cherries carry it. Too tart: a little sugar.',
+        sweetness: 1,
+        sourness: 5,
+        fizz: 2,
+        flavour: 3,
+        sugarAddition: { type: 'sucrose', grams: 0.5, toMl: 473 },
+      },
+    ],
   },
 ];
 
@@ -131,13 +178,26 @@ export async function seedDemoRecipesIfEmpty(): Promise<boolean> {
   if (!developer || !bottle) return false;
   const rows = await Ingredient.findAll({ where: { organisationId: null, sourceRecord: Object.values(RECORDS) } });
   const byRecord = new Map(rows.map((r) => [r.sourceRecord, r.id]));
-  const ids = Object.fromEntries(Object.entries(RECORDS).map(([key, record]) => [key, byRecord.get(record)])) as Record<Key, number>;
+  const ids = Object.fromEntries(Object.entries(RECORDS).map(([key, record]) => [key, byRecord.get(record)])) as Record<
+    Key,
+    number
+  >;
   if (Object.values(ids).some((id) => id === undefined)) return false;
   const auth = { userId: developer.id, organisationId: brewery.id, role: developer.role };
   for (const demo of RECIPES) {
-    const created = await createRecipe(auth, { name: demo.name, flavourNotes: demo.notes, content: demo.content(ids, bottle.id) });
+    const created = await createRecipe(auth, {
+      name: demo.name,
+      flavourNotes: demo.notes,
+      content: demo.content(ids, bottle.id),
+    });
     if (demo.revise) {
-      await saveRecipe(auth, created.id, { name: demo.name, flavourNotes: demo.notes, content: demo.revise(created.content), baseVersion: 1, note: 'More lime after the first tasting' });
+      await saveRecipe(auth, created.id, {
+        name: demo.name,
+        flavourNotes: demo.notes,
+        content: demo.revise(created.content),
+        baseVersion: 1,
+        note: 'More lime after the first tasting',
+      });
     }
     for (const tasting of demo.tastings) await addTasting(auth, created.id, tasting);
   }

@@ -1,7 +1,7 @@
-import { Organisation, transaction, User } from '../db';
-import { logger } from '../logger';
-import { seedStarterFormats } from '../services/bottle-formats';
-import { hashPassword } from '../services/passwords';
+import { Organisation, transaction, User } from '@/server/db';
+import { logger } from '@/server/logger';
+import { seedStarterFormats } from '@/server/services/bottle-formats';
+import { hashPassword } from '@/server/services/passwords';
 
 /**
  * The demo scenario: Wrenfield Cultured Drinks, an invented four-person brewery. Names, addresses and
@@ -23,7 +23,13 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
     await seedStarterFormats(brewery.id, transaction);
     for (const [i, account] of DEMO_ACCOUNTS.entries()) {
       await User.create(
-        { organisationId: brewery.id, email: account.email, name: account.name, role: account.role, passwordHash: hashes[i] },
+        {
+          organisationId: brewery.id,
+          email: account.email,
+          name: account.name,
+          role: account.role,
+          passwordHash: hashes[i],
+        },
         { transaction },
       );
     }

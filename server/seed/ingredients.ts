@@ -1,6 +1,7 @@
-import { config } from '../config';
-import { datasetIngredientCount, importDatasetIngredients } from '../services/ingredients';
-import { ingredientFromSr, NotSrFolderError, readSrFoods } from '../usda/sr-files';
+import { config } from '@/server/config';
+import { datasetIngredientCount, importDatasetIngredients } from '@/server/services/ingredients';
+import { ingredientFromSr, NotSrFolderError, readSrFoods } from '@/server/usda/sr-files';
+
 import { loadStarterIngredients } from './starter-ingredients';
 
 /**

@@ -2,11 +2,12 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 
-import type { Attachment } from '../../lib/api/types';
-import { config } from '../config';
-import { Attachment as AttachmentRow, transaction, User } from '../db';
-import { badRequest, forbidden, HttpError, notFound } from '../errors';
-import { logger } from '../logger';
+import type { Attachment } from '@/lib/api/types';
+import { config } from '@/server/config';
+import { Attachment as AttachmentRow, transaction, User } from '@/server/db';
+import { badRequest, forbidden, HttpError, notFound } from '@/server/errors';
+import { logger } from '@/server/logger';
+
 import { visibleIngredient } from './ingredients';
 import type { AuthContext } from './sessions';
 
@@ -34,19 +35,31 @@ const toDto = (a: AttachmentRow & { uploadedBy?: User | null }): AttachmentDto =
 });
 
 /** Keeps a spec sheet or label photo of a house ingredient, checked by content, under a generated name. */
-export async function addAttachment(auth: AuthContext, ingredientId: number, file: { buffer: Buffer; originalname: string } | undefined): Promise<AttachmentDto> {
+export async function addAttachment(
+  auth: AuthContext,
+  ingredientId: number,
+  file: { buffer: Buffer; originalname: string } | undefined,
+): Promise<AttachmentDto> {
   const ingredient = await visibleIngredient(auth, ingredientId);
   if (ingredient.organisationId === null) throw forbidden('Files can be attached to house ingredients only.');
   if (!file) throw badRequest('Choose a file to attach.', { file: 'Choose a file to attach.' });
   const type = sniffFileType(file.buffer);
-  if (!type) throw badRequest('Attach a PDF, JPEG or PNG file.', { file: 'This file is not a PDF, JPEG or PNG (checked by its content, not its name).' });
+  if (!type)
+    throw badRequest('Attach a PDF, JPEG or PNG file.', {
+      file: 'This file is not a PDF, JPEG or PNG (checked by its content, not its name).',
+    });
   const storedName = `${crypto.randomBytes(16).toString('hex')}.${type.ext}`;
-  const originalName = path.basename(file.originalname).replace(/[^\w .()-]+/g, '_').slice(0, 200) || `file.${type.ext}`;
+  const originalName =
+    path
+      .basename(file.originalname)
+      .replace(/[^\w .()-]+/g, '_')
+      .slice(0, 200) || `file.${type.ext}`;
   const filePath = path.join(config.uploadsDir, storedName);
   try {
     // The quota is checked and the row written in one write transaction, so two uploads at once cannot both pass.
     const created = await transaction(async (t) => {
-      const used = (await AttachmentRow.sum('sizeBytes', { where: { organisationId: auth.organisationId }, transaction: t })) ?? 0;
+      const used =
+        (await AttachmentRow.sum('sizeBytes', { where: { organisationId: auth.organisationId }, transaction: t })) ?? 0;
       if (used + file.buffer.length > config.uploadQuotaBytes) throw quotaFull(used);
       fs.mkdirSync(config.uploadsDir, { recursive: true });
       await fs.promises.writeFile(filePath, file.buffer, { flag: 'wx' });
@@ -85,15 +98,29 @@ function quotaFull(usedBytes: number): HttpError {
 export function uploadError(error: unknown): HttpError {
   if (error instanceof HttpError) return error;
   const code = (error as { code?: string }).code;
-  if (code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'too_large', `The file is too large: at most ${megabytes(config.uploadMaxBytes)}.`, { file: 'This file is too large.' });
-  if (code?.startsWith('LIMIT_')) return new HttpError(413, 'too_large', 'Send one file, in the field "file", with no other large fields.', { file: 'Too many or too large parts.' });
-  return new HttpError(400, 'invalid_upload', 'The upload could not be read (it may have been cut off). Send one file, in the field "file".', { file: 'Send one file.' });
+  if (code === 'LIMIT_FILE_SIZE')
+    return new HttpError(413, 'too_large', `The file is too large: at most ${megabytes(config.uploadMaxBytes)}.`, {
+      file: 'This file is too large.',
+    });
+  if (code?.startsWith('LIMIT_'))
+    return new HttpError(413, 'too_large', 'Send one file, in the field "file", with no other large fields.', {
+      file: 'Too many or too large parts.',
+    });
+  return new HttpError(
+    400,
+    'invalid_upload',
+    'The upload could not be read (it may have been cut off). Send one file, in the field "file".',
+    { file: 'Send one file.' },
+  );
 }
 
 /** Deletes an attached file of the brewery: its row and the file itself. */
 export async function deleteAttachment(auth: AuthContext, id: number): Promise<void> {
   const storedName = await transaction(async (t) => {
-    const attachment = await AttachmentRow.findOne({ where: { id, organisationId: auth.organisationId }, transaction: t });
+    const attachment = await AttachmentRow.findOne({
+      where: { id, organisationId: auth.organisationId },
+      transaction: t,
+    });
     if (!attachment) throw notFound('No such file.');
     await attachment.destroy({ transaction: t });
     return attachment.storedName;
@@ -130,8 +157,15 @@ export async function listAttachments(auth: AuthContext, ingredientId: number): 
 }
 
 /** The file for a member of the brewery that owns it; anyone else is told it does not exist. */
-export async function attachmentFile(auth: AuthContext, id: number): Promise<{ path: string; mimeType: string; name: string }> {
+export async function attachmentFile(
+  auth: AuthContext,
+  id: number,
+): Promise<{ path: string; mimeType: string; name: string }> {
   const attachment = await AttachmentRow.findOne({ where: { id, organisationId: auth.organisationId } });
   if (!attachment) throw notFound('No such file.');
-  return { path: path.join(config.uploadsDir, attachment.storedName), mimeType: attachment.mimeType, name: attachment.originalName };
+  return {
+    path: path.join(config.uploadsDir, attachment.storedName),
+    mimeType: attachment.mimeType,
+    name: attachment.originalName,
+  };
 }

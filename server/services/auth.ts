@@ -1,12 +1,19 @@
-import { FOUNDER_ROLE } from '../../lib/roles';
 import { Op } from 'sequelize';
 
-import type { InvitationPreview, Session } from '../../lib/api/types';
-import type { AcceptInvitationInput, ResetPasswordInput, SignInInput, SignUpInput } from '../../lib/schemas/auth';
-import { Invitation, Organisation, PasswordReset, PendingSignUp, transaction, User } from '../db';
-import { conflict, gone, HttpError, notFound } from '../errors';
-import { mailer } from '../mail/mailer';
-import { confirmSignUpUrl, passwordResetMail, resetPasswordUrl, signUpAttemptMail, signUpConfirmationMail } from '../mail/templates';
+import type { InvitationPreview, Session } from '@/lib/api/types';
+import { FOUNDER_ROLE } from '@/lib/roles';
+import type { AcceptInvitationInput, ResetPasswordInput, SignInInput, SignUpInput } from '@/lib/schemas/auth';
+import { Invitation, Organisation, PasswordReset, PendingSignUp, transaction, User } from '@/server/db';
+import { conflict, gone, HttpError, notFound } from '@/server/errors';
+import { mailer } from '@/server/mail/mailer';
+import {
+  confirmSignUpUrl,
+  passwordResetMail,
+  resetPasswordUrl,
+  signUpAttemptMail,
+  signUpConfirmationMail,
+} from '@/server/mail/templates';
+
 import { seedStarterFormats } from './bottle-formats';
 import { redactUsedLink } from './outbox';
 import { checkPassword, decoyPasswordHash, hashPassword } from './passwords';
@@ -14,7 +21,8 @@ import { invitationStatus, toSession } from './serialize';
 import { hashToken, HOUR_MS, newOneTimeToken } from './tokens';
 
 /** One answer for an unknown address, a wrong password and a deactivated account, so none can be told apart. */
-const WRONG_CREDENTIALS = 'That e-mail and password do not match an account. If your account was deactivated, ask an owner of your brewery.';
+const WRONG_CREDENTIALS =
+  'That e-mail and password do not match an account. If your account was deactivated, ask an owner of your brewery.';
 
 /** How long a sign-up confirmation link works. */
 const SIGN_UP_TTL_MS = 24 * HOUR_MS;
@@ -29,14 +37,33 @@ export async function signUp(input: SignUpInput): Promise<void> {
   const existing = await User.findOne({ where: { email: input.email } });
   if (existing) {
     const mail = signUpAttemptMail({ name: existing.name });
-    await mailer.send({ ...mail, to: existing.email, kind: 'sign-up-attempt', organisationId: existing.organisationId, userId: existing.id });
+    await mailer.send({
+      ...mail,
+      to: existing.email,
+      kind: 'sign-up-attempt',
+      organisationId: existing.organisationId,
+      userId: existing.id,
+    });
     return;
   }
   const { token, tokenHash } = newOneTimeToken();
   const expiresAt = new Date(Date.now() + SIGN_UP_TTL_MS);
-  await PendingSignUp.create({ email: input.email, name: input.name, breweryName: input.breweryName, passwordHash, tokenHash, expiresAt });
+  await PendingSignUp.create({
+    email: input.email,
+    name: input.name,
+    breweryName: input.breweryName,
+    passwordHash,
+    tokenHash,
+    expiresAt,
+  });
   const mail = signUpConfirmationMail({ name: input.name, breweryName: input.breweryName, token });
-  await mailer.send({ ...mail, to: input.email, kind: 'sign-up', organisationId: null, link: { tokenHash, expiresAt } });
+  await mailer.send({
+    ...mail,
+    to: input.email,
+    kind: 'sign-up',
+    organisationId: null,
+    link: { tokenHash, expiresAt },
+  });
 }
 
 /** Follows a sign-up confirmation link: creates the brewery and its owner, once. */
@@ -45,9 +72,13 @@ export async function confirmSignUp(token: string): Promise<{ user: User; sessio
   const pending = await PendingSignUp.findOne({ where: { tokenHash } });
   if (!pending) throw notFound('This confirmation link is not valid. Sign up again to get a new one.');
   if (pending.usedAt) throw gone('This confirmation link has already been used. Sign in instead.');
-  if (pending.expiresAt.getTime() <= Date.now()) throw gone('This confirmation link has expired (links last 24 hours). Sign up again.');
+  if (pending.expiresAt.getTime() <= Date.now())
+    throw gone('This confirmation link has expired (links last 24 hours). Sign up again.');
   const user = await transaction(async (t) => {
-    const [claimed] = await PendingSignUp.update({ usedAt: new Date() }, { where: { id: pending.id, usedAt: { [Op.is]: null } }, transaction: t });
+    const [claimed] = await PendingSignUp.update(
+      { usedAt: new Date() },
+      { where: { id: pending.id, usedAt: { [Op.is]: null } }, transaction: t },
+    );
     if (claimed !== 1) throw gone('This confirmation link has already been used. Sign in instead.');
     if ((await User.count({ where: { email: pending.email }, transaction: t })) > 0) {
       throw conflict('An account with this e-mail already exists. Sign in instead.');
@@ -55,7 +86,13 @@ export async function confirmSignUp(token: string): Promise<{ user: User; sessio
     const organisation = await Organisation.create({ name: pending.breweryName }, { transaction: t });
     await seedStarterFormats(organisation.id, t);
     return User.create(
-      { organisationId: organisation.id, email: pending.email, name: pending.name, role: FOUNDER_ROLE, passwordHash: pending.passwordHash },
+      {
+        organisationId: organisation.id,
+        email: pending.email,
+        name: pending.name,
+        role: FOUNDER_ROLE,
+        passwordHash: pending.passwordHash,
+      },
       { transaction: t },
     );
   });
@@ -65,17 +102,20 @@ export async function confirmSignUp(token: string): Promise<{ user: User; sessio
 
 /** Checks e-mail and password. An unknown e-mail, a wrong password and a deactivated account get the same answer. */
 export async function signIn(input: SignInInput): Promise<{ user: User; session: Session }> {
-  const user = await User.findOne({ where: { email: input.email }, include: [{ model: Organisation, as: 'organisation' }] });
+  const user = await User.findOne({
+    where: { email: input.email },
+    include: [{ model: Organisation, as: 'organisation' }],
+  });
   const matches = await checkPassword(input.password, user?.passwordHash ?? (await decoyPasswordHash()));
   if (!user || !matches || !user.active) throw new HttpError(401, 'wrong_credentials', WRONG_CREDENTIALS);
-  const organisation = (user as User & { organisation: Organisation }).organisation;
-  return { user, session: toSession(user, organisation) };
+  // Included above; every user belongs to a brewery (a foreign key that is never null).
+  return { user, session: toSession(user, user.organisation!) };
 }
 
 export async function sessionFor(userId: number): Promise<Session> {
   const user = await User.findByPk(userId, { include: [{ model: Organisation, as: 'organisation' }] });
-  if (!user) throw notFound();
-  return toSession(user, (user as User & { organisation: Organisation }).organisation);
+  if (!user?.organisation) throw notFound();
+  return toSession(user, user.organisation);
 }
 
 async function newPasswordReset(user: User): Promise<{ token: string; tokenHash: string; expiresAt: Date }> {
@@ -91,7 +131,14 @@ export async function requestPasswordReset(email: string): Promise<void> {
   if (!user) return;
   const { token, tokenHash, expiresAt } = await newPasswordReset(user);
   const mail = passwordResetMail({ name: user.name, token });
-  await mailer.send({ ...mail, to: user.email, kind: 'password-reset', organisationId: user.organisationId, userId: user.id, link: { tokenHash, expiresAt } });
+  await mailer.send({
+    ...mail,
+    to: user.email,
+    kind: 'password-reset',
+    organisationId: user.organisationId,
+    userId: user.id,
+    link: { tokenHash, expiresAt },
+  });
 }
 
 /**
@@ -116,15 +163,20 @@ export async function resetPassword(input: ResetPasswordInput): Promise<{ user: 
   const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(input.token) } });
   if (!reset) throw notFound('This reset link is not valid. Ask for a new one.');
   if (reset.usedAt) throw gone('This reset link has already been used. Ask for a new one.');
-  if (reset.expiresAt.getTime() <= Date.now()) throw gone('This reset link has expired (links last 1 hour). Ask for a new one.');
+  if (reset.expiresAt.getTime() <= Date.now())
+    throw gone('This reset link has expired (links last 1 hour). Ask for a new one.');
   const passwordHash = await hashPassword(input.password);
   const user = await transaction(async (transaction) => {
     const owner = await User.findByPk(reset.userId, { transaction, rejectOnEmpty: true });
-    if (!owner.active) throw new HttpError(403, 'deactivated', 'This account has been deactivated. Ask an owner of your brewery.');
+    if (!owner.active)
+      throw new HttpError(403, 'deactivated', 'This account has been deactivated. Ask an owner of your brewery.');
     await owner.update({ passwordHash, tokenVersion: owner.tokenVersion + 1 }, { transaction });
     await reset.update({ usedAt: new Date() }, { transaction });
     // Any other open reset links of this account stop working too.
-    await PasswordReset.update({ usedAt: new Date() }, { where: { userId: owner.id, usedAt: { [Op.is]: null } }, transaction });
+    await PasswordReset.update(
+      { usedAt: new Date() },
+      { where: { userId: owner.id, usedAt: { [Op.is]: null } }, transaction },
+    );
     return owner;
   });
   const voided = await PasswordReset.findAll({ where: { userId: user.id }, attributes: ['tokenHash'] });
@@ -144,7 +196,8 @@ async function usableInvitation(token: string): Promise<Invitation> {
   const status = invitationStatus(invitation);
   if (status === 'accepted') throw gone('This invitation has already been used. Sign in instead.');
   if (status === 'revoked') throw gone('This invitation was withdrawn. Ask the brewery owner to send a new one.');
-  if (status === 'expired') throw gone('This invitation has expired (invitations last 7 days). Ask the brewery owner to send a new one.');
+  if (status === 'expired')
+    throw gone('This invitation has expired (invitations last 7 days). Ask the brewery owner to send a new one.');
   return invitation;
 }
 
@@ -161,7 +214,8 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
 /** Turns an invitation into an account with the invited role. The link works once. */
 export async function acceptInvitation(input: AcceptInvitationInput): Promise<{ user: User; session: Session }> {
   const invitation = await usableInvitation(input.token);
-  if ((await User.count({ where: { email: invitation.email } })) > 0) throw conflict('An account with this e-mail already exists. Sign in instead.');
+  if ((await User.count({ where: { email: invitation.email } })) > 0)
+    throw conflict('An account with this e-mail already exists. Sign in instead.');
   const passwordHash = await hashPassword(input.password);
   const user = await transaction(async (transaction) => {
     const [claimed] = await Invitation.update(
@@ -170,7 +224,13 @@ export async function acceptInvitation(input: AcceptInvitationInput): Promise<{ 
     );
     if (claimed !== 1) throw gone('This invitation has already been used. Sign in instead.');
     return User.create(
-      { organisationId: invitation.organisationId, email: invitation.email, name: input.name, role: invitation.role, passwordHash },
+      {
+        organisationId: invitation.organisationId,
+        email: invitation.email,
+        name: input.name,
+        role: invitation.role,
+        passwordHash,
+      },
       { transaction },
     );
   });

@@ -1,10 +1,10 @@
 import { Op, type Transaction } from 'sequelize';
 
-import type { BottleFormat as BottleFormatShape } from '../../lib/api/types';
-import type { BottleFormatInput } from '../../lib/schemas/bottle-formats';
-import { BottleFormat } from '../db';
-import { conflict, notFound } from '../errors';
-import { STARTER_BOTTLE_FORMATS } from '../seed/bottle-formats';
+import type { BottleFormat as BottleFormatShape } from '@/lib/api/types';
+import type { BottleFormatInput } from '@/lib/schemas/bottle-formats';
+import { BottleFormat } from '@/server/db';
+import { conflict, notFound } from '@/server/errors';
+import { STARTER_BOTTLE_FORMATS } from '@/server/seed/bottle-formats';
 
 export type BottleFormatDto = BottleFormatShape;
 
@@ -23,13 +23,19 @@ const toDto = (f: BottleFormat): BottleFormatDto => ({
 
 /** Gives a new brewery the starter formats. */
 export async function seedStarterFormats(organisationId: number, transaction?: Transaction): Promise<void> {
-  await BottleFormat.bulkCreate(STARTER_BOTTLE_FORMATS.map((f) => ({ ...f, organisationId })), { transaction });
+  await BottleFormat.bulkCreate(
+    STARTER_BOTTLE_FORMATS.map((f) => ({ ...f, organisationId })),
+    { transaction },
+  );
 }
 
 export async function listBottleFormats(organisationId: number, includeArchived = false): Promise<BottleFormatDto[]> {
   const rows = await BottleFormat.findAll({
     where: { organisationId, ...(includeArchived ? {} : { archivedAt: { [Op.is]: null } }) },
-    order: [['liquidMl', 'ASC'], ['name', 'ASC']],
+    order: [
+      ['liquidMl', 'ASC'],
+      ['name', 'ASC'],
+    ],
   });
   return rows.map(toDto);
 }
@@ -42,8 +48,13 @@ export async function findBottleFormat(organisationId: number, id: number): Prom
 }
 
 async function assertNameFree(organisationId: number, name: string, exceptId?: number): Promise<void> {
-  const clash = await BottleFormat.findOne({ where: { organisationId, name, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) } });
-  if (clash) throw conflict('Another bottle format already has this name.', { name: 'Another bottle format already has this name.' });
+  const clash = await BottleFormat.findOne({
+    where: { organisationId, name, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) },
+  });
+  if (clash)
+    throw conflict('Another bottle format already has this name.', {
+      name: 'Another bottle format already has this name.',
+    });
 }
 
 export async function createBottleFormat(organisationId: number, input: BottleFormatInput): Promise<BottleFormatDto> {
@@ -51,7 +62,11 @@ export async function createBottleFormat(organisationId: number, input: BottleFo
   return toDto(await BottleFormat.create({ ...input, organisationId }));
 }
 
-export async function updateBottleFormat(organisationId: number, id: number, input: BottleFormatInput): Promise<BottleFormatDto> {
+export async function updateBottleFormat(
+  organisationId: number,
+  id: number,
+  input: BottleFormatInput,
+): Promise<BottleFormatDto> {
   const format = await findBottleFormat(organisationId, id);
   await assertNameFree(organisationId, input.name, id);
   await format.update(input);
@@ -59,7 +74,11 @@ export async function updateBottleFormat(organisationId: number, id: number, inp
 }
 
 /** Archived formats disappear from pickers but stay readable; nothing is deleted. */
-export async function setBottleFormatArchived(organisationId: number, id: number, archived: boolean): Promise<BottleFormatDto> {
+export async function setBottleFormatArchived(
+  organisationId: number,
+  id: number,
+  archived: boolean,
+): Promise<BottleFormatDto> {
   const format = await findBottleFormat(organisationId, id);
   await format.update({ archivedAt: archived ? new Date() : null });
   return toDto(format);

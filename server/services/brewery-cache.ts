@@ -1,6 +1,6 @@
-import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '../../lib/chemistry/carbonation';
-import { BottleFormat } from '../models/bottle-format';
-import { Organisation } from '../models/organisation';
+import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '@/lib/chemistry/carbonation';
+import { BottleFormat } from '@/server/models/bottle-format';
+import { Organisation } from '@/server/models/organisation';
 
 /**
  * Per-brewery facts that every calculation reads (the alcohol limit, the bottle formats), kept in memory so that a
@@ -32,7 +32,9 @@ function entry(organisationId: number): Entry {
 async function loadSettings(organisationId: number): Promise<Entry> {
   const e = entry(organisationId);
   if (e.abvLimitPercent === undefined || e.warmestTempC === undefined || e.ratingSharePercent === undefined) {
-    const organisation = await Organisation.findByPk(organisationId, { attributes: ['abvLimitPercent', 'warmestTempC', 'ratingSharePercent'] });
+    const organisation = await Organisation.findByPk(organisationId, {
+      attributes: ['abvLimitPercent', 'warmestTempC', 'ratingSharePercent'],
+    });
     e.abvLimitPercent = organisation?.abvLimitPercent ?? 0.5;
     e.warmestTempC = organisation?.warmestTempC ?? DEFAULT_WARMEST_TEMP_C;
     e.ratingSharePercent = organisation?.ratingSharePercent ?? DEFAULT_RATING_SHARE * 100;

@@ -1,11 +1,12 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 
-import type { Ingredient as IngredientDtoShape } from '../../lib/api/types';
-import type { Measure } from '../../lib/ingredients';
-import { per100g, type HouseIngredientInput, type IngredientSearch } from '../../lib/schemas/ingredients';
-import { Ingredient, IngredientChange, sequelize, transaction, User } from '../db';
-import { conflict, forbidden, notFound } from '../errors';
-import type { DatasetIngredient } from '../usda/sr-files';
+import type { Ingredient as IngredientDtoShape } from '@/lib/api/types';
+import type { Measure } from '@/lib/ingredients';
+import { type HouseIngredientInput, type IngredientSearch, per100g } from '@/lib/schemas/ingredients';
+import { Ingredient, IngredientChange, sequelize, transaction, User } from '@/server/db';
+import { conflict, forbidden, notFound } from '@/server/errors';
+import type { DatasetIngredient } from '@/server/usda/sr-files';
+
 import type { AuthContext } from './sessions';
 
 export type IngredientDto = IngredientDtoShape;
@@ -18,7 +19,14 @@ export function toIngredientDto(i: Ingredient): IngredientDto {
     scope: i.organisationId === null ? 'dataset' : 'house',
     name: i.name,
     category: i.category,
-    per100g: { energyKcal: i.energyKcal, carbohydrateG: i.carbohydrateG, sugarsG: i.sugarsG, fibreG: i.fibreG, fatG: i.fatG, proteinG: i.proteinG },
+    per100g: {
+      energyKcal: i.energyKcal,
+      carbohydrateG: i.carbohydrateG,
+      sugarsG: i.sugarsG,
+      fibreG: i.fibreG,
+      fatG: i.fatG,
+      proteinG: i.proteinG,
+    },
     perGram: {
       sugarsG: div100(i.sugarsG),
       fermentableSugarsG: i.sugarsG === null ? null : (i.sugarsG / 100) * i.fermentableShare,
@@ -37,7 +45,21 @@ export function toIngredientDto(i: Ingredient): IngredientDto {
 
 // ---------------------------------------------------------------- dataset import
 
-const COMPARED: (keyof DatasetIngredient)[] = ['name', 'category', 'energyKcal', 'carbohydrateG', 'sugarsG', 'fibreG', 'fatG', 'proteinG', 'fermentableShare', 'steepShare', 'allergens', 'measures', 'notes'];
+const COMPARED: (keyof DatasetIngredient)[] = [
+  'name',
+  'category',
+  'energyKcal',
+  'carbohydrateG',
+  'sugarsG',
+  'fibreG',
+  'fatG',
+  'proteinG',
+  'fermentableShare',
+  'steepShare',
+  'allergens',
+  'measures',
+  'notes',
+];
 const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
 
 export interface ImportReport {
@@ -50,11 +72,17 @@ export interface ImportReport {
  * Imports or updates dataset ingredients in one transaction, matched on dataset and record number. Running it
  * twice changes nothing the second time.
  */
-export async function importDatasetIngredients(rows: DatasetIngredient[], onProgress?: (done: number) => void): Promise<ImportReport> {
+export async function importDatasetIngredients(
+  rows: DatasetIngredient[],
+  onProgress?: (done: number) => void,
+): Promise<ImportReport> {
   const report: ImportReport = { created: 0, updated: 0, unchanged: 0 };
   await transaction(async (transaction) => {
     const existing = new Map(
-      (await Ingredient.findAll({ where: { organisationId: null }, transaction })).map((i) => [`${i.sourceDataset}|${i.sourceRecord}`, i]),
+      (await Ingredient.findAll({ where: { organisationId: null }, transaction })).map((i) => [
+        `${i.sourceDataset}|${i.sourceRecord}`,
+        i,
+      ]),
     );
     const toCreate: DatasetIngredient[] = [];
     for (const [index, row] of rows.entries()) {
@@ -67,7 +95,10 @@ export async function importDatasetIngredients(rows: DatasetIngredient[], onProg
       if (index % 250 === 0) onProgress?.(index);
     }
     for (let i = 0; i < toCreate.length; i += 500) {
-      await Ingredient.bulkCreate(toCreate.slice(i, i + 500).map((row) => ({ ...row, organisationId: null })), { transaction });
+      await Ingredient.bulkCreate(
+        toCreate.slice(i, i + 500).map((row) => ({ ...row, organisationId: null })),
+        { transaction },
+      );
     }
     report.created = toCreate.length;
     onProgress?.(rows.length);
@@ -85,52 +116,96 @@ export async function datasetIngredientCount(): Promise<number> {
 export function ftsQuery(q: string): string | null {
   const words = q.toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? [];
   if (words.length === 0) return null;
-  return words.slice(0, 8).map((w) => `"${w}"*`).join(' OR ');
+  return words
+    .slice(0, 8)
+    .map((w) => `"${w}"*`)
+    .join(' OR ');
 }
 
 /**
  * Ingredients a brewery may use: the dataset and its own house ingredients (house first), ranked by relevance
  * (BM25 over the names) when there is a query, by name otherwise.
  */
-export async function searchIngredients(auth: AuthContext, search: IngredientSearch): Promise<{ items: IngredientDto[]; total: number; page: number; pageSize: number }> {
+export async function searchIngredients(
+  auth: AuthContext,
+  search: IngredientSearch,
+): Promise<{ items: IngredientDto[]; total: number; page: number; pageSize: number }> {
   const match = ftsQuery(search.q);
-  const filters = ['(i.organisation_id IS NULL OR i.organisation_id = :org)', search.archived ? 'i.archived_at IS NOT NULL' : 'i.archived_at IS NULL'];
+  const filters = [
+    '(i.organisation_id IS NULL OR i.organisation_id = :org)',
+    search.archived ? 'i.archived_at IS NOT NULL' : 'i.archived_at IS NULL',
+  ];
   if (search.category) filters.push('i.category = :category');
-  const replacements = { org: auth.organisationId, category: search.category, match, limit: search.pageSize, offset: (search.page - 1) * search.pageSize };
+  const replacements = {
+    org: auth.organisationId,
+    category: search.category,
+    match,
+    limit: search.pageSize,
+    offset: (search.page - 1) * search.pageSize,
+  };
   // CROSS JOIN makes SQLite run the full-text match first and look rows up by id; left to itself it walks every
   // ingredient and probes the index per row (150 ms instead of 1 ms over the full dataset).
   const from = match ? 'ingredient_search s CROSS JOIN ingredients i ON i.id = s.rowid' : 'ingredients i';
   const where = `${match ? 'ingredient_search MATCH :match AND ' : ''}${filters.join(' AND ')}`;
-  const order = match ? '(i.organisation_id IS NULL), bm25(ingredient_search), length(i.name)' : '(i.organisation_id IS NULL), i.name';
+  const order = match
+    ? '(i.organisation_id IS NULL), bm25(ingredient_search), length(i.name)'
+    : '(i.organisation_id IS NULL), i.name';
   const [ids, [{ total }]] = await Promise.all([
-    sequelize.query<{ id: number }>(`SELECT i.id FROM ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit OFFSET :offset`, { replacements, type: QueryTypes.SELECT }),
-    sequelize.query<{ total: number }>(`SELECT count(*) AS total FROM ${from} WHERE ${where}`, { replacements, type: QueryTypes.SELECT }),
+    sequelize.query<{ id: number }>(
+      `SELECT i.id FROM ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit OFFSET :offset`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ total: number }>(`SELECT count(*) AS total FROM ${from} WHERE ${where}`, {
+      replacements,
+      type: QueryTypes.SELECT,
+    }),
   ]);
   const rows = await Ingredient.findAll({ where: { id: ids.map((r) => r.id) } });
   const byId = new Map(rows.map((r) => [r.id, r]));
-  return { items: ids.map((r) => toIngredientDto(byId.get(r.id)!)), total, page: search.page, pageSize: search.pageSize };
+  return {
+    items: ids.map((r) => toIngredientDto(byId.get(r.id)!)),
+    total,
+    page: search.page,
+    pageSize: search.pageSize,
+  };
 }
 
 // ---------------------------------------------------------------- one ingredient
 
 /** An ingredient this brewery may see (the dataset or its own), archived ones included. */
 export async function visibleIngredient(auth: AuthContext, id: number): Promise<Ingredient> {
-  const found = await Ingredient.findOne({ where: { id, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] } });
+  const found = await Ingredient.findOne({
+    where: { id, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
+  });
   if (!found) throw notFound('No such ingredient in your library.');
   return found;
 }
 
 async function ownHouseIngredient(auth: AuthContext, id: number, transaction?: Transaction): Promise<Ingredient> {
-  const found = await Ingredient.findOne({ where: { id, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] }, transaction });
+  const found = await Ingredient.findOne({
+    where: { id, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
+    transaction,
+  });
   if (!found) throw notFound('No such ingredient in your library.');
-  if (found.organisationId === null) throw forbidden('Dataset ingredients are read-only. Copy it to a house ingredient to change it.');
+  if (found.organisationId === null)
+    throw forbidden('Dataset ingredients are read-only. Copy it to a house ingredient to change it.');
   return found;
 }
 
 export async function ingredientChanges(auth: AuthContext, id: number) {
   const ingredient = await visibleIngredient(auth, id);
-  const rows = await IngredientChange.findAll({ where: { ingredientId: ingredient.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] });
-  return rows.map((c) => ({ id: c.id, action: c.action, at: c.createdAt.toISOString(), by: (c as IngredientChange & { user?: User }).user?.name ?? null, changes: c.changes }));
+  const rows = await IngredientChange.findAll({
+    where: { ingredientId: ingredient.id },
+    include: [{ model: User, as: 'user', attributes: ['name'] }],
+    order: [['id', 'DESC']],
+  });
+  return rows.map((c) => ({
+    id: c.id,
+    action: c.action,
+    at: c.createdAt.toISOString(),
+    by: c.user?.name ?? null,
+    changes: c.changes,
+  }));
 }
 
 function fromLabel(input: HouseIngredientInput) {
@@ -153,21 +228,45 @@ function fromLabel(input: HouseIngredientInput) {
 }
 
 async function assertNameFree(auth: AuthContext, name: string, exceptId?: number, transaction?: Transaction) {
-  const clash = await Ingredient.findOne({ where: { organisationId: auth.organisationId, name, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) }, transaction });
-  if (clash) throw conflict('Your brewery already has an ingredient with this name.', { name: 'Your brewery already has an ingredient with this name.' });
+  const clash = await Ingredient.findOne({
+    where: { organisationId: auth.organisationId, name, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) },
+    transaction,
+  });
+  if (clash)
+    throw conflict('Your brewery already has an ingredient with this name.', {
+      name: 'Your brewery already has an ingredient with this name.',
+    });
 }
 
-export async function createHouseIngredient(auth: AuthContext, input: HouseIngredientInput, measures: Measure[] = []): Promise<IngredientDto> {
+export async function createHouseIngredient(
+  auth: AuthContext,
+  input: HouseIngredientInput,
+  measures: Measure[] = [],
+): Promise<IngredientDto> {
   return transaction(async (transaction) => {
     await assertNameFree(auth, input.name, undefined, transaction);
     const values = { ...fromLabel(input), measures, sourceDataset: null, sourceRecord: null };
     const created = await Ingredient.create({ ...values, organisationId: auth.organisationId }, { transaction });
-    await IngredientChange.create({ ingredientId: created.id, userId: auth.userId, action: 'created', changes: Object.fromEntries(Object.entries(values).map(([k, v]): [string, [unknown, unknown]] => [k, [null, v]])) }, { transaction });
+    await IngredientChange.create(
+      {
+        ingredientId: created.id,
+        userId: auth.userId,
+        action: 'created',
+        changes: Object.fromEntries(
+          Object.entries(values).map(([k, v]): [string, [unknown, unknown]] => [k, [null, v]]),
+        ),
+      },
+      { transaction },
+    );
     return toIngredientDto(created);
   });
 }
 
-export async function updateHouseIngredient(auth: AuthContext, id: number, input: HouseIngredientInput): Promise<IngredientDto> {
+export async function updateHouseIngredient(
+  auth: AuthContext,
+  id: number,
+  input: HouseIngredientInput,
+): Promise<IngredientDto> {
   return transaction(async (transaction) => {
     const ingredient = await ownHouseIngredient(auth, id, transaction);
     await assertNameFree(auth, input.name, id, transaction);
@@ -179,18 +278,28 @@ export async function updateHouseIngredient(auth: AuthContext, id: number, input
     }
     if (Object.keys(changes).length > 0) {
       await ingredient.update(next, { transaction });
-      await IngredientChange.create({ ingredientId: id, userId: auth.userId, action: 'updated', changes }, { transaction });
+      await IngredientChange.create(
+        { ingredientId: id, userId: auth.userId, action: 'updated', changes },
+        { transaction },
+      );
     }
     return toIngredientDto(ingredient);
   });
 }
 
 /** Archived house ingredients leave search but stay readable wherever they are used. */
-export async function setHouseIngredientArchived(auth: AuthContext, id: number, archived: boolean): Promise<IngredientDto> {
+export async function setHouseIngredientArchived(
+  auth: AuthContext,
+  id: number,
+  archived: boolean,
+): Promise<IngredientDto> {
   return transaction(async (transaction) => {
     const ingredient = await ownHouseIngredient(auth, id, transaction);
     await ingredient.update({ archivedAt: archived ? new Date() : null }, { transaction });
-    await IngredientChange.create({ ingredientId: id, userId: auth.userId, action: archived ? 'archived' : 'restored', changes: {} }, { transaction });
+    await IngredientChange.create(
+      { ingredientId: id, userId: auth.userId, action: archived ? 'archived' : 'restored', changes: {} },
+      { transaction },
+    );
     return toIngredientDto(ingredient);
   });
 }
@@ -214,12 +323,20 @@ export async function copyToHouse(auth: AuthContext, id: number, name: string): 
       allergens: source.allergens,
       measures: source.measures,
       costPerKg: source.costPerKg,
-      notes: [`Copied from ${source.name} (${source.sourceDataset ? `${source.sourceDataset} record ${source.sourceRecord}` : 'house'}).`, source.notes].filter(Boolean).join(' '),
+      notes: [
+        `Copied from ${source.name} (${source.sourceDataset ? `${source.sourceDataset} record ${source.sourceRecord}` : 'house'}).`,
+        source.notes,
+      ]
+        .filter(Boolean)
+        .join(' '),
       sourceDataset: null,
       sourceRecord: null,
     };
     const created = await Ingredient.create({ ...values, organisationId: auth.organisationId }, { transaction });
-    await IngredientChange.create({ ingredientId: created.id, userId: auth.userId, action: 'created', changes: { copiedFrom: [null, source.id] } }, { transaction });
+    await IngredientChange.create(
+      { ingredientId: created.id, userId: auth.userId, action: 'created', changes: { copiedFrom: [null, source.id] } },
+      { transaction },
+    );
     return toIngredientDto(created);
   });
 }

@@ -1,9 +1,10 @@
-import { can } from '../../lib/roles';
 import { Op, type WhereOptions } from 'sequelize';
 
-import type { OutboxMessage as OutboxMessageDto } from '../../lib/api/types';
-import { OutboxMessage } from '../db';
-import { notFound } from '../errors';
+import type { OutboxMessage as OutboxMessageDto } from '@/lib/api/types';
+import { can } from '@/lib/roles';
+import { OutboxMessage } from '@/server/db';
+import { notFound } from '@/server/errors';
+
 import type { AuthContext } from './sessions';
 
 /** Kinds of message an owner reads for the whole brewery; everything else only its addressee reads. */
@@ -33,7 +34,8 @@ export function redactLinks(text: string): string {
 
 async function redact(where: WhereOptions<OutboxMessage>): Promise<void> {
   const rows = await OutboxMessage.findAll({ where: { ...where, linkTokenHash: { [Op.ne]: null } } });
-  for (const row of rows) await row.update({ text: redactLinks(row.text), html: null, linkTokenHash: null, linkExpiresAt: null });
+  for (const row of rows)
+    await row.update({ text: redactLinks(row.text), html: null, linkTokenHash: null, linkExpiresAt: null });
 }
 
 /** The link with this token hash was used or replaced: its message no longer holds it in clear. */
@@ -55,7 +57,11 @@ const toDto = (m: OutboxMessage): OutboxMessageDto => ({
   createdAt: m.createdAt.toISOString(),
 });
 
-export async function listOutbox(reader: AuthContext | undefined, open: boolean, limit = 100): Promise<OutboxMessageDto[] | null> {
+export async function listOutbox(
+  reader: AuthContext | undefined,
+  open: boolean,
+  limit = 100,
+): Promise<OutboxMessageDto[] | null> {
   const where = visibleTo(reader, open);
   if (!where) return null;
   await redactExpiredLinks();
@@ -63,7 +69,11 @@ export async function listOutbox(reader: AuthContext | undefined, open: boolean,
   return rows.map(toDto);
 }
 
-export async function readOutboxMessage(reader: AuthContext | undefined, open: boolean, id: number): Promise<OutboxMessageDto | null> {
+export async function readOutboxMessage(
+  reader: AuthContext | undefined,
+  open: boolean,
+  id: number,
+): Promise<OutboxMessageDto | null> {
   const where = visibleTo(reader, open);
   if (!where) return null;
   await redactExpiredLinks();

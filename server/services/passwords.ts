@@ -1,6 +1,6 @@
 import bcrypt from 'bcryptjs';
 
-import { config } from '../config';
+import { config } from '@/server/config';
 
 /** bcrypt hash at the configured cost (12 by default, about a quarter of a second here). */
 export function hashPassword(password: string): Promise<string> {

@@ -1,7 +1,8 @@
-import type { Session } from '../../lib/api/types';
-import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '../../lib/schemas/team';
-import { Organisation, User } from '../db';
-import { badRequest } from '../errors';
+import type { Session } from '@/lib/api/types';
+import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '@/lib/schemas/team';
+import { Organisation, User } from '@/server/db';
+import { badRequest } from '@/server/errors';
+
 import { sessionFor } from './auth';
 import { checkPassword, hashPassword } from './passwords';
 
@@ -17,7 +18,11 @@ export async function updatePreferences(userId: number, input: PreferencesInput)
 }
 
 /** The brewery's own settings (owners only): its name, its alcohol limit, the warmest its bottles may meet and its margin. */
-export async function updateOrganisation(organisationId: number, userId: number, input: OrganisationInput): Promise<Session> {
+export async function updateOrganisation(
+  organisationId: number,
+  userId: number,
+  input: OrganisationInput,
+): Promise<Session> {
   const organisation = await Organisation.findByPk(organisationId, { rejectOnEmpty: true });
   // Who declared the licence, and when, is kept with it: it lets versions over the alcohol limit be approved.
   const licence =

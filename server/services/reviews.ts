@@ -1,11 +1,13 @@
-import { rolesWith } from '../../lib/roles';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 
-import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '../../lib/schemas/reviews';
-import { Organisation, Recipe, RecipeReview, RecipeVersion, transaction, User } from '../db';
-import { forbidden, HttpError, notFound } from '../errors';
-import { mailer } from '../mail/mailer';
-import { reviewDecisionMail, reviewSubmittedMail } from '../mail/templates';
+import { rolesWith } from '@/lib/roles';
+import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '@/lib/schemas/reviews';
+import { Organisation, Recipe, RecipeReview, RecipeVersion, transaction, User } from '@/server/db';
+import { forbidden, HttpError } from '@/server/errors';
+import { mailer } from '@/server/mail/mailer';
+import { reviewDecisionMail, reviewSubmittedMail } from '@/server/mail/templates';
+
+import { findOwnRecipe } from './own-recipe';
 import { evaluate } from './recipes';
 import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
@@ -18,28 +20,39 @@ const DECIDED = 'Someone decided on this version a moment ago. Reload to see whe
  * Moves a recipe from one review state to the next only if it is still in the state the checks saw: a conditional
  * update inside the transaction, so ten identical requests at once make one event and nine 409s.
  */
-async function claim(changes: Partial<Pick<Recipe, 'submittedVersion' | 'approvedVersion'>>, where: WhereOptions<Recipe>, t: Transaction, message: string): Promise<void> {
+async function claim(
+  changes: Partial<Pick<Recipe, 'submittedVersion' | 'approvedVersion'>>,
+  where: WhereOptions<Recipe>,
+  t: Transaction,
+  message: string,
+): Promise<void> {
   const [moved] = await Recipe.update(changes, { where, transaction: t });
   if (moved !== 1) throw wrongState(message);
 }
 
-const waitingVersion = (id: number, version: number): WhereOptions<Recipe> => ({ id, archivedAt: null, currentVersion: version, submittedVersion: version });
+const waitingVersion = (id: number, version: number): WhereOptions<Recipe> => ({
+  id,
+  archivedAt: null,
+  currentVersion: version,
+  submittedVersion: version,
+});
 
 async function lastAction(recipe: Recipe): Promise<RecipeReview | null> {
-  return RecipeReview.findOne({ where: { recipeId: recipe.id, versionNumber: recipe.currentVersion }, order: [['id', 'DESC']] });
+  return RecipeReview.findOne({
+    where: { recipeId: recipe.id, versionNumber: recipe.currentVersion },
+    order: [['id', 'DESC']],
+  });
 }
 
-async function ownRecipe(auth: AuthContext, id: number): Promise<Recipe> {
-  const recipe = await Recipe.findOne({ where: { id, organisationId: auth.organisationId } });
-  if (!recipe) throw notFound('No such recipe in your brewery.');
-  if (recipe.archivedAt) throw wrongState('This recipe is archived.');
-  return recipe;
-}
+const ownRecipe = (auth: AuthContext, id: number) => findOwnRecipe(auth, id, { active: true });
 
 export async function reviewTimeline(auth: AuthContext, id: number) {
-  const recipe = await Recipe.findOne({ where: { id, organisationId: auth.organisationId } });
-  if (!recipe) throw notFound('No such recipe in your brewery.');
-  const events = await RecipeReview.findAll({ where: { recipeId: id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']] });
+  const recipe = await findOwnRecipe(auth, id);
+  const events = await RecipeReview.findAll({
+    where: { recipeId: id },
+    include: [{ model: User, as: 'user', attributes: ['name'] }],
+    order: [['id', 'DESC']],
+  });
   const last = await lastAction(recipe);
   return {
     state: reviewState(recipe, last?.action ?? null),
@@ -50,7 +63,7 @@ export async function reviewTimeline(auth: AuthContext, id: number) {
       id: e.id,
       version: e.versionNumber,
       action: e.action,
-      by: (e as RecipeReview & { user?: User }).user?.name ?? null,
+      by: e.user?.name ?? null,
       comment: e.comment,
       overrideReason: e.overrideReason,
       selfApproved: e.selfApproved,
@@ -59,43 +72,90 @@ export async function reviewTimeline(auth: AuthContext, id: number) {
   };
 }
 
-async function notify(userIds: number[], mail: { subject: string; text: string; html: string }, organisationId: number) {
+async function notify(
+  userIds: number[],
+  mail: { subject: string; text: string; html: string },
+  organisationId: number,
+) {
   const people = await User.findAll({ where: { id: userIds, active: true, notifyReviews: true } });
-  for (const person of people) await mailer.send({ ...mail, to: person.email, kind: 'review', organisationId, userId: person.id });
+  for (const person of people)
+    await mailer.send({ ...mail, to: person.email, kind: 'review', organisationId, userId: person.id });
 }
 
 /** A developer (or owner) asks for the newest version to be approved for production. */
 export async function submit(auth: AuthContext, id: number, input: SubmitInput) {
   const recipe = await ownRecipe(auth, id);
-  if (input.version !== recipe.currentVersion) throw wrongState(`Only the newest version (${recipe.currentVersion}) can be submitted.`);
+  if (input.version !== recipe.currentVersion)
+    throw wrongState(`Only the newest version (${recipe.currentVersion}) can be submitted.`);
   const state = reviewState(recipe, (await lastAction(recipe))?.action ?? null);
   if (state === 'submitted') throw wrongState('This version is already waiting for review.');
   if (state === 'approved') throw wrongState('This version is already approved.');
   await transaction(async (transaction) => {
     const v = recipe.currentVersion;
-    const notAlready = (field: 'submittedVersion' | 'approvedVersion') => ({ [Op.or]: [{ [field]: null }, { [field]: { [Op.ne]: v } }] });
+    const notAlready = (field: 'submittedVersion' | 'approvedVersion') => ({
+      [Op.or]: [{ [field]: null }, { [field]: { [Op.ne]: v } }],
+    });
     await claim(
       { submittedVersion: v },
-      { id, archivedAt: null, currentVersion: v, [Op.and]: [notAlready('submittedVersion'), notAlready('approvedVersion')] },
+      {
+        id,
+        archivedAt: null,
+        currentVersion: v,
+        [Op.and]: [notAlready('submittedVersion'), notAlready('approvedVersion')],
+      },
       transaction,
       'This version was submitted or changed a moment ago. Reload to see where it stands.',
     );
-    await RecipeReview.create({ recipeId: id, versionNumber: recipe.currentVersion, action: 'submitted', userId: auth.userId, comment: input.message, overrideReason: null }, { transaction });
+    await RecipeReview.create(
+      {
+        recipeId: id,
+        versionNumber: recipe.currentVersion,
+        action: 'submitted',
+        userId: auth.userId,
+        comment: input.message,
+        overrideReason: null,
+      },
+      { transaction },
+    );
   });
-  const [author, owners] = await Promise.all([User.findByPk(auth.userId), User.findAll({ where: { organisationId: auth.organisationId, role: [...rolesWith('recipes.approve')], id: { [Op.ne]: auth.userId } } })]);
-  await notify(owners.map((o) => o.id), reviewSubmittedMail({ recipeName: recipe.name, version: recipe.currentVersion, author: author?.name ?? 'Someone', message: input.message, recipeId: id }), auth.organisationId);
+  const [author, owners] = await Promise.all([
+    User.findByPk(auth.userId),
+    User.findAll({
+      where: {
+        organisationId: auth.organisationId,
+        role: [...rolesWith('recipes.approve')],
+        id: { [Op.ne]: auth.userId },
+      },
+    }),
+  ]);
+  await notify(
+    owners.map((o) => o.id),
+    reviewSubmittedMail({
+      recipeName: recipe.name,
+      version: recipe.currentVersion,
+      author: author?.name ?? 'Someone',
+      message: input.message,
+      recipeId: id,
+    }),
+    auth.organisationId,
+  );
   return reviewTimeline(auth, id);
 }
 
 async function submitter(recipe: Recipe): Promise<number | null> {
-  const event = await RecipeReview.findOne({ where: { recipeId: recipe.id, versionNumber: recipe.submittedVersion ?? 0, action: 'submitted' }, order: [['id', 'DESC']] });
+  const event = await RecipeReview.findOne({
+    where: { recipeId: recipe.id, versionNumber: recipe.submittedVersion ?? 0, action: 'submitted' },
+    order: [['id', 'DESC']],
+  });
   return event?.userId ?? null;
 }
 
 function assertWaitingVersion(recipe: Recipe, version: number) {
   if (recipe.submittedVersion === null) throw wrongState('No version of this recipe is waiting for review.');
   if (recipe.currentVersion !== version || recipe.submittedVersion !== version) {
-    throw wrongState(`The recipe changed since you opened it: version ${recipe.currentVersion} is now the newest. Reload and look again.`);
+    throw wrongState(
+      `The recipe changed since you opened it: version ${recipe.currentVersion} is now the newest. Reload and look again.`,
+    );
   }
 }
 
@@ -109,7 +169,14 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
   const author = await submitter(recipe);
   let selfApproved = false;
   if (author === auth.userId) {
-    const otherOwners = await User.count({ where: { organisationId: auth.organisationId, role: [...rolesWith('recipes.approve')], active: true, id: { [Op.ne]: auth.userId } } });
+    const otherOwners = await User.count({
+      where: {
+        organisationId: auth.organisationId,
+        role: [...rolesWith('recipes.approve')],
+        active: true,
+        id: { [Op.ne]: auth.userId },
+      },
+    });
     if (otherOwners > 0) throw forbidden('You submitted this version: another owner must approve it.');
     selfApproved = true;
   }
@@ -128,20 +195,49 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
     }
   }
   if (dangers.length > 0 && !input.overrideReason) {
-    throw new HttpError(409, 'danger_finding', `Approval is blocked by a danger finding: ${dangers.map((d) => d.message).join(' ')} To approve anyway, write why.`, {
-      overrideReason: 'Write why you approve despite the danger finding.',
-    });
+    throw new HttpError(
+      409,
+      'danger_finding',
+      `Approval is blocked by a danger finding: ${dangers.map((d) => d.message).join(' ')} To approve anyway, write why.`,
+      {
+        overrideReason: 'Write why you approve despite the danger finding.',
+      },
+    );
   }
   await transaction(async (transaction) => {
-    await claim({ approvedVersion: input.version, submittedVersion: null }, waitingVersion(id, input.version), transaction, DECIDED);
+    await claim(
+      { approvedVersion: input.version, submittedVersion: null },
+      waitingVersion(id, input.version),
+      transaction,
+      DECIDED,
+    );
     await RecipeReview.create(
-      { recipeId: id, versionNumber: input.version, action: 'approved', userId: auth.userId, comment: input.comment, overrideReason: dangers.length > 0 ? input.overrideReason : null, selfApproved },
+      {
+        recipeId: id,
+        versionNumber: input.version,
+        action: 'approved',
+        userId: auth.userId,
+        comment: input.comment,
+        overrideReason: dangers.length > 0 ? input.overrideReason : null,
+        selfApproved,
+      },
       { transaction },
     );
   });
   const owner = await User.findByPk(auth.userId);
   if (author && author !== auth.userId) {
-    await notify([author], reviewDecisionMail({ recipeName: recipe.name, version: input.version, owner: owner?.name ?? 'An owner', approved: true, comment: input.comment, recipeId: id }), auth.organisationId);
+    await notify(
+      [author],
+      reviewDecisionMail({
+        recipeName: recipe.name,
+        version: input.version,
+        owner: owner?.name ?? 'An owner',
+        approved: true,
+        comment: input.comment,
+        recipeId: id,
+      }),
+      auth.organisationId,
+    );
   }
   return reviewTimeline(auth, id);
 }
@@ -153,11 +249,32 @@ export async function returnForChanges(auth: AuthContext, id: number, input: Ret
   const author = await submitter(recipe);
   await transaction(async (transaction) => {
     await claim({ submittedVersion: null }, waitingVersion(id, input.version), transaction, DECIDED);
-    await RecipeReview.create({ recipeId: id, versionNumber: input.version, action: 'returned', userId: auth.userId, comment: input.comment, overrideReason: null }, { transaction });
+    await RecipeReview.create(
+      {
+        recipeId: id,
+        versionNumber: input.version,
+        action: 'returned',
+        userId: auth.userId,
+        comment: input.comment,
+        overrideReason: null,
+      },
+      { transaction },
+    );
   });
   const owner = await User.findByPk(auth.userId);
   if (author && author !== auth.userId) {
-    await notify([author], reviewDecisionMail({ recipeName: recipe.name, version: input.version, owner: owner?.name ?? 'An owner', approved: false, comment: input.comment, recipeId: id }), auth.organisationId);
+    await notify(
+      [author],
+      reviewDecisionMail({
+        recipeName: recipe.name,
+        version: input.version,
+        owner: owner?.name ?? 'An owner',
+        approved: false,
+        comment: input.comment,
+        recipeId: id,
+      }),
+      auth.organisationId,
+    );
   }
   return reviewTimeline(auth, id);
 }
@@ -168,8 +285,23 @@ export async function withdraw(auth: AuthContext, id: number, input: WithdrawInp
   if (recipe.approvedVersion === null) throw wrongState('No version of this recipe is approved.');
   const version = recipe.approvedVersion;
   await transaction(async (transaction) => {
-    await claim({ approvedVersion: null }, { id, approvedVersion: version }, transaction, 'This approval was withdrawn a moment ago. Reload to see where it stands.');
-    await RecipeReview.create({ recipeId: id, versionNumber: version, action: 'withdrawn', userId: auth.userId, comment: input.reason, overrideReason: null }, { transaction });
+    await claim(
+      { approvedVersion: null },
+      { id, approvedVersion: version },
+      transaction,
+      'This approval was withdrawn a moment ago. Reload to see where it stands.',
+    );
+    await RecipeReview.create(
+      {
+        recipeId: id,
+        versionNumber: version,
+        action: 'withdrawn',
+        userId: auth.userId,
+        comment: input.reason,
+        overrideReason: null,
+      },
+      { transaction },
+    );
   });
   return reviewTimeline(auth, id);
 }

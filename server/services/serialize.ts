@@ -1,17 +1,38 @@
-import type { Invitation as InvitationDto, InvitationStatus, Member, Session } from '../../lib/api/types';
-import type { Invitation } from '../models/invitation';
-import type { Organisation } from '../models/organisation';
-import type { User } from '../models/user';
+import type { Invitation as InvitationDto, InvitationStatus, Member, Session } from '@/lib/api/types';
+import type { Invitation } from '@/server/models/invitation';
+import type { Organisation } from '@/server/models/organisation';
+import type { User } from '@/server/models/user';
 
 /** The only shapes in which people and invitations leave the server: no hashes, no tokens. */
 export function toMember(user: User): Member {
-  return { id: user.id, name: user.name, email: user.email, role: user.role, active: user.active, createdAt: user.createdAt.toISOString() };
+  return {
+    id: user.id,
+    name: user.name,
+    email: user.email,
+    role: user.role,
+    active: user.active,
+    createdAt: user.createdAt.toISOString(),
+  };
 }
 
 export function toSession(user: User, organisation: Organisation): Session {
   return {
-    user: { id: user.id, name: user.name, email: user.email, role: user.role, unitSystem: user.unitSystem, notifyReviews: user.notifyReviews },
-    organisation: { id: organisation.id, name: organisation.name, abvLimitPercent: organisation.abvLimitPercent, warmestTempC: organisation.warmestTempC, ratingSharePercent: organisation.ratingSharePercent, licensedForAlcohol: organisation.licensedForAlcohol },
+    user: {
+      id: user.id,
+      name: user.name,
+      email: user.email,
+      role: user.role,
+      unitSystem: user.unitSystem,
+      notifyReviews: user.notifyReviews,
+    },
+    organisation: {
+      id: organisation.id,
+      name: organisation.name,
+      abvLimitPercent: organisation.abvLimitPercent,
+      warmestTempC: organisation.warmestTempC,
+      ratingSharePercent: organisation.ratingSharePercent,
+      licensedForAlcohol: organisation.licensedForAlcohol,
+    },
   };
 }
 

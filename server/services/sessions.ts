@@ -6,10 +6,10 @@ import type { CookieOptions } from 'express';
 import jwt from 'jsonwebtoken';
 import { Op } from 'sequelize';
 
-import type { Role } from '../../lib/roles';
-import { config } from '../config';
-import { RevokedSession } from '../models/revoked-session';
-import { User } from '../models/user';
+import type { Role } from '@/lib/roles';
+import { config } from '@/server/config';
+import { RevokedSession } from '@/server/models/revoked-session';
+import { User } from '@/server/models/user';
 
 export const SESSION_COOKIE = 'fw_session';
 
@@ -93,13 +93,19 @@ let signingKey: crypto.KeyObject | null = null;
  * was a fifth of the server's time under load.
  */
 export function sessionSigningKey(): crypto.KeyObject {
-  signingKey ??= crypto.createSecretKey(config.jwtSecret ? Buffer.from(config.jwtSecret, 'utf8') : readOrCreateSecretFile(config.sessionSecretFile));
+  signingKey ??= crypto.createSecretKey(
+    config.jwtSecret ? Buffer.from(config.jwtSecret, 'utf8') : readOrCreateSecretFile(config.sessionSecretFile),
+  );
   return signingKey;
 }
 
 /** Signs a session token for a user (HS256, expires after the configured lifetime). */
 export function signSessionToken(user: Pick<User, 'id' | 'tokenVersion'>): string {
-  const claims: TokenClaims = { sub: String(user.id), tv: user.tokenVersion, jti: crypto.randomBytes(12).toString('base64url') };
+  const claims: TokenClaims = {
+    sub: String(user.id),
+    tv: user.tokenVersion,
+    jti: crypto.randomBytes(12).toString('base64url'),
+  };
   return jwt.sign(claims, sessionSigningKey(), { algorithm: 'HS256', expiresIn: config.sessionTtlSeconds });
 }
 

@@ -1,22 +1,29 @@
 import { Op } from 'sequelize';
 
-import type { Invitation as InvitationDto, Member, Team } from '../../lib/api/types';
-import { can, rolesWith, type Role } from '../../lib/roles';
-import type { InviteInput } from '../../lib/schemas/team';
-import { Invitation, Organisation, transaction, User } from '../db';
-import { badRequest, conflict, gone, notFound } from '../errors';
-import { mailer } from '../mail/mailer';
-import { invitationMail } from '../mail/templates';
-import type { AuthContext } from './sessions';
+import type { Invitation as InvitationDto, Member, Team } from '@/lib/api/types';
+import { can, type Role, rolesWith } from '@/lib/roles';
+import type { InviteInput } from '@/lib/schemas/team';
+import { Invitation, Organisation, transaction, User } from '@/server/db';
+import { badRequest, conflict, gone, notFound } from '@/server/errors';
+import { mailer } from '@/server/mail/mailer';
+import { invitationMail } from '@/server/mail/templates';
+
 import { redactUsedLink } from './outbox';
 import { invitationStatus, toInvitation, toMember } from './serialize';
+import type { AuthContext } from './sessions';
 import { DAY_MS, newOneTimeToken } from './tokens';
 
 const INVITATION_TTL_MS = 7 * DAY_MS;
 
 export async function listTeam(organisationId: number): Promise<Team> {
   const [members, invitations] = await Promise.all([
-    User.findAll({ where: { organisationId }, order: [['active', 'DESC'], ['name', 'ASC']] }),
+    User.findAll({
+      where: { organisationId },
+      order: [
+        ['active', 'DESC'],
+        ['name', 'ASC'],
+      ],
+    }),
     Invitation.findAll({
       where: { organisationId, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } },
       include: [{ model: User, as: 'invitedBy', attributes: ['name'] }],
@@ -32,8 +39,19 @@ async function sendInvitation(invitation: Invitation, token: string, inviter: Au
     Organisation.findByPk(inviter.organisationId, { rejectOnEmpty: true }),
     User.findByPk(inviter.userId, { attributes: ['name'] }),
   ]);
-  const mail = invitationMail({ breweryName: organisation.name, inviterName: invitedBy?.name ?? null, role: invitation.role, token });
-  await mailer.send({ ...mail, to: invitation.email, kind: 'invitation', organisationId: inviter.organisationId, link });
+  const mail = invitationMail({
+    breweryName: organisation.name,
+    inviterName: invitedBy?.name ?? null,
+    role: invitation.role,
+    token,
+  });
+  await mailer.send({
+    ...mail,
+    to: invitation.email,
+    kind: 'invitation',
+    organisationId: inviter.organisationId,
+    link,
+  });
 }
 
 /**
@@ -46,11 +64,18 @@ export async function invite(inviter: AuthContext, input: InviteInput): Promise<
     throw conflict('This person is already a member of your brewery.', { email: 'Already a member of your brewery.' });
   }
   const alreadyInvited = () =>
-    conflict('This address already has an open invitation. Resend it from the list instead.', { email: 'Already invited: resend the invitation from the list.' });
+    conflict('This address already has an open invitation. Resend it from the list instead.', {
+      email: 'Already invited: resend the invitation from the list.',
+    });
   const { token, tokenHash } = newOneTimeToken();
   const { invitation, closed } = await transaction(async (t) => {
     const open = await Invitation.findAll({
-      where: { organisationId: inviter.organisationId, email: input.email, acceptedAt: { [Op.is]: null }, revokedAt: { [Op.is]: null } },
+      where: {
+        organisationId: inviter.organisationId,
+        email: input.email,
+        acceptedAt: { [Op.is]: null },
+        revokedAt: { [Op.is]: null },
+      },
       transaction: t,
     });
     if (open.some((inv) => invitationStatus(inv) === 'pending')) throw alreadyInvited();
@@ -87,7 +112,11 @@ export async function resendInvitation(inviter: AuthContext, id: number): Promis
   const invitation = await openInvitation(inviter.organisationId, id);
   const { token, tokenHash } = newOneTimeToken();
   await redactUsedLink(invitation.tokenHash);
-  await invitation.update({ tokenHash, expiresAt: new Date(Date.now() + INVITATION_TTL_MS), invitedById: inviter.userId });
+  await invitation.update({
+    tokenHash,
+    expiresAt: new Date(Date.now() + INVITATION_TTL_MS),
+    invitedById: inviter.userId,
+  });
   await sendInvitation(invitation, token, inviter);
   return toInvitation(await invitation.reload({ include: [{ model: User, as: 'invitedBy', attributes: ['name'] }] }));
 }
@@ -105,13 +134,16 @@ async function memberOf(organisationId: number, id: number): Promise<User> {
 }
 
 async function assertAnotherActiveOwner(organisationId: number, exceptUserId: number): Promise<void> {
-  const owners = await User.count({ where: { organisationId, role: [...rolesWith('team.manage')], active: true, id: { [Op.ne]: exceptUserId } } });
+  const owners = await User.count({
+    where: { organisationId, role: [...rolesWith('team.manage')], active: true, id: { [Op.ne]: exceptUserId } },
+  });
   if (owners === 0) throw badRequest('A brewery needs at least one active owner. Make someone else owner first.');
 }
 
 export async function changeRole(actor: AuthContext, memberId: number, role: Role): Promise<Member> {
   const member = await memberOf(actor.organisationId, memberId);
-  if (can(member.role, 'team.manage') && !can(role, 'team.manage')) await assertAnotherActiveOwner(actor.organisationId, member.id);
+  if (can(member.role, 'team.manage') && !can(role, 'team.manage'))
+    await assertAnotherActiveOwner(actor.organisationId, member.id);
   await member.update({ role });
   return toMember(member);
 }

@@ -1,7 +1,13 @@
 import fs from 'node:fs';
 import path from 'node:path';
 
-import { DEFAULT_FERMENTABLE_SHARE, DEFAULT_STEEP_SHARE, type Allergen, type Category, type Measure } from '../../lib/ingredients';
+import {
+  type Allergen,
+  type Category,
+  DEFAULT_FERMENTABLE_SHARE,
+  DEFAULT_STEEP_SHARE,
+  type Measure,
+} from '@/lib/ingredients';
 
 /**
  * Reader for the USDA National Nutrient Database for Standard Reference, Release 25, in its "abbreviated" ASCII
@@ -44,15 +50,18 @@ const num = (text: string | undefined): number | null => (text === undefined || 
 
 /** Checks that `folder` holds the SR abbreviated files; throws NotSrFolderError saying what is missing. */
 export function assertSrFolder(folder: string): void {
-  if (!fs.existsSync(folder) || !fs.statSync(folder).isDirectory()) throw new NotSrFolderError(`${folder} is not a folder.`);
+  if (!fs.existsSync(folder) || !fs.statSync(folder).isDirectory())
+    throw new NotSrFolderError(`${folder} is not a folder.`);
   const missing = REQUIRED.filter((name) => !fs.existsSync(path.join(folder, name)));
-  if (missing.length > 0) throw new NotSrFolderError(`${folder} is not a USDA SR folder: ${missing.join(', ')} missing.`);
+  if (missing.length > 0)
+    throw new NotSrFolderError(`${folder} is not a USDA SR folder: ${missing.join(', ')} missing.`);
   for (const name of REQUIRED) {
     const fd = fs.openSync(path.join(folder, name), 'r');
     const buffer = Buffer.alloc(200);
     fs.readSync(fd, buffer, 0, 200, 0);
     fs.closeSync(fd);
-    if (!LINE.test(buffer.toString('latin1'))) throw new NotSrFolderError(`${name} in ${folder} is not in the SR format (~NDB_No~^...).`);
+    if (!LINE.test(buffer.toString('latin1')))
+      throw new NotSrFolderError(`${name} in ${folder} is not in the SR format (~NDB_No~^...).`);
   }
 }
 
@@ -106,12 +115,31 @@ export function categoryOf(food: Pick<SrFood, 'name' | 'foodGroup'>): Category {
     return 'fruit';
   }
   if (foodGroup === '0200') {
-    return has(name, 'basil', 'mint', 'spearmint', 'peppermint', 'rosemary', 'thyme', 'sage', 'dill', 'parsley', 'tarragon', 'chervil', 'marjoram', 'oregano', 'savory', 'bay', 'lavender')
+    return has(
+      name,
+      'basil',
+      'mint',
+      'spearmint',
+      'peppermint',
+      'rosemary',
+      'thyme',
+      'sage',
+      'dill',
+      'parsley',
+      'tarragon',
+      'chervil',
+      'marjoram',
+      'oregano',
+      'savory',
+      'bay',
+      'lavender',
+    )
       ? 'herb'
       : 'spice';
   }
   // "No sugar added" ice cream is a sweet, not a sugar: judge by what the food is (its first word), or a syrup.
-  if (foodGroup === '1900' && (/^(sugars?|syrups?|honey|molasses|sweeteners?)\b/i.test(name) || has(name, 'syrup'))) return 'sugar-syrup';
+  if (foodGroup === '1900' && (/^(sugars?|syrups?|honey|molasses|sweeteners?)\b/i.test(name) || has(name, 'syrup')))
+    return 'sugar-syrup';
   if (foodGroup === '1800' || foodGroup === '1900') return 'baked-good';
   if (has(name, 'juice')) return 'juice';
   if (has(name, 'ginger root', 'horseradish')) return 'spice';
@@ -128,9 +156,25 @@ export function allergensOf(food: Pick<SrFood, 'name' | 'foodGroup'>): Allergen[
   if (has(name, 'egg')) found.add('eggs');
   if (foodGroup === '1500' && !has(name, 'crustaceans', 'shrimp', 'crab', 'lobster', 'crayfish')) found.add('fish');
   if (has(name, 'shrimp', 'crab', 'lobster', 'crayfish', 'crustaceans')) found.add('crustacean-shellfish');
-  if (has(name, 'almond', 'walnut', 'pecan', 'hazelnut', 'filbert', 'cashew', 'pistachio', 'macadamia', 'brazilnut', 'pine nut')) found.add('tree-nuts');
+  if (
+    has(
+      name,
+      'almond',
+      'walnut',
+      'pecan',
+      'hazelnut',
+      'filbert',
+      'cashew',
+      'pistachio',
+      'macadamia',
+      'brazilnut',
+      'pine nut',
+    )
+  )
+    found.add('tree-nuts');
   if (has(name, 'peanut')) found.add('peanuts');
-  if (foodGroup === '1800' || has(name, 'wheat', 'flour', 'bread', 'cookie', 'cake', 'pie', 'cracker')) found.add('wheat');
+  if (foodGroup === '1800' || has(name, 'wheat', 'flour', 'bread', 'cookie', 'cake', 'pie', 'cracker'))
+    found.add('wheat');
   if (has(name, 'soy')) found.add('soybeans');
   if (has(name, 'sesame', 'tahini')) found.add('sesame');
   return [...found].sort();
@@ -153,7 +197,10 @@ export function ingredientFromSr(food: SrFood) {
     allergens: allergensOf(food),
     measures: food.measures,
     costPerKg: null,
-    notes: category === 'dairy' ? 'Milk sugar is lactose, which brewing yeasts do not ferment: it sweetens but makes no fizz.' : null,
+    notes:
+      category === 'dairy'
+        ? 'Milk sugar is lactose, which brewing yeasts do not ferment: it sweetens but makes no fizz.'
+        : null,
     sourceDataset: SR_DATASET,
     sourceRecord: food.record,
   };

@@ -1,7 +1,6 @@
 import { FindingList } from '@/components/calculations/FindingList';
 import { computeCarbonation } from '@/lib/chemistry/carbonation';
-
-import { render, screen } from '../test-utils';
+import { render, screen } from '@/tests/test-utils';
 
 describe('FindingList', () => {
   it('puts danger first and says each level in words, not only colour', () => {

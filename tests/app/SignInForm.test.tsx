@@ -1,7 +1,6 @@
 import { SignInForm } from '@/components/auth/SignInForm';
 import { ApiError } from '@/lib/api/client';
-
-import { fireEvent, render, screen, waitFor } from '../test-utils';
+import { fireEvent, render, screen, waitFor } from '@/tests/test-utils';
 
 describe('SignInForm', () => {
   it('shows a message beside each empty field and does not submit', async () => {
@@ -23,7 +22,9 @@ describe('SignInForm', () => {
   });
 
   it("shows the server's message and puts field messages on their fields", async () => {
-    const failure = new ApiError(400, 'invalid_input', 'One field needs attention.', { email: 'The server did not like this address.' });
+    const failure = new ApiError(400, 'invalid_input', 'One field needs attention.', {
+      email: 'The server did not like this address.',
+    });
     const onSubmit = jest.fn().mockRejectedValue(failure);
     const { rerender } = render(<SignInForm onSubmit={onSubmit} error={null} />);
     fireEvent.changeText(screen.getByLabelText('E-mail'), 'a@b.test');

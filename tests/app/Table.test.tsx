@@ -1,8 +1,7 @@
 import { Text } from 'react-native';
 
 import { Table } from '@/components/ui';
-
-import { render, screen } from '../test-utils';
+import { render, screen } from '@/tests/test-utils';
 
 const rows = [
   { id: 1, name: 'Hop Garden', count: 3 },
@@ -14,7 +13,9 @@ const columns = [
 ];
 
 function setWidth(width: number) {
-  jest.spyOn(require('react-native'), 'useWindowDimensions').mockReturnValue({ width, height: 800, scale: 1, fontScale: 1 });
+  jest
+    .spyOn(require('react-native'), 'useWindowDimensions')
+    .mockReturnValue({ width, height: 800, scale: 1, fontScale: 1 });
 }
 
 afterEach(() => jest.restoreAllMocks());

@@ -3,7 +3,7 @@
  * the same run against references behind the same middleware. The server runs in its own process (as in
  * production, NODE_ENV=production, logs at warn) on a temporary database; autocannon drives it from this process.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
+import { type ChildProcess, spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -114,17 +114,20 @@ const carbonationBody = (bottleFormatId: number) =>
  * drawn from the starter library's names (real ingredient words, 3 to 6 letters typed, sometimes two words).
  */
 async function searchLatency(url: string, cookie: string): Promise<void> {
-  const { loadStarterIngredients } = await import('../../server/seed/starter-ingredients');
+  const { loadStarterIngredients } = await import('@/server/seed/starter-ingredients');
   const words = [...new Set(loadStarterIngredients().flatMap((i) => i.name.toLowerCase().match(/[a-z]{4,}/g) ?? []))];
   let seed = 42;
-  const random = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+  const random = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
   const pick = () => {
     const word = words[Math.floor(random() * words.length)];
     return word.slice(0, 3 + Math.floor(random() * 4));
   };
   const queries = Array.from({ length: 200 }, () => (random() < 0.3 ? `${pick()} ${pick()}` : pick()));
-  const total = (await (await fetch(`${url}/api/ingredients?pageSize=1`, { headers: { cookie } })).json()) as { total: number };
-  for (const q of queries.slice(0, 20)) await fetch(`${url}/api/ingredients?q=${encodeURIComponent(q)}`, { headers: { cookie } });
+  const total = (await (await fetch(`${url}/api/ingredients?pageSize=1`, { headers: { cookie } })).json()) as {
+    total: number;
+  };
+  for (const q of queries.slice(0, 20))
+    await fetch(`${url}/api/ingredients?q=${encodeURIComponent(q)}`, { headers: { cookie } });
   const times: number[] = [];
   for (const q of queries) {
     const started = performance.now();
@@ -135,8 +138,12 @@ async function searchLatency(url: string, cookie: string): Promise<void> {
   }
   times.sort((a, b) => a - b);
   const p = (share: number) => times[Math.min(times.length - 1, Math.floor(share * times.length))];
-  console.log(`\nIngredient search over ${total.total} ingredients, ${queries.length} queries one at a time (e.g. "${queries.slice(0, 4).join('", "')}")`);
-  console.log(`p50 ${p(0.5).toFixed(1)} ms · p95 ${p(0.95).toFixed(1)} ms · max ${times[times.length - 1].toFixed(1)} ms`);
+  console.log(
+    `\nIngredient search over ${total.total} ingredients, ${queries.length} queries one at a time (e.g. "${queries.slice(0, 4).join('", "')}")`,
+  );
+  console.log(
+    `p50 ${p(0.5).toFixed(1)} ms · p95 ${p(0.95).toFixed(1)} ms · max ${times[times.length - 1].toFixed(1)} ms`,
+  );
   console.log(`${p(0.95) < 20 ? 'meets' : 'MISSES'}  search p95 = ${p(0.95).toFixed(1)} ms  (goal < 20 ms)`);
 }
 
@@ -149,7 +156,12 @@ interface WriterRun {
 }
 
 /** Writers each saving their own recipe again and again for a while: each save is a new version. */
-async function writers(url: string, json: Record<string, string>, recipes: { id: number; body: Record<string, unknown> }[], seconds: number): Promise<WriterRun> {
+async function writers(
+  url: string,
+  json: Record<string, string>,
+  recipes: { id: number; body: Record<string, unknown> }[],
+  seconds: number,
+): Promise<WriterRun> {
   const run: WriterRun = { saves: 0, statuses: new Map(), latenciesMs: [] };
   const until = Date.now() + seconds * 1000;
   await Promise.all(
@@ -157,7 +169,11 @@ async function writers(url: string, json: Record<string, string>, recipes: { id:
       let baseVersion = recipe.body.baseVersion as number;
       while (Date.now() < until) {
         const started = performance.now();
-        const res = await fetch(`${url}/api/recipes/${recipe.id}`, { method: 'PUT', headers: json, body: JSON.stringify({ ...recipe.body, baseVersion }) });
+        const res = await fetch(`${url}/api/recipes/${recipe.id}`, {
+          method: 'PUT',
+          headers: json,
+          body: JSON.stringify({ ...recipe.body, baseVersion }),
+        });
         const answer = (await res.json()) as { currentVersion?: number };
         run.latenciesMs.push(performance.now() - started);
         run.statuses.set(res.status, (run.statuses.get(res.status) ?? 0) + 1);
@@ -172,9 +188,15 @@ async function writers(url: string, json: Record<string, string>, recipes: { id:
   return run;
 }
 
-const percentile = (values: number[], share: number) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(share * values.length))] ?? 0;
-const fiveXx = (statuses: Map<number, number>) => [...statuses].filter(([code]) => code >= 500).reduce((sum, [, n]) => sum + n, 0);
-const statusList = (statuses: Map<number, number>) => [...statuses].sort(([a], [b]) => a - b).map(([code, n]) => `${n}×${code}`).join(', ');
+const percentile = (values: number[], share: number) =>
+  [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(share * values.length))] ?? 0;
+const fiveXx = (statuses: Map<number, number>) =>
+  [...statuses].filter(([code]) => code >= 500).reduce((sum, [, n]) => sum + n, 0);
+const statusList = (statuses: Map<number, number>) =>
+  [...statuses]
+    .sort(([a], [b]) => a - b)
+    .map(([code, n]) => `${n}×${code}`)
+    .join(', ');
 
 /**
  * Many writers at once: 1 and then 20 people each saving their own recipe for a while; 20 saves of one version at
@@ -183,7 +205,9 @@ const statusList = (statuses: Map<number, number>) => [...statuses].sort(([a], [
 async function writerFigures(url: string, cookie: string): Promise<void> {
   const json = { 'content-type': 'application/json', cookie };
   const list = (await (await fetch(`${url}/api/recipes`, { headers: { cookie } })).json()) as { id: number }[];
-  const template = (await (await fetch(`${url}/api/recipes/${list[0].id}`, { headers: { cookie } })).json()) as { content: Record<string, unknown> };
+  const template = (await (await fetch(`${url}/api/recipes/${list[0].id}`, { headers: { cookie } })).json()) as {
+    content: Record<string, unknown>;
+  };
   const recipes = await Promise.all(
     Array.from({ length: 20 }, async (_, i) => {
       const body = { name: `Bench writer ${i + 1}`, flavourNotes: '', note: 'bench save', content: template.content };
@@ -199,9 +223,19 @@ async function writerFigures(url: string, cookie: string): Promise<void> {
   const crowdRate = crowd.saves / WRITER_SECONDS;
 
   const target = recipes[0];
-  const current = ((await (await fetch(`${url}/api/recipes/${target.id}`, { headers: { cookie } })).json()) as { currentVersion: number }).currentVersion;
+  const current = (
+    (await (await fetch(`${url}/api/recipes/${target.id}`, { headers: { cookie } })).json()) as {
+      currentVersion: number;
+    }
+  ).currentVersion;
   const race = await Promise.all(
-    Array.from({ length: 20 }, () => fetch(`${url}/api/recipes/${target.id}`, { method: 'PUT', headers: json, body: JSON.stringify({ ...target.body, baseVersion: current }) }).then((r) => r.status)),
+    Array.from({ length: 20 }, () =>
+      fetch(`${url}/api/recipes/${target.id}`, {
+        method: 'PUT',
+        headers: json,
+        body: JSON.stringify({ ...target.body, baseVersion: current }),
+      }).then((r) => r.status),
+    ),
   );
   const raceStatuses = new Map<number, number>();
   for (const status of race) raceStatuses.set(status, (raceStatuses.get(status) ?? 0) + 1);
@@ -212,7 +246,12 @@ async function writerFigures(url: string, cookie: string): Promise<void> {
       fetch(`${url}/api/auth/sign-up`, {
         method: 'POST',
         headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ breweryName: `Bench brewery ${i}`, name: 'Bench Person', email: `bench-${stamp}-${i}@bench.example`, password: 'bench-password-1' }),
+        body: JSON.stringify({
+          breweryName: `Bench brewery ${i}`,
+          name: 'Bench Person',
+          email: `bench-${stamp}-${i}@bench.example`,
+          password: 'bench-password-1',
+        }),
       }).then((r) => r.status),
     ),
   );
@@ -221,14 +260,26 @@ async function writerFigures(url: string, cookie: string): Promise<void> {
 
   console.log(`
 Writers: each saves its own recipe (a new version per save), ${WRITER_SECONDS} s for 20 writers`);
-  console.log(`1 writer:   ${oneRate.toFixed(1)} saves/s · p50 ${percentile(one.latenciesMs, 0.5).toFixed(0)} ms · p99 ${percentile(one.latenciesMs, 0.99).toFixed(0)} ms · ${statusList(one.statuses)}`);
-  console.log(`20 writers: ${crowdRate.toFixed(1)} saves/s · p50 ${percentile(crowd.latenciesMs, 0.5).toFixed(0)} ms · p99 ${percentile(crowd.latenciesMs, 0.99).toFixed(0)} ms · ${statusList(crowd.statuses)}`);
+  console.log(
+    `1 writer:   ${oneRate.toFixed(1)} saves/s · p50 ${percentile(one.latenciesMs, 0.5).toFixed(0)} ms · p99 ${percentile(one.latenciesMs, 0.99).toFixed(0)} ms · ${statusList(one.statuses)}`,
+  );
+  console.log(
+    `20 writers: ${crowdRate.toFixed(1)} saves/s · p50 ${percentile(crowd.latenciesMs, 0.5).toFixed(0)} ms · p99 ${percentile(crowd.latenciesMs, 0.99).toFixed(0)} ms · ${statusList(crowd.statuses)}`,
+  );
   console.log(`20 saves of one version at once: ${statusList(raceStatuses)}`);
   console.log(`50 sign-ups at once: ${statusList(signUpStatuses)}`);
   const checks = [
-    [`20 writers: ${fiveXx(crowd.statuses)} × 5xx`, fiveXx(crowd.statuses) === 0 && fiveXx(one.statuses) === 0, 'goal 0'],
+    [
+      `20 writers: ${fiveXx(crowd.statuses)} × 5xx`,
+      fiveXx(crowd.statuses) === 0 && fiveXx(one.statuses) === 0,
+      'goal 0',
+    ],
     [`20 writers / 1 writer throughput = ${(crowdRate / oneRate).toFixed(2)}`, crowdRate >= oneRate, 'goal ≥ 1.00'],
-    [`20 saves of one version: ${raceStatuses.get(200) ?? 0} × 200, ${raceStatuses.get(409) ?? 0} × 409`, raceStatuses.get(200) === 1 && raceStatuses.get(409) === 19, 'goal 1 and 19, 0 × 5xx'],
+    [
+      `20 saves of one version: ${raceStatuses.get(200) ?? 0} × 200, ${raceStatuses.get(409) ?? 0} × 409`,
+      raceStatuses.get(200) === 1 && raceStatuses.get(409) === 19,
+      'goal 1 and 19, 0 × 5xx',
+    ],
     [`50 sign-ups at once: ${fiveXx(signUpStatuses)} × 5xx`, fiveXx(signUpStatuses) === 0, 'goal 0 (429 is fine)'],
   ] as const;
   for (const [text, ok, goal] of checks) console.log(`${ok ? 'meets' : 'MISSES'}  ${text}  (${goal})`);
@@ -239,7 +290,10 @@ async function main(): Promise<void> {
   try {
     const cookie = await signIn(url);
     const json = { 'content-type': 'application/json', cookie };
-    const formats = (await (await fetch(`${url}/api/bottle-formats`, { headers: { cookie } })).json()) as { id: number; liquidMl: number }[];
+    const formats = (await (await fetch(`${url}/api/bottle-formats`, { headers: { cookie } })).json()) as {
+      id: number;
+      liquidMl: number;
+    }[];
     const formatId = formats.find((f) => f.liquidMl === 500)!.id;
     const [health, open, signedIn] = await measure([
       ['GET /api/health', { url: `${url}/api/health` }],
@@ -247,27 +301,64 @@ async function main(): Promise<void> {
       ['GET /api/bench/signed-in (nothing, session check)', { url: `${url}/api/bench/signed-in`, headers: { cookie } }],
     ]);
     const [calc, noop] = await measure([
-      ['POST /api/calculations/carbonation', { url: `${url}/api/calculations/carbonation`, method: 'POST', headers: json, body: carbonationBody(formatId) }],
-      ['POST /api/bench/noop (same middleware, no calculation)', { url: `${url}/api/bench/noop`, method: 'POST', headers: json, body: carbonationBody(formatId) }],
+      [
+        'POST /api/calculations/carbonation',
+        { url: `${url}/api/calculations/carbonation`, method: 'POST', headers: json, body: carbonationBody(formatId) },
+      ],
+      [
+        'POST /api/bench/noop (same middleware, no calculation)',
+        { url: `${url}/api/bench/noop`, method: 'POST', headers: json, body: carbonationBody(formatId) },
+      ],
     ]);
     const results = [health, open, signedIn, calc, noop];
-    console.log(`\n${CONNECTIONS} connections, median of ${ROUNDS} rounds of ${SECONDS} s, Node ${process.version}, ${os.cpus().length} cores\n`);
-    console.log('endpoint'.padEnd(56), 'req/s'.padStart(9), 'p50 ms'.padStart(8), 'p99 ms'.padStart(8), 'errors'.padStart(7));
+    console.log(
+      `\n${CONNECTIONS} connections, median of ${ROUNDS} rounds of ${SECONDS} s, Node ${process.version}, ${os.cpus().length} cores\n`,
+    );
+    console.log(
+      'endpoint'.padEnd(56),
+      'req/s'.padStart(9),
+      'p50 ms'.padStart(8),
+      'p99 ms'.padStart(8),
+      'errors'.padStart(7),
+    );
     for (const r of results) {
-      console.log(r.name.padEnd(56), r.requestsPerSec.toFixed(0).padStart(9), r.p50Ms.toFixed(1).padStart(8), r.p99Ms.toFixed(1).padStart(8), String(r.errors + r.non2xx).padStart(7));
+      console.log(
+        r.name.padEnd(56),
+        r.requestsPerSec.toFixed(0).padStart(9),
+        r.p50Ms.toFixed(1).padStart(8),
+        r.p99Ms.toFixed(1).padStart(8),
+        String(r.errors + r.non2xx).padStart(7),
+      );
     }
     const ratio = (a: number, b: number) => (a / b).toFixed(2);
     const checks = [
-      [`calculation throughput / do-nothing throughput = ${ratio(calc.requestsPerSec, noop.requestsPerSec)}`, calc.requestsPerSec >= 0.9 * noop.requestsPerSec, 'goal ≥ 0.90'],
-      [`calculation p99 / do-nothing p99 = ${ratio(calc.p99Ms, noop.p99Ms)}`, calc.p99Ms <= 1.2 * noop.p99Ms, 'goal ≤ 1.20'],
-      [`session check: signed-in / public do-nothing throughput = ${ratio(signedIn.requestsPerSec, open.requestsPerSec)}`, signedIn.requestsPerSec >= 0.85 * open.requestsPerSec, 'goal ≥ 0.85'],
-      [`session check: signed-in do-nothing / health throughput = ${ratio(signedIn.requestsPerSec, health.requestsPerSec)}`, signedIn.requestsPerSec >= 0.85 * health.requestsPerSec, 'goal ≥ 0.85'],
+      [
+        `calculation throughput / do-nothing throughput = ${ratio(calc.requestsPerSec, noop.requestsPerSec)}`,
+        calc.requestsPerSec >= 0.9 * noop.requestsPerSec,
+        'goal ≥ 0.90',
+      ],
+      [
+        `calculation p99 / do-nothing p99 = ${ratio(calc.p99Ms, noop.p99Ms)}`,
+        calc.p99Ms <= 1.2 * noop.p99Ms,
+        'goal ≤ 1.20',
+      ],
+      [
+        `session check: signed-in / public do-nothing throughput = ${ratio(signedIn.requestsPerSec, open.requestsPerSec)}`,
+        signedIn.requestsPerSec >= 0.85 * open.requestsPerSec,
+        'goal ≥ 0.85',
+      ],
+      [
+        `session check: signed-in do-nothing / health throughput = ${ratio(signedIn.requestsPerSec, health.requestsPerSec)}`,
+        signedIn.requestsPerSec >= 0.85 * health.requestsPerSec,
+        'goal ≥ 0.85',
+      ],
     ] as const;
     console.log('');
     for (const [text, ok, goal] of checks) console.log(`${ok ? 'meets' : 'MISSES'}  ${text}  (${goal})`);
     await searchLatency(url, cookie);
     await writerFigures(url, cookie);
-    if (results.some((r) => r.errors + r.non2xx > 0)) console.log('\nSome requests failed: the figures above are not valid.');
+    if (results.some((r) => r.errors + r.non2xx > 0))
+      console.log('\nSome requests failed: the figures above are not valid.');
   } finally {
     child.kill('SIGTERM');
     fs.rmSync(dir, { recursive: true, force: true });

@@ -2,7 +2,9 @@ import { expect, test } from '@playwright/test';
 
 import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
 
-test('an owner adds a bottle format with its rating; a brewer sees it but cannot change the table', async ({ browser }) => {
+test('an owner adds a bottle format with its rating; a brewer sees it but cannot change the table', async ({
+  browser,
+}) => {
   const owner = await (await browser.newContext({ viewport: WIDE })).newPage();
   await signIn(owner, 'imogen@wrenfield.example', 'wrenfield-owner');
   await openNav(owner, 'Bottles');

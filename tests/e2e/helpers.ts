@@ -9,7 +9,8 @@ export const WIDE = { width: 1440, height: 900 };
 /** An address on the server global-setup started. */
 export const url = (path: string) => `${process.env.E2E_BASE_URL}${path}`;
 
-export const shot = (page: Page, name: string) => page.screenshot({ path: `${__dirname}/screenshots/${name}.png`, fullPage: true });
+export const shot = (page: Page, name: string) =>
+  page.screenshot({ path: `${__dirname}/screenshots/${name}.png`, fullPage: true });
 
 export async function signIn(page: Page, email: string, password: string) {
   await page.goto(url('/sign-in'));
@@ -37,7 +38,14 @@ export async function openNav(page: Page, label: string) {
 export function consoleLink(email: string): string {
   const out = execFileSync(process.execPath, ['--import', 'tsx', 'server/cli/reset-link.ts', email], {
     cwd: path.resolve(__dirname, '../..'),
-    env: { ...process.env, NODE_ENV: 'test', DATABASE_PATH: path.join(process.env.E2E_DATA_DIR!, 'e2e.sqlite'), LOG_LEVEL: 'warn', SEED_DEMO: 'false', APP_URL: process.env.E2E_BASE_URL },
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      DATABASE_PATH: path.join(process.env.E2E_DATA_DIR!, 'e2e.sqlite'),
+      LOG_LEVEL: 'warn',
+      SEED_DEMO: 'false',
+      APP_URL: process.env.E2E_BASE_URL,
+    },
     encoding: 'utf8',
   });
   const match = /https?:\/\/[^/\s]+(\/\S+)/.exec(out);

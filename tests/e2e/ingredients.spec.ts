@@ -2,7 +2,9 @@ import { expect, test } from '@playwright/test';
 
 import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
 
-test('a developer searches the library, reads an ingredient and adds a house ingredient from its label', async ({ browser }) => {
+test('a developer searches the library, reads an ingredient and adds a house ingredient from its label', async ({
+  browser,
+}) => {
   const page = await (await browser.newContext({ viewport: PHONE })).newPage();
   await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
   await openNav(page, 'Ingredients');
@@ -37,11 +39,21 @@ test('a developer searches the library, reads an ingredient and adds a house ing
 
   // The supplier's label photo, through the browser's file picker.
   const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.alloc(200, 7)]);
-  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Attach a PDF, JPEG or PNG' }).click()]);
+  const [chooser] = await Promise.all([
+    page.waitForEvent('filechooser'),
+    page.getByRole('button', { name: 'Attach a PDF, JPEG or PNG' }).click(),
+  ]);
   await chooser.setFiles({ name: 'quince-label.png', mimeType: 'image/png', buffer: png });
   await expect(page.getByRole('button', { name: 'Open quince-label.png' })).toBeVisible();
-  const [chooser2] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Attach a PDF, JPEG or PNG' }).click()]);
-  await chooser2.setFiles({ name: 'not-really.png', mimeType: 'image/png', buffer: Buffer.from('plain text pretending') });
+  const [chooser2] = await Promise.all([
+    page.waitForEvent('filechooser'),
+    page.getByRole('button', { name: 'Attach a PDF, JPEG or PNG' }).click(),
+  ]);
+  await chooser2.setFiles({
+    name: 'not-really.png',
+    mimeType: 'image/png',
+    buffer: Buffer.from('plain text pretending'),
+  });
   await expect(page.getByText('Attach a PDF, JPEG or PNG file.')).toBeVisible();
   await shot(page, 'phone-house-ingredient-detail');
 });

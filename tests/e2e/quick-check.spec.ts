@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, type Page, test } from '@playwright/test';
 
 import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
 
@@ -43,7 +43,9 @@ async function answerTheQuestion(page: Page, prefix: string) {
   // 32 °C (995.0275) at 31 + 0.1514 ÷ 0.3149 = 31.48 °C (CIPM table, Tanaka et al. 2001); it needs
   // 331 × (1 − 994.0319 ÷ 998.2067) = 1.38 mL at 35 °C, so 2 mL whole.
   await page.getByLabel('Headspace').fill('1');
-  await expect(page.getByText(/At 31\.5 °C the warmed liquid fills the bottle.*Leave at least 2 mL of headspace/).first()).toBeVisible();
+  await expect(
+    page.getByText(/At 31\.5 °C the warmed liquid fills the bottle.*Leave at least 2 mL of headspace/).first(),
+  ).toBeVisible();
   await expect(page.getByText('bottle full: no gas space').first()).toBeVisible();
   await shot(page, `${prefix}-quick-check-full-bottle`);
 }
@@ -57,7 +59,9 @@ test('a developer answers sugar, pressure and alcohol for one bottle on a phone'
   await context.close();
 });
 
-test('a brewer uses the Quick check on a wide screen and switches to US units, which is remembered', async ({ browser }) => {
+test('a brewer uses the Quick check on a wide screen and switches to US units, which is remembered', async ({
+  browser,
+}) => {
   const context = await browser.newContext({ viewport: WIDE });
   const page = await context.newPage();
   await signIn(page, 'juno@wrenfield.example', 'wrenfield-brewer');

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, type Page, test } from '@playwright/test';
 
 import { openNav, PHONE, shot, signIn, WIDE } from './helpers';
 
@@ -31,7 +31,9 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   await page.getByLabel('Target carbonation').fill('1.2');
   await expect(page.getByText(/^1\.2 volumes need .* g\/L of fermentable sugar in all/)).toBeVisible();
   await page.getByLabel('Target carbonation').fill('4');
-  await expect(page.getByText(/^4 volumes cannot be reached safely in this bottle \(the pressure would pass 80 % of its rating/)).toBeVisible();
+  await expect(
+    page.getByText(/^4 volumes cannot be reached safely in this bottle \(the pressure would pass 80 % of its rating/),
+  ).toBeVisible();
   await page.getByLabel('Target carbonation').fill('2');
   await expect(page.getByText(/^2 volumes (need|cannot)/)).toBeVisible();
   await page.getByRole('button', { name: 'Save as new version' }).click();
@@ -45,11 +47,15 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   await expect(page.getByText('2.84 kg', { exact: true })).toBeVisible();
   await expect(page.getByText('190 g', { exact: true })).toHaveCount(2);
   await expect(page.getByText(/to top up after straining/)).toBeVisible();
-  await expect(page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 190 g sucrose/)).toBeVisible();
+  await expect(
+    page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 190 g sucrose/),
+  ).toBeVisible();
   await shot(page, `${prefix}-recipe-scaled`);
 }
 
-test('a developer builds a recipe on a phone, sees the caution when sugar goes up, and scales it to 200 bottles', async ({ browser }) => {
+test('a developer builds a recipe on a phone, sees the caution when sugar goes up, and scales it to 200 bottles', async ({
+  browser,
+}) => {
   const page = await (await browser.newContext({ viewport: PHONE })).newPage();
   await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
   await buildRecipe(page, `Berry ginger fizz ${Date.now()}`, 'phone');

@@ -2,7 +2,9 @@ import { expect, test } from '@playwright/test';
 
 import { openNav, PHONE, shot, signIn, url, WIDE } from './helpers';
 
-test('a developer submits, the owner follows the e-mail and approves, the brewer scales the approved version', async ({ browser }) => {
+test('a developer submits, the owner follows the e-mail and approves, the brewer scales the approved version', async ({
+  browser,
+}) => {
   const developer = await (await browser.newContext({ viewport: WIDE })).newPage();
   await signIn(developer, 'rafi@wrenfield.example', 'wrenfield-developer');
   await openNav(developer, 'Recipes');
@@ -66,7 +68,9 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await expect(other.getByRole('heading', { name: /Hedgerow Bramble, version \d+/ })).toBeVisible();
 });
 
-test('a danger version: the developer is told on submitting, Approve says it needs a reason, the card shows the override', async ({ browser }) => {
+test('a danger version: the developer is told on submitting, Approve says it needs a reason, the card shows the override', async ({
+  browser,
+}) => {
   const developer = await (await browser.newContext({ viewport: PHONE })).newPage();
   await signIn(developer, 'rafi@wrenfield.example', 'wrenfield-developer');
   await openNav(developer, 'Recipes');
@@ -87,7 +91,9 @@ test('a danger version: the developer is told on submitting, Approve says it nee
   await expect(approve).toBeDisabled();
   await shot(owner, 'wide-approve-needs-reason');
   await owner.getByLabel('Comment').fill('Trial run only, 24 bottles.');
-  await owner.getByLabel('Why you approve despite the danger finding').fill('Kept in the cold room at 4 °C until sold; never warm.');
+  await owner
+    .getByLabel('Why you approve despite the danger finding')
+    .fill('Kept in the cold room at 4 °C until sold; never warm.');
   await expect(owner.getByText(/Approve needs your reason first/)).toBeHidden();
   await approve.click();
   await expect(owner.getByText('Approved for production').first()).toBeVisible();
@@ -96,7 +102,9 @@ test('a danger version: the developer is told on submitting, Approve says it nee
   await signIn(brewer, 'juno@wrenfield.example', 'wrenfield-brewer');
   await brewer.getByRole('link', { name: 'Sour Cherry Cardamom' }).click();
   await expect(brewer.getByText('Safety: danger')).toBeVisible();
-  await expect(brewer.getByText('Approved over a danger finding. Reason: Kept in the cold room at 4 °C until sold; never warm.')).toBeVisible();
+  await expect(
+    brewer.getByText('Approved over a danger finding. Reason: Kept in the cold room at 4 °C until sold; never warm.'),
+  ).toBeVisible();
   await brewer.getByRole('button', { name: 'Print card' }).click();
   await expect(brewer.getByText('Safety: DANGER')).toBeVisible();
   await expect(brewer.getByText(/Approved over a danger finding\. Reason: Kept in the cold room/)).toBeVisible();

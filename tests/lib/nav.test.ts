@@ -2,14 +2,52 @@ import { isActive, navItemsFor } from '@/components/shell/nav';
 import type { ServerInfo, Session } from '@/lib/api/types';
 import type { Role } from '@/lib/roles';
 
-const session = (role: Role): Session => ({ user: { id: 1, name: 'A', email: 'a@b.test', role, unitSystem: 'metric', notifyReviews: true }, organisation: { id: 1, name: 'B', abvLimitPercent: 0.5, warmestTempC: 35, ratingSharePercent: 80, licensedForAlcohol: false } });
-const info = (outbox: boolean, outboxOpen: boolean): ServerInfo => ({ status: 'ok', db: 'ok', version: '0', outbox, outboxOpen });
+const session = (role: Role): Session => ({
+  user: { id: 1, name: 'A', email: 'a@b.test', role, unitSystem: 'metric', notifyReviews: true },
+  organisation: {
+    id: 1,
+    name: 'B',
+    abvLimitPercent: 0.5,
+    warmestTempC: 35,
+    ratingSharePercent: 80,
+    licensedForAlcohol: false,
+  },
+});
+const info = (outbox: boolean, outboxOpen: boolean): ServerInfo => ({
+  status: 'ok',
+  db: 'ok',
+  version: '0',
+  outbox,
+  outboxOpen,
+});
 
 describe('navItemsFor', () => {
   it('shows Team only to owners', () => {
-    expect(navItemsFor(session('owner'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Recipes', 'Quick check', 'Ingredients', 'Bottles', 'Team', 'Profile']);
-    expect(navItemsFor(session('brewer'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Recipes', 'Quick check', 'Ingredients', 'Bottles', 'Profile']);
-    expect(navItemsFor(session('developer'), info(false, false)).map((i) => i.label)).toEqual(['Home', 'Recipes', 'Quick check', 'Ingredients', 'Bottles', 'Profile']);
+    expect(navItemsFor(session('owner'), info(false, false)).map((i) => i.label)).toEqual([
+      'Home',
+      'Recipes',
+      'Quick check',
+      'Ingredients',
+      'Bottles',
+      'Team',
+      'Profile',
+    ]);
+    expect(navItemsFor(session('brewer'), info(false, false)).map((i) => i.label)).toEqual([
+      'Home',
+      'Recipes',
+      'Quick check',
+      'Ingredients',
+      'Bottles',
+      'Profile',
+    ]);
+    expect(navItemsFor(session('developer'), info(false, false)).map((i) => i.label)).toEqual([
+      'Home',
+      'Recipes',
+      'Quick check',
+      'Ingredients',
+      'Bottles',
+      'Profile',
+    ]);
   });
 
   it('shows the Mail outbox to owners when mail stays local, and to everyone when the outbox is open', () => {

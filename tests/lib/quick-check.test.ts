@@ -1,10 +1,21 @@
-import { convertQuickCheckValues, initialQuickCheckValues, toCarbonationRequest, toPrimingRequest } from '@/lib/quick-check';
+import {
+  convertQuickCheckValues,
+  initialQuickCheckValues,
+  toCarbonationRequest,
+  toPrimingRequest,
+} from '@/lib/quick-check';
 
 describe('the Quick check form as an API request', () => {
   it('turns the metric defaults into a valid request', () => {
     const { request, errors } = toCarbonationRequest(initialQuickCheckValues('metric'), 'metric');
     expect(errors).toEqual({});
-    expect(request).toMatchObject({ liquidMl: 750, headspaceMl: 30, temperaturesC: [22, 4, 35], sugars: [{ type: 'sucrose', grams: 3 }], lastOpenTempC: 22 });
+    expect(request).toMatchObject({
+      liquidMl: 750,
+      headspaceMl: 30,
+      temperaturesC: [22, 4, 35],
+      sugars: [{ type: 'sucrose', grams: 3 }],
+      lastOpenTempC: 22,
+    });
   });
 
   it('converts US inputs to SI: 16 US fl oz, 95 °F and 87 psi (NIST SP 811: 1 fl oz = 29.5735 mL, 1 psi = 6.894757 kPa)', () => {
@@ -17,14 +28,20 @@ describe('the Quick check form as an API request', () => {
   });
 
   it('names the form field that is wrong', () => {
-    const { request, errors } = toCarbonationRequest({ ...initialQuickCheckValues('metric'), liquid: 'lots', coldTemp: '' }, 'metric');
+    const { request, errors } = toCarbonationRequest(
+      { ...initialQuickCheckValues('metric'), liquid: 'lots', coldTemp: '' },
+      'metric',
+    );
     expect(request).toBeUndefined();
     expect(errors.liquid).toBe('Liquid per container must be a number.');
     expect(errors.coldTemp).toBeDefined();
   });
 
   it('accepts a comma as the decimal mark', () => {
-    const { request } = toCarbonationRequest({ ...initialQuickCheckValues('metric'), sugars: [{ type: 'honey', grams: '2,5' }] }, 'metric');
+    const { request } = toCarbonationRequest(
+      { ...initialQuickCheckValues('metric'), sugars: [{ type: 'honey', grams: '2,5' }] },
+      'metric',
+    );
     expect(request!.sugars[0].grams).toBe(2.5);
   });
 

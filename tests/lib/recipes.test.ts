@@ -4,16 +4,51 @@ import type { RecipeContent } from '@/lib/schemas/recipes';
 
 // USDA SR25: strawberries, raw (09316) 4.89 g sugars, 7.68 g carbohydrate, 2.0 g fibre and 0.30 g fat per 100 g;
 // cookies, shortbread (18192) 64.5 g carbohydrate and 1.8 g fibre, with round sugar and fat figures as below.
-const strawberry: IngredientFacts = { id: 1, name: 'Strawberries, raw', sugarsG: 4.89, carbohydrateG: 7.68, fibreG: 2, fatG: 0.3, fermentableShare: 1, allergens: [], costPerKg: 6 };
-const shortbread: IngredientFacts = { id: 2, name: 'Shortbread', sugarsG: 20, carbohydrateG: 64.5, fibreG: 1.8, fatG: 24, fermentableShare: 1, allergens: ['wheat', 'milk'], costPerKg: 12 };
+const strawberry: IngredientFacts = {
+  id: 1,
+  name: 'Strawberries, raw',
+  sugarsG: 4.89,
+  carbohydrateG: 7.68,
+  fibreG: 2,
+  fatG: 0.3,
+  fermentableShare: 1,
+  allergens: [],
+  costPerKg: 6,
+};
+const shortbread: IngredientFacts = {
+  id: 2,
+  name: 'Shortbread',
+  sugarsG: 20,
+  carbohydrateG: 64.5,
+  fibreG: 1.8,
+  fatG: 24,
+  fermentableShare: 1,
+  allergens: ['wheat', 'milk'],
+  costPerKg: 12,
+};
 const facts = new Map([strawberry, shortbread].map((f) => [f.id, f]));
 const bottle = { liquidMl: 500, headspaceMl: 25, maxWorkingPressureBar: 3 };
 
 const content = (over: Partial<RecipeContent> = {}): RecipeContent => ({
-  baseBrew: { name: 'House black tea base', residualSugarGPerL: 2, ph: 3.2, abvPercent: 0.2, residualCo2Volumes: 0.9, lastOpenTempC: null },
+  baseBrew: {
+    name: 'House black tea base',
+    residualSugarGPerL: 2,
+    ph: 3.2,
+    abvPercent: 0.2,
+    residualCo2Volumes: 0.9,
+    lastOpenTempC: null,
+  },
   lines: [{ ingredientId: 1, amount: 40, unit: 'g-per-l', extractionPct: 50 }],
   sugars: [{ type: 'sucrose', gPerL: 4 }],
-  process: { method: 'in-bottle', steepHours: 0, steepTempC: 4, strainLossPct: 0, carbonateHours: 72, carbonateTempC: 22, coldStoreTempC: 4 },
+  process: {
+    method: 'in-bottle',
+    steepHours: 0,
+    steepTempC: 4,
+    strainLossPct: 0,
+    carbonateHours: 72,
+    carbonateTempC: 22,
+    coldStoreTempC: 4,
+  },
   bottleFormatId: 9,
   targetVolumes: 2.5,
   sweetnessNote: '',
@@ -43,7 +78,15 @@ describe('evaluateRecipe', () => {
           { ingredientId: 1, amount: 40, unit: 'g-per-l', extractionPct: 50 },
           { ingredientId: 2, amount: 5, unit: 'g-per-bottle', extractionPct: 60 },
         ],
-        process: { method: 'steep-strain', steepHours: 48, steepTempC: 4, strainLossPct: 10, carbonateHours: 72, carbonateTempC: 22, coldStoreTempC: 4 },
+        process: {
+          method: 'steep-strain',
+          steepHours: 48,
+          steepTempC: 4,
+          strainLossPct: 10,
+          carbonateHours: 72,
+          carbonateTempC: 22,
+          coldStoreTempC: 4,
+        },
       }),
       bottle,
       facts,
@@ -75,7 +118,14 @@ describe('diffRecipes', () => {
         bottleFormatId: 10,
       }),
     };
-    const changes = diffRecipes(a, b, new Map([[1, 'Strawberries'], [2, 'Shortbread']]));
+    const changes = diffRecipes(
+      a,
+      b,
+      new Map([
+        [1, 'Strawberries'],
+        [2, 'Shortbread'],
+      ]),
+    );
     expect(changes).toEqual(
       expect.arrayContaining([
         { area: 'ingredients', what: 'Strawberries', before: '40 g-per-l', after: '45 g-per-l' },

@@ -1,7 +1,18 @@
-import { batchLitres, gramsPerLitre, roundMass, roundVolume, scaleRecipe, type ScaleInput } from '@/lib/recipes/scaling';
+import {
+  batchLitres,
+  gramsPerLitre,
+  roundMass,
+  roundVolume,
+  type ScaleInput,
+  scaleRecipe,
+} from '@/lib/recipes/scaling';
 
 // Hand-worked examples. Conversions by NIST SP 811: 1 lb = 453.59237 g, 1 oz = 28.349523 g, 1 US gal = 3.785412 L.
-const recipe = (batch: ScaleInput['batch'], units: ScaleInput['units'] = 'metric', process: ScaleInput['process'] = { method: 'in-bottle' }): ScaleInput => ({
+const recipe = (
+  batch: ScaleInput['batch'],
+  units: ScaleInput['units'] = 'metric',
+  process: ScaleInput['process'] = { method: 'in-bottle' },
+): ScaleInput => ({
   lines: [
     { name: 'Strawberries', amount: 40, unit: 'g-per-l' },
     { name: 'Ginger root', amount: 0.8, unit: 'g-per-l' },
@@ -67,7 +78,9 @@ describe('scaleRecipe', () => {
 
   it('scales 20 L to whole bottles, and counts the base and the top-up when steeped and strained', () => {
     // 20 L with 12 % strain loss: steep in 20 L, 2.4 L stays in the solids, top up 2.4 L: 22.4 L of base in all.
-    const scaled = scaleRecipe(recipe({ kind: 'litres', value: 20 }, 'metric', { method: 'steep-strain', strainLossPct: 12 }));
+    const scaled = scaleRecipe(
+      recipe({ kind: 'litres', value: 20 }, 'metric', { method: 'steep-strain', strainLossPct: 12 }),
+    );
     expect(scaled.bottles).toBe(42); // 20 000 mL ÷ 473 mL = 42.28
     expect(scaled.baseLitres).toMatchObject({ value: 22.4, unit: 'L' });
     expect(scaled.topUpLitres).toMatchObject({ value: 2.4, unit: 'L' });
@@ -84,18 +97,37 @@ describe('batchSteps', () => {
   const { batchSteps } = require('@/lib/recipes/stages') as typeof import('@/lib/recipes/stages');
   it('writes the batch amounts into the numbered steps of a steeped recipe', () => {
     const content = {
-      baseBrew: { name: 'black tea base', residualSugarGPerL: 1, ph: 3.2, abvPercent: 0.1, residualCo2Volumes: null, lastOpenTempC: 21 },
+      baseBrew: {
+        name: 'black tea base',
+        residualSugarGPerL: 1,
+        ph: 3.2,
+        abvPercent: 0.1,
+        residualCo2Volumes: null,
+        lastOpenTempC: 21,
+      },
       lines: [],
       sugars: [],
-      process: { method: 'steep-strain', steepHours: 48, steepTempC: 4, strainLossPct: 12, carbonateHours: 72, carbonateTempC: 22, coldStoreTempC: 4 },
+      process: {
+        method: 'steep-strain',
+        steepHours: 48,
+        steepTempC: 4,
+        strainLossPct: 12,
+        carbonateHours: 72,
+        carbonateTempC: 22,
+        coldStoreTempC: 4,
+      },
       bottleFormatId: 1,
       targetVolumes: 2.5,
       sweetnessNote: '',
       highestTempC: 30,
     } as const;
-    const scaled = scaleRecipe(recipe({ kind: 'litres', value: 20 }, 'metric', { method: 'steep-strain', strainLossPct: 12 }));
+    const scaled = scaleRecipe(
+      recipe({ kind: 'litres', value: 20 }, 'metric', { method: 'steep-strain', strainLossPct: 12 }),
+    );
     const steps = batchSteps(content as never, scaled, 'Glass crown cap 473 mL');
-    expect(steps[0]).toBe('Steep 800 g strawberries, 16 g ginger root, 8.5 g vanilla extract in 20.0 L of black tea base at 4 °C for 48 h.');
+    expect(steps[0]).toBe(
+      'Steep 800 g strawberries, 16 g ginger root, 8.5 g vanilla extract in 20.0 L of black tea base at 4 °C for 48 h.',
+    );
     expect(steps[2]).toBe('Top up with 2.40 L of fresh base to 20.0 L and dissolve 120 g sucrose.');
     expect(steps[3]).toMatch(/^Fill 42 bottles/);
     expect(steps).toHaveLength(5);

@@ -19,7 +19,10 @@ describe('shared schemas (the forms and the server use these same objects)', () 
 
   it('ask for passwords of 8 to 72 characters (NIST SP 800-63B minimum; bcrypt reads 72 bytes)', async () => {
     const base = { breweryName: 'Quill Ferments', name: 'A', email: 'a@b.test' };
-    expect(await errorsOf(signUpSchema, { ...base, password: '1234567' })).toHaveProperty('password', 'Use at least 8 characters.');
+    expect(await errorsOf(signUpSchema, { ...base, password: '1234567' })).toHaveProperty(
+      'password',
+      'Use at least 8 characters.',
+    );
     expect(await errorsOf(signUpSchema, { ...base, password: 'x'.repeat(73) })).toHaveProperty('password');
     expect(await errorsOf(signUpSchema, { ...base, password: '12345678' })).toEqual({});
   });
@@ -34,10 +37,14 @@ describe('shared schemas (the forms and the server use these same objects)', () 
   });
 
   it('refuse a new password equal to the current one', async () => {
-    expect(await errorsOf(changePasswordSchema, { currentPassword: 'same-pass-1', newPassword: 'same-pass-1' })).toHaveProperty('newPassword');
+    expect(
+      await errorsOf(changePasswordSchema, { currentPassword: 'same-pass-1', newPassword: 'same-pass-1' }),
+    ).toHaveProperty('newPassword');
   });
 
   it('refuse an invitation token that is obviously cut short', async () => {
-    expect(await errorsOf(acceptInvitationSchema, { token: 'abc', name: 'A', password: '12345678' })).toHaveProperty('token');
+    expect(await errorsOf(acceptInvitationSchema, { token: 'abc', name: 'A', password: '12345678' })).toHaveProperty(
+      'token',
+    );
   });
 });

@@ -2,7 +2,15 @@ import type { PrimingResult } from '@/lib/chemistry/carbonation';
 import { targetAdvice } from '@/lib/recipes/target';
 
 // Only the fields the helper reads; the rest of a priming answer does not matter here.
-const answer = (over: Partial<PrimingResult>) => ({ safeSugarG: 3.054, targetReachable: true, limitedBy: null, addedAbvPercent: 0.42, ratingShare: 0.8, ...over }) as PrimingResult;
+const answer = (over: Partial<PrimingResult>) =>
+  ({
+    safeSugarG: 3.054,
+    targetReachable: true,
+    limitedBy: null,
+    addedAbvPercent: 0.42,
+    ratingShare: 0.8,
+    ...over,
+  }) as PrimingResult;
 
 describe('the sugar for the target fizz', () => {
   it('adds what the base and the ingredients do not bring', () => {

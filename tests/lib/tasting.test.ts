@@ -6,7 +6,9 @@ const content = { sugars: [{ type: 'sucrose', gPerL: 4 }] } as unknown as Recipe
 describe('withSugarAddition', () => {
   it('turns "+4 g sucrose to 473 mL" into g/L and adds it to the same sugar', () => {
     // By hand: 4 g ÷ 0.473 L = 8.4567 g/L; 4 + 8.4567 = 12.4567 g/L.
-    expect(withSugarAddition(content, { type: 'sucrose', grams: 4, toMl: 473 }).sugars).toEqual([{ type: 'sucrose', gPerL: 12.4567 }]);
+    expect(withSugarAddition(content, { type: 'sucrose', grams: 4, toMl: 473 }).sugars).toEqual([
+      { type: 'sucrose', gPerL: 12.4567 },
+    ]);
   });
 
   it('adds another sugar as a line of its own', () => {

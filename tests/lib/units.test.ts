@@ -1,8 +1,9 @@
-import { barToPsi, cToF, convertUnit, flOzToMl, fToC, gallonsToLitres, gramsToOunces } from '@/lib/units';
+import { barToPsi, convertUnit, cToF, flOzToMl, fToC, gallonsToLitres, gramsToOunces } from '@/lib/units';
 
 // NIST Special Publication 811 (2008), Appendix B: 1 US fl oz = 29.573 53 mL; 1 US gal = 3.785 412 L;
 // 1 oz (avoirdupois) = 28.349 52 g; 1 psi = 6.894 757 kPa; 1 bar = 100 kPa; t/°F = 1.8·t/°C + 32.
-const close = (actual: number, expected: number, relative = 1e-6) => expect(Math.abs(actual / expected - 1)).toBeLessThan(relative);
+const close = (actual: number, expected: number, relative = 1e-6) =>
+  expect(Math.abs(actual / expected - 1)).toBeLessThan(relative);
 
 describe('unit conversions against NIST definitions', () => {
   it('converts volumes', () => {

@@ -35,8 +35,22 @@ describe('POST /api/auth/sign-up', () => {
     expect(path).toBe('/confirm-sign-up');
     const res = await request(app).post('/api/auth/confirm-sign-up').send({ token }).expect(201);
     expect(res.body).toEqual({
-      user: { id: expect.any(Number), name: 'Tamsin Vale', email: input.email, role: 'owner', unitSystem: 'metric', notifyReviews: true },
-      organisation: { id: expect.any(Number), name: 'Larkspur Ferments', abvLimitPercent: 0.5, warmestTempC: 35, ratingSharePercent: 80, licensedForAlcohol: false },
+      user: {
+        id: expect.any(Number),
+        name: 'Tamsin Vale',
+        email: input.email,
+        role: 'owner',
+        unitSystem: 'metric',
+        notifyReviews: true,
+      },
+      organisation: {
+        id: expect.any(Number),
+        name: 'Larkspur Ferments',
+        abvLimitPercent: 0.5,
+        warmestTempC: 35,
+        ratingSharePercent: 80,
+        licensedForAlcohol: false,
+      },
     });
     expect(JSON.stringify(res.body)).not.toMatch(/hash|password/i);
     const cookie = String(res.headers['set-cookie']);
@@ -59,7 +73,10 @@ describe('POST /api/auth/sign-up', () => {
     await signUpOwner(app, { email: taken.email });
     const breweries = await Organisation.count();
     const fresh = await request(app).post('/api/auth/sign-up').send(body()).expect(202);
-    const again = await request(app).post('/api/auth/sign-up').send({ ...taken, email: taken.email.toUpperCase() }).expect(202);
+    const again = await request(app)
+      .post('/api/auth/sign-up')
+      .send({ ...taken, email: taken.email.toUpperCase() })
+      .expect(202);
     expect(again.body).toEqual(fresh.body);
     expect(again.headers['set-cookie']).toBeUndefined();
     const told = await OutboxMessage.findOne({ where: { to: taken.email }, order: [['id', 'DESC']] });
@@ -69,14 +86,21 @@ describe('POST /api/auth/sign-up', () => {
   });
 
   it('lists every bad field at once', async () => {
-    const res = await request(app).post('/api/auth/sign-up').send({ breweryName: 'X', email: 'not-an-email', password: 'short' }).expect(400);
+    const res = await request(app)
+      .post('/api/auth/sign-up')
+      .send({ breweryName: 'X', email: 'not-an-email', password: 'short' })
+      .expect(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['breweryName', 'email', 'name', 'password']);
     expect(res.body.error.fields.password).toMatch(/at least 8/);
   });
 
   it('answers 400, never 500, for a missing, malformed or non-object body', async () => {
     await request(app).post('/api/auth/sign-up').send({}).expect(400);
-    const malformed = await request(app).post('/api/auth/sign-up').set('Content-Type', 'application/json').send('{"email":').expect(400);
+    const malformed = await request(app)
+      .post('/api/auth/sign-up')
+      .set('Content-Type', 'application/json')
+      .send('{"email":')
+      .expect(400);
     expect(malformed.body.error.code).toBe('invalid_json');
     const array = await request(app).post('/api/auth/sign-up').send([1, 2]).expect(400);
     expect(array.body.error.message).toMatch(/JSON object/);
@@ -90,10 +114,19 @@ describe('POST /api/auth/sign-up', () => {
 describe('POST /api/auth/sign-in', () => {
   it('signs in with the right password and gives the same answer for a wrong password or an unknown e-mail', async () => {
     const { email, password } = await signUpOwner(app);
-    const ok = await request(app).post('/api/auth/sign-in').send({ email: ` ${email.toUpperCase()} `, password }).expect(200);
+    const ok = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: ` ${email.toUpperCase()} `, password })
+      .expect(200);
     expect(ok.body.user.email).toBe(email);
-    const wrong = await request(app).post('/api/auth/sign-in').send({ email, password: 'not-the-password' }).expect(401);
-    const unknown = await request(app).post('/api/auth/sign-in').send({ email: uniqueEmail(), password: 'not-the-password' }).expect(401);
+    const wrong = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email, password: 'not-the-password' })
+      .expect(401);
+    const unknown = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail(), password: 'not-the-password' })
+      .expect(401);
     expect(wrong.body).toEqual(unknown.body);
     expect(wrong.headers['set-cookie']).toBeUndefined();
   });
@@ -110,7 +143,11 @@ describe('GET /api/auth/session', () => {
   it('refuses an expired token, a token signed with another secret, and a token with another algorithm', async () => {
     const { session } = await signUpOwner(app);
     const sub = String(session.user.id);
-    const expired = jwt.sign({ sub, tv: 0, jti: 'expired-one', exp: Math.floor(Date.now() / 1000) - 10 }, sessionSigningKey(), { algorithm: 'HS256' });
+    const expired = jwt.sign(
+      { sub, tv: 0, jti: 'expired-one', exp: Math.floor(Date.now() / 1000) - 10 },
+      sessionSigningKey(),
+      { algorithm: 'HS256' },
+    );
     const forged = jwt.sign({ sub, tv: 0 }, 'another-secret-entirely', { algorithm: 'HS256' });
     const unsigned = jwt.sign({ sub, tv: 0 }, '', { algorithm: 'none' });
     for (const token of [expired, forged, unsigned]) {
@@ -153,7 +190,10 @@ describe('POST /api/auth/forgot-password and /reset-password', () => {
     await oldSession.get('/api/auth/session').expect(401);
     await request(app).post('/api/auth/sign-in').send({ email, password: 'brand-new-pass' }).expect(200);
 
-    const reused = await request(app).post('/api/auth/reset-password').send({ token, password: 'another-pass-9' }).expect(410);
+    const reused = await request(app)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'another-pass-9' })
+      .expect(410);
     expect(reused.body.error.message).toMatch(/already been used/);
   });
 
@@ -164,12 +204,18 @@ describe('POST /api/auth/forgot-password and /reset-password', () => {
     const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) } });
     expect(reset!.expiresAt.getTime() - reset!.createdAt.getTime()).toBeCloseTo(60 * 60 * 1000, -3);
     await reset!.update({ expiresAt: new Date(Date.now() - 1000) });
-    const res = await request(app).post('/api/auth/reset-password').send({ token, password: 'brand-new-pass' }).expect(410);
+    const res = await request(app)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'brand-new-pass' })
+      .expect(410);
     expect(res.body.error.message).toMatch(/expired/);
     await request(app).post('/api/auth/sign-in').send({ email, password }).expect(200);
   });
 
   it('refuses an unknown token', async () => {
-    await request(app).post('/api/auth/reset-password').send({ token: 'x'.repeat(43), password: 'brand-new-pass' }).expect(404);
+    await request(app)
+      .post('/api/auth/reset-password')
+      .send({ token: 'x'.repeat(43), password: 'brand-new-pass' })
+      .expect(404);
   });
 });

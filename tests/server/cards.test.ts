@@ -6,7 +6,7 @@ import { cardCode, parseCardCode } from '@/lib/recipes/card';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
 
-import { addMember, signUpOwner, startApp, stopApp, type Agent } from './helpers';
+import { addMember, type Agent, signUpOwner, startApp, stopApp } from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -27,7 +27,9 @@ function pdfText(pdf: Buffer): string {
       continue;
     }
     for (const [, ops] of content.matchAll(/\[(.*?)\]\s*TJ/g)) {
-      texts.push([...ops.matchAll(/<([0-9a-fA-F]+)>/g)].map(([, hex]) => Buffer.from(hex, 'hex').toString('latin1')).join(''));
+      texts.push(
+        [...ops.matchAll(/<([0-9a-fA-F]+)>/g)].map(([, hex]) => Buffer.from(hex, 'hex').toString('latin1')).join(''),
+      );
     }
   }
   return texts.join('\n');
@@ -40,12 +42,29 @@ beforeAll(async () => {
   developer = (await addMember(app, owner, 'developer', 'Dev Eloper')).agent;
   brewer = (await addMember(app, owner, 'brewer')).agent;
   const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
-  const strawberry = (await owner.get('/api/ingredients').query({ q: 'strawberries raw' }).expect(200)).body.items.find((i: { name: string }) => i.name === 'Strawberries, raw').id;
+  const strawberry = (await owner.get('/api/ingredients').query({ q: 'strawberries raw' }).expect(200)).body.items.find(
+    (i: { name: string }) => i.name === 'Strawberries, raw',
+  ).id;
   const content = {
-    baseBrew: { name: 'green tea base', residualSugarGPerL: 0.5, ph: 3.2, abvPercent: 0.05, residualCo2Volumes: null, lastOpenTempC: 21 },
+    baseBrew: {
+      name: 'green tea base',
+      residualSugarGPerL: 0.5,
+      ph: 3.2,
+      abvPercent: 0.05,
+      residualCo2Volumes: null,
+      lastOpenTempC: 21,
+    },
     lines: [{ ingredientId: strawberry, amount: 40, unit: 'g-per-l', extractionPct: 50 }],
     sugars: [{ type: 'sucrose', gPerL: 1 }],
-    process: { method: 'steep-strain', steepHours: 24, steepTempC: 4, strainLossPct: 10, carbonateHours: 48, carbonateTempC: 20, coldStoreTempC: 4 },
+    process: {
+      method: 'steep-strain',
+      steepHours: 24,
+      steepTempC: 4,
+      strainLossPct: 10,
+      carbonateHours: 48,
+      carbonateTempC: 20,
+      coldStoreTempC: 4,
+    },
     bottleFormatId: formats.find((f) => f.name.includes('sparkling-wine'))!.id,
     targetVolumes: 2,
     sweetnessNote: '',
@@ -67,7 +86,13 @@ describe('card codes', () => {
 describe('GET /api/recipes/:id/card', () => {
   it('marks a draft as not approved, and an approved version with who and when', async () => {
     const draft = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'bottles', value: 100 }).expect(200);
-    expect(draft.body).toMatchObject({ recipeName: 'Strawberry field', version: 1, approval: null, bottles: 100, code: `${recipeId}-1-b100` });
+    expect(draft.body).toMatchObject({
+      recipeName: 'Strawberry field',
+      version: 1,
+      approval: null,
+      bottles: 100,
+      code: `${recipeId}-1-b100`,
+    });
     await developer.post(`/api/recipes/${recipeId}/submit`).send({ version: 1 }).expect(200);
     await owner.post(`/api/recipes/${recipeId}/approve`).send({ version: 1 }).expect(200);
     const card = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'bottles', value: 100 }).expect(200);
@@ -77,7 +102,9 @@ describe('GET /api/recipes/:id/card', () => {
       { name: 'Strawberries, raw', amount: '3.00 kg' },
       { name: 'Sucrose (table sugar)', amount: '75 g' },
     ]);
-    expect(card.body.steps[0]).toMatch(/^Steep 3\.00 kg strawberries, raw in 75\.0 L of green tea base at 4 °C for 24 h\.$/);
+    expect(card.body.steps[0]).toMatch(
+      /^Steep 3\.00 kg strawberries, raw in 75\.0 L of green tea base at 4 °C for 24 h\.$/,
+    );
     expect(card.body.checkpoints[0]).toMatch(/4\.2 or below/);
     expect(card.body.cautions.join(' ')).toMatch(/burst/);
   });
@@ -120,10 +147,25 @@ describe('danger reaches the floor', () => {
     const crown = formats.find((f) => f.name === 'Glass crown cap 473 mL')!.id;
     // 4 g/L of sucrose in a 3 bar crown-cap bottle on a 35 °C day: over the rating (danger), under the alcohol limit.
     const content = {
-      baseBrew: { name: 'black tea base', residualSugarGPerL: 0.5, ph: 3.2, abvPercent: 0.05, residualCo2Volumes: null, lastOpenTempC: 21 },
+      baseBrew: {
+        name: 'black tea base',
+        residualSugarGPerL: 0.5,
+        ph: 3.2,
+        abvPercent: 0.05,
+        residualCo2Volumes: null,
+        lastOpenTempC: 21,
+      },
       lines: [],
       sugars: [{ type: 'sucrose', gPerL: 4 }],
-      process: { method: 'in-bottle', steepHours: 0, steepTempC: 4, strainLossPct: 0, carbonateHours: 48, carbonateTempC: 20, coldStoreTempC: 4 },
+      process: {
+        method: 'in-bottle',
+        steepHours: 0,
+        steepTempC: 4,
+        strainLossPct: 0,
+        carbonateHours: 48,
+        carbonateTempC: 20,
+        coldStoreTempC: 4,
+      },
       bottleFormatId: crown,
       targetVolumes: 2.5,
       sweetnessNote: '',
@@ -131,7 +173,10 @@ describe('danger reaches the floor', () => {
     };
     const id = (await developer.post('/api/recipes').send({ name: 'Warm van risk', content }).expect(201)).body.id;
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
-    await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, comment: 'Chilled runs only', overrideReason: 'Delivered cold, kept cold' }).expect(200);
+    await owner
+      .post(`/api/recipes/${id}/approve`)
+      .send({ version: 1, comment: 'Chilled runs only', overrideReason: 'Delivered cold, kept cold' })
+      .expect(200);
 
     const card = (await brewer.get(`/api/recipes/${id}/card`).query({ kind: 'bottles', value: 24 }).expect(200)).body;
     expect(card.safety.level).toBe('danger');

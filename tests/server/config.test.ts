@@ -32,6 +32,8 @@ describe('loadConfig', () => {
   });
 
   it('lists every bad variable at once', () => {
-    expect(() => loadConfig({ PORT: 'eighty', BCRYPT_COST: '99' })).toThrow(/PORT[\s\S]*BCRYPT_COST|BCRYPT_COST[\s\S]*PORT/);
+    expect(() => loadConfig({ PORT: 'eighty', BCRYPT_COST: '99' })).toThrow(
+      /PORT[\s\S]*BCRYPT_COST|BCRYPT_COST[\s\S]*PORT/,
+    );
   });
 });

@@ -12,7 +12,12 @@ afterAll(stopApp);
 describe('GET /api/health', () => {
   it('answers ok with the database state and version, to anyone', async () => {
     const res = await request(app).get('/api/health').expect(200);
-    expect(res.body).toMatchObject({ status: 'ok', db: 'ok', version: expect.stringMatching(/^\d+\.\d+\.\d+/), outbox: true });
+    expect(res.body).toMatchObject({
+      status: 'ok',
+      db: 'ok',
+      version: expect.stringMatching(/^\d+\.\d+\.\d+/),
+      outbox: true,
+    });
   });
 
   it('sets the usual security headers', async () => {

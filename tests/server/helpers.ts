@@ -19,12 +19,22 @@ export async function stopApp(): Promise<void> {
 }
 
 let counter = 0;
-export const uniqueEmail = (prefix = 'person') => `${prefix}-${++counter}-${Math.random().toString(36).slice(2, 7)}@brewery.test`;
+export const uniqueEmail = (prefix = 'person') =>
+  `${prefix}-${++counter}-${Math.random().toString(36).slice(2, 7)}@brewery.test`;
 
 /** Signs up a new brewery, follows the confirmation link from the outbox, and returns an agent carrying its owner's session cookie. */
-export async function signUpOwner(app: Express, overrides: Partial<{ breweryName: string; name: string; email: string; password: string }> = {}) {
+export async function signUpOwner(
+  app: Express,
+  overrides: Partial<{ breweryName: string; name: string; email: string; password: string }> = {},
+) {
   const agent = request.agent(app);
-  const body = { breweryName: 'Test Ferments', name: 'Olwen Test', email: uniqueEmail('owner'), password: 'correct-horse-1', ...overrides };
+  const body = {
+    breweryName: 'Test Ferments',
+    name: 'Olwen Test',
+    email: uniqueEmail('owner'),
+    password: 'correct-horse-1',
+    ...overrides,
+  };
   await agent.post('/api/auth/sign-up').send(body).expect(202);
   const { token } = await linkFromOutbox(body.email);
   const res = await agent.post('/api/auth/confirm-sign-up').send({ token }).expect(201);
@@ -46,6 +56,9 @@ export async function addMember(app: Express, owner: Agent, role: Role, name = `
   await owner.post('/api/team/invitations').send({ email, role }).expect(201);
   const { token } = await linkFromOutbox(email);
   const agent = request.agent(app);
-  const res = await agent.post('/api/auth/accept-invitation').send({ token, name, password: 'member-pass-1' }).expect(201);
+  const res = await agent
+    .post('/api/auth/accept-invitation')
+    .send({ token, name, password: 'member-pass-1' })
+    .expect(201);
   return { agent, session: res.body as Session, email, password: 'member-pass-1' };
 }

@@ -4,7 +4,7 @@ import { IngredientChange } from '@/server/db';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
 
-import { addMember, signUpOwner, startApp, stopApp, type Agent } from './helpers';
+import { addMember, type Agent, signUpOwner, startApp, stopApp } from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -50,11 +50,20 @@ describe('GET /api/ingredients', () => {
     const res = await brewer.get('/api/ingredients').query({ q: 'strawberries' }).expect(200);
     const strawberry = res.body.items.find((i: { name: string }) => i.name === 'Strawberries, raw');
     // USDA SR25, NDB 09316 (strawberries, raw): 4.89 g total sugars per 100 g.
-    expect(strawberry).toMatchObject({ scope: 'dataset', category: 'fruit', source: 'USDA SR25 record 09316', per100g: { sugarsG: 4.89 }, perGram: { sugarsG: 0.0489 } });
+    expect(strawberry).toMatchObject({
+      scope: 'dataset',
+      category: 'fruit',
+      source: 'USDA SR25 record 09316',
+      per100g: { sugarsG: 4.89 },
+      perGram: { sugarsG: 0.0489 },
+    });
   });
 
   it('filters by category, paginates, and lists house ingredients first', async () => {
-    const house = await developer.post('/api/ingredients').send({ ...label, name: 'Cherry house syrup', category: 'sugar-syrup' }).expect(201);
+    const house = await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Cherry house syrup', category: 'sugar-syrup' })
+      .expect(201);
     const spices = await brewer.get('/api/ingredients').query({ category: 'spice', pageSize: 3 }).expect(200);
     expect(spices.body.items).toHaveLength(3);
     expect(spices.body.items.every((i: { category: string }) => i.category === 'spice')).toBe(true);
@@ -70,14 +79,31 @@ describe('POST /api/ingredients (house ingredients)', () => {
   it('converts label values per serving to per 100 g', async () => {
     const res = await developer.post('/api/ingredients').send(label).expect(201);
     // By hand: 6.5 g sugars in a 50 g serving = 13 g per 100 g; 30 kcal per 50 g = 60 kcal per 100 g.
-    expect(res.body).toMatchObject({ scope: 'house', source: 'house', per100g: { sugarsG: 13, energyKcal: 60, fatG: 0.4 }, fermentableSharePct: 100, steepSharePct: 80 });
+    expect(res.body).toMatchObject({
+      scope: 'house',
+      source: 'house',
+      per100g: { sugarsG: 13, energyKcal: 60, fatG: 0.4 },
+      fermentableSharePct: 100,
+      steepSharePct: 80,
+    });
     const changes = await IngredientChange.findAll({ where: { ingredientId: res.body.id } });
     expect(changes.map((c) => c.action)).toEqual(['created']);
   });
 
   it('converts a serving in mL through its weight', async () => {
     // By hand: 250 mL weighing 260 g with 26 g sugars = 10 g per 100 g.
-    const res = await developer.post('/api/ingredients').send({ ...label, name: 'House ginger syrup', category: 'sugar-syrup', servingSize: 250, servingUnit: 'ml', servingGrams: 260, sugarsG: 26 }).expect(201);
+    const res = await developer
+      .post('/api/ingredients')
+      .send({
+        ...label,
+        name: 'House ginger syrup',
+        category: 'sugar-syrup',
+        servingSize: 250,
+        servingUnit: 'ml',
+        servingGrams: 260,
+        sugarsG: 26,
+      })
+      .expect(201);
     expect(res.body.per100g.sugarsG).toBeCloseTo(10, 10);
   });
 
@@ -88,24 +114,42 @@ describe('POST /api/ingredients (house ingredients)', () => {
     ['a serving in mL without its weight', { servingUnit: 'ml' }, 'servingGrams', /needs its weight/],
     ['an unknown allergen', { allergens: ['celery'] }, 'allergens[0]', /major allergens/],
   ])('refuses %s and creates nothing', async (_what, change, field, message) => {
-    const res = await developer.post('/api/ingredients').send({ ...label, name: `Refused ${field}`, ...change }).expect(400);
+    const res = await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: `Refused ${field}`, ...change })
+      .expect(400);
     expect(res.body.error.fields[field]).toMatch(message);
     const search = await developer.get('/api/ingredients').query({ q: 'Refused' }).expect(200);
     expect(search.body.total).toBe(0);
   });
 
   it('refuses a name already used in the brewery, and brewers', async () => {
-    await developer.post('/api/ingredients').send({ ...label, name: 'Twice named purée' }).expect(201);
-    const res = await developer.post('/api/ingredients').send({ ...label, name: 'Twice named purée' }).expect(409);
+    await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Twice named purée' })
+      .expect(201);
+    const res = await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Twice named purée' })
+      .expect(409);
     expect(res.body.error.fields.name).toBeDefined();
-    await brewer.post('/api/ingredients').send({ ...label, name: 'Brewer purée' }).expect(403);
+    await brewer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Brewer purée' })
+      .expect(403);
   });
 });
 
 describe('PUT, archive and copy', () => {
   it('records what changed, and archived ingredients leave search but stay readable', async () => {
-    const created = await developer.post('/api/ingredients').send({ ...label, name: 'Plum purée lot 7' }).expect(201);
-    await owner.put(`/api/ingredients/${created.body.id}`).send({ ...label, name: 'Plum purée lot 7', sugarsG: 7 }).expect(200);
+    const created = await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Plum purée lot 7' })
+      .expect(201);
+    await owner
+      .put(`/api/ingredients/${created.body.id}`)
+      .send({ ...label, name: 'Plum purée lot 7', sugarsG: 7 })
+      .expect(200);
     const changes = await developer.get(`/api/ingredients/${created.body.id}/changes`).expect(200);
     expect(changes.body[0]).toMatchObject({ action: 'updated', by: 'Olwen Test', changes: { sugarsG: [13, 14] } });
     await developer.post(`/api/ingredients/${created.body.id}/archive`).send({}).expect(200);
@@ -117,37 +161,71 @@ describe('PUT, archive and copy', () => {
   });
 
   it('keeps dataset ingredients read-only, but lets them be copied to the house', async () => {
-    const honey = (await developer.get('/api/ingredients').query({ q: 'honey' }).expect(200)).body.items.find((i: { name: string }) => i.name === 'Honey');
-    await developer.put(`/api/ingredients/${honey.id}`).send({ ...label, name: 'Honey' }).expect(403);
+    const honey = (await developer.get('/api/ingredients').query({ q: 'honey' }).expect(200)).body.items.find(
+      (i: { name: string }) => i.name === 'Honey',
+    );
+    await developer
+      .put(`/api/ingredients/${honey.id}`)
+      .send({ ...label, name: 'Honey' })
+      .expect(403);
     await developer.post(`/api/ingredients/${honey.id}/archive`).send({}).expect(403);
-    const copy = await developer.post(`/api/ingredients/${honey.id}/copy`).send({ name: 'Wildflower honey, local' }).expect(201);
+    const copy = await developer
+      .post(`/api/ingredients/${honey.id}/copy`)
+      .send({ name: 'Wildflower honey, local' })
+      .expect(201);
     // USDA SR25, NDB 19296 (honey): 82.12 g total sugars per 100 g.
-    expect(copy.body).toMatchObject({ scope: 'house', per100g: { sugarsG: 82.12 }, notes: expect.stringContaining('Copied from Honey') });
+    expect(copy.body).toMatchObject({
+      scope: 'house',
+      per100g: { sugarsG: 82.12 },
+      notes: expect.stringContaining('Copied from Honey'),
+    });
   });
 
   it("hides other breweries' house ingredients", async () => {
-    const mine = await developer.post('/api/ingredients').send({ ...label, name: 'Secret quince purée' }).expect(201);
+    const mine = await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Secret quince purée' })
+      .expect(201);
     const stranger = await signUpOwner(app);
     await stranger.agent.get(`/api/ingredients/${mine.body.id}`).expect(404);
     await stranger.agent.put(`/api/ingredients/${mine.body.id}`).send(label).expect(404);
-    expect((await stranger.agent.get('/api/ingredients').query({ q: 'quince' }).expect(200)).body.items.map((i: { name: string }) => i.name)).not.toContain('Secret quince purée');
-    const calc = await stranger.agent.post('/api/calculations/carbonation').send({ liquidMl: 500, headspaceMl: 25, ingredients: [{ ingredientId: mine.body.id, grams: 10 }] }).expect(400);
+    expect(
+      (await stranger.agent.get('/api/ingredients').query({ q: 'quince' }).expect(200)).body.items.map(
+        (i: { name: string }) => i.name,
+      ),
+    ).not.toContain('Secret quince purée');
+    const calc = await stranger.agent
+      .post('/api/calculations/carbonation')
+      .send({ liquidMl: 500, headspaceMl: 25, ingredients: [{ ingredientId: mine.body.id, grams: 10 }] })
+      .expect(400);
     expect(calc.body.error.fields['ingredients[0].ingredientId']).toBeDefined();
   });
 });
 
 describe('ingredients in POST /api/calculations/carbonation', () => {
   it('counts grams × sugars per gram × the share reaching the liquid, and warns about solids and fat', async () => {
-    const strawberry = (await developer.get('/api/ingredients').query({ q: 'strawberries raw' }).expect(200)).body.items.find((i: { name: string }) => i.name === 'Strawberries, raw');
+    const strawberry = (
+      await developer.get('/api/ingredients').query({ q: 'strawberries raw' }).expect(200)
+    ).body.items.find((i: { name: string }) => i.name === 'Strawberries, raw');
     const shortbread = (await developer.get('/api/ingredients').query({ q: 'shortbread' }).expect(200)).body.items[0];
     const res = await developer
       .post('/api/calculations/carbonation')
-      .send({ liquidMl: 500, headspaceMl: 25, ingredients: [{ ingredientId: strawberry.id, grams: 100, extractionPct: 50 }, { ingredientId: shortbread.id, grams: 20, inBottle: true }], temperaturesC: [20] })
+      .send({
+        liquidMl: 500,
+        headspaceMl: 25,
+        ingredients: [
+          { ingredientId: strawberry.id, grams: 100, extractionPct: 50 },
+          { ingredientId: shortbread.id, grams: 20, inBottle: true },
+        ],
+        temperaturesC: [20],
+      })
       .expect(200);
     // By hand: 100 g × 0.0489 = 4.89 g from strawberries in the worst case (steeped at 50 %, all of it counts there);
     // shortbread per its USDA record, all of it.
     const shortbreadSugar = 20 * (shortbread.per100g.sugarsG / 100);
     expect(res.body.sugar.fromIngredientsG).toBeCloseTo(4.89 + shortbreadSugar, 4);
-    expect(res.body.findings.map((f: { code: string }) => f.code)).toEqual(expect.arrayContaining(['solids-in-bottle', 'fatty-ingredients']));
+    expect(res.body.findings.map((f: { code: string }) => f.code)).toEqual(
+      expect.arrayContaining(['solids-in-bottle', 'fatty-ingredients']),
+    );
   });
 });

@@ -26,12 +26,21 @@ describe('POST /api/profile/password', () => {
     const other = request.agent(app);
     await other.post('/api/auth/sign-in').send({ email, password }).expect(200);
 
-    const wrong = await agent.post('/api/profile/password').send({ currentPassword: 'wrong-one-1', newPassword: 'new-password-1' }).expect(400);
+    const wrong = await agent
+      .post('/api/profile/password')
+      .send({ currentPassword: 'wrong-one-1', newPassword: 'new-password-1' })
+      .expect(400);
     expect(wrong.body.error.fields.currentPassword).toBeDefined();
-    const same = await agent.post('/api/profile/password').send({ currentPassword: password, newPassword: password }).expect(400);
+    const same = await agent
+      .post('/api/profile/password')
+      .send({ currentPassword: password, newPassword: password })
+      .expect(400);
     expect(same.body.error.fields.newPassword).toMatch(/different/);
 
-    await agent.post('/api/profile/password').send({ currentPassword: password, newPassword: 'new-password-1' }).expect(200);
+    await agent
+      .post('/api/profile/password')
+      .send({ currentPassword: password, newPassword: 'new-password-1' })
+      .expect(200);
     await agent.get('/api/auth/session').expect(200);
     await other.get('/api/auth/session').expect(401);
   });
@@ -43,7 +52,10 @@ describe('GET /api/outbox (outbox closed, as in production without SMTP)', () =>
     const brewer = await addMember(app, owner.agent, 'brewer');
     await request(app).post('/api/auth/forgot-password').send({ email: brewer.email }).expect(202);
     const stranger = await signUpOwner(app);
-    await stranger.agent.post('/api/team/invitations').send({ email: 'someone@elsewhere.test', role: 'brewer' }).expect(201);
+    await stranger.agent
+      .post('/api/team/invitations')
+      .send({ email: 'someone@elsewhere.test', role: 'brewer' })
+      .expect(201);
 
     const seenByOwner = await owner.agent.get('/api/outbox').expect(200);
     expect(seenByOwner.body.open).toBe(false);

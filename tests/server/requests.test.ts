@@ -27,16 +27,43 @@ beforeAll(async () => {
   brewer = (await helpers.addMember(app, owner, 'brewer')).agent;
   const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
   content = {
-    baseBrew: { name: 'Base', residualSugarGPerL: 0.5, ph: 3.2, abvPercent: 0.05, residualCo2Volumes: null, lastOpenTempC: 21 },
+    baseBrew: {
+      name: 'Base',
+      residualSugarGPerL: 0.5,
+      ph: 3.2,
+      abvPercent: 0.05,
+      residualCo2Volumes: null,
+      lastOpenTempC: 21,
+    },
     lines: [],
     sugars: [{ type: 'sucrose', gPerL: 2 }],
-    process: { method: 'steep-strain', steepHours: 24, steepTempC: 4, strainLossPct: 10, carbonateHours: 48, carbonateTempC: 20, coldStoreTempC: 4 },
+    process: {
+      method: 'steep-strain',
+      steepHours: 24,
+      steepTempC: 4,
+      strainLossPct: 10,
+      carbonateHours: 48,
+      carbonateTempC: 20,
+      coldStoreTempC: 4,
+    },
     bottleFormatId: formats.find((f) => f.name.includes('sparkling-wine'))!.id,
     targetVolumes: 2,
     sweetnessNote: '',
     highestTempC: 25,
   };
-  ingredientId = (await developer.post('/api/ingredients').send({ name: 'Quota syrup', category: 'puree', servingSize: 100, sugarsG: 60, fermentableSharePct: 100, steepSharePct: 100 }).expect(201)).body.id;
+  ingredientId = (
+    await developer
+      .post('/api/ingredients')
+      .send({
+        name: 'Quota syrup',
+        category: 'puree',
+        servingSize: 100,
+        sugarsG: 60,
+        fermentableSharePct: 100,
+        steepSharePct: 100,
+      })
+      .expect(201)
+  ).body.id;
 });
 afterAll(async () => {
   await helpers.stopApp();
@@ -52,7 +79,11 @@ describe('state-changing requests from another site', () => {
     await archive(owner).set('Origin', 'null').send({}).expect(403);
     await archive(owner).set('Sec-Fetch-Site', 'cross-site').send({}).expect(403);
     await archive(owner).set('Sec-Fetch-Site', 'same-site').send({}).expect(403);
-    await archive(owner).set('Origin', 'http://fizzwright.test').set('Sec-Fetch-Site', 'same-origin').send({}).expect(404);
+    await archive(owner)
+      .set('Origin', 'http://fizzwright.test')
+      .set('Sec-Fetch-Site', 'same-origin')
+      .send({})
+      .expect(404);
     await archive(owner).send({}).expect(404);
     // Reads are not refused (they change nothing and CORS keeps their answers from other sites).
     await owner.get('/api/auth/session').set('Origin', 'https://elsewhere.example').expect(200);
@@ -74,24 +105,53 @@ describe('state-changing requests from another site', () => {
 
 describe('many writers at once', () => {
   it('twenty people saving their own recipes at once all succeed, and twenty saves of one version give one 200 and nineteen 409s', async () => {
-    const ids = await Promise.all(Array.from({ length: 20 }, async (_, i) => (await developer.post('/api/recipes').send({ name: `Crowd ${i}`, content }).expect(201)).body.id as number));
-    const saves = await Promise.all(ids.map((id, i) => developer.put(`/api/recipes/${id}`).send({ name: `Crowd ${i}`, flavourNotes: '', baseVersion: 1, note: 'Saved in a crowd', content })));
+    const ids = await Promise.all(
+      Array.from(
+        { length: 20 },
+        async (_, i) =>
+          (
+            await developer
+              .post('/api/recipes')
+              .send({ name: `Crowd ${i}`, content })
+              .expect(201)
+          ).body.id as number,
+      ),
+    );
+    const saves = await Promise.all(
+      ids.map((id, i) =>
+        developer
+          .put(`/api/recipes/${id}`)
+          .send({ name: `Crowd ${i}`, flavourNotes: '', baseVersion: 1, note: 'Saved in a crowd', content }),
+      ),
+    );
     expect(saves.map((s) => s.status)).toEqual(Array(20).fill(200));
     const one = ids[0];
-    const same = await Promise.all(Array.from({ length: 20 }, (_, i) => developer.put(`/api/recipes/${one}`).send({ name: 'Crowd 0', flavourNotes: '', baseVersion: 2, note: `Race ${i}`, content })));
+    const same = await Promise.all(
+      Array.from({ length: 20 }, (_, i) =>
+        developer
+          .put(`/api/recipes/${one}`)
+          .send({ name: 'Crowd 0', flavourNotes: '', baseVersion: 2, note: `Race ${i}`, content }),
+      ),
+    );
     expect(same.map((s) => s.status).sort()).toEqual([200, ...Array(19).fill(409)]);
     expect(await db.RecipeVersion.count({ where: { recipeId: one } })).toBe(3);
   });
 
   it('ten identical approvals at once make one event; ten submissions at once make one', async () => {
     const id = (await developer.post('/api/recipes').send({ name: 'Raced', content }).expect(201)).body.id as number;
-    const submits = await Promise.all(Array.from({ length: 10 }, () => developer.post(`/api/recipes/${id}/submit`).send({ version: 1, message: '' })));
+    const submits = await Promise.all(
+      Array.from({ length: 10 }, () => developer.post(`/api/recipes/${id}/submit`).send({ version: 1, message: '' })),
+    );
     expect(submits.map((s) => s.status).sort()).toEqual([200, ...Array(9).fill(409)]);
-    const approvals = await Promise.all(Array.from({ length: 10 }, () => owner.post(`/api/recipes/${id}/approve`).send({ version: 1, comment: 'ok' })));
+    const approvals = await Promise.all(
+      Array.from({ length: 10 }, () => owner.post(`/api/recipes/${id}/approve`).send({ version: 1, comment: 'ok' })),
+    );
     expect(approvals.map((s) => s.status).sort()).toEqual([200, ...Array(9).fill(409)]);
     const events = await db.RecipeReview.findAll({ where: { recipeId: id } });
     expect(events.map((e) => e.action).sort()).toEqual(['approved', 'submitted']);
-    const withdrawals = await Promise.all(Array.from({ length: 10 }, () => owner.post(`/api/recipes/${id}/withdraw`).send({ reason: 'Rethink' })));
+    const withdrawals = await Promise.all(
+      Array.from({ length: 10 }, () => owner.post(`/api/recipes/${id}/withdraw`).send({ reason: 'Rethink' })),
+    );
     expect(withdrawals.map((s) => s.status).sort()).toEqual([200, ...Array(9).fill(409)]);
   });
 });
@@ -117,7 +177,8 @@ describe('attachments: quota, deletion and files without a row', () => {
   });
 
   it('removes files that no row points at when the server starts', async () => {
-    const { removeOrphanUploads } = require('@/server/services/attachments') as typeof import('@/server/services/attachments');
+    const { removeOrphanUploads } =
+      require('@/server/services/attachments') as typeof import('@/server/services/attachments');
     fs.mkdirSync(config.uploadsDir, { recursive: true });
     const orphan = path.join(config.uploadsDir, `${'ab'.repeat(16)}.pdf`);
     fs.writeFileSync(orphan, PDF(50));

@@ -4,7 +4,7 @@ import { Organisation, OutboxMessage } from '@/server/db';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
 
-import { addMember, signUpOwner, startApp, stopApp, type Agent } from './helpers';
+import { addMember, type Agent, signUpOwner, startApp, stopApp } from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -30,28 +30,62 @@ beforeAll(async () => {
   const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
   const wine = formats.find((f) => f.name.includes('sparkling-wine'))!.id;
   const crown = formats.find((f) => f.name === 'Glass crown cap 473 mL')!.id;
-  const base = { name: 'Base', residualSugarGPerL: 0.5, ph: 3.2, abvPercent: 0.05, residualCo2Volumes: null, lastOpenTempC: 21 };
-  const process = { method: 'steep-strain', steepHours: 24, steepTempC: 4, strainLossPct: 10, carbonateHours: 48, carbonateTempC: 20, coldStoreTempC: 4 };
+  const base = {
+    name: 'Base',
+    residualSugarGPerL: 0.5,
+    ph: 3.2,
+    abvPercent: 0.05,
+    residualCo2Volumes: null,
+    lastOpenTempC: 21,
+  };
+  const process = {
+    method: 'steep-strain',
+    steepHours: 24,
+    steepTempC: 4,
+    strainLossPct: 10,
+    carbonateHours: 48,
+    carbonateTempC: 20,
+    coldStoreTempC: 4,
+  };
   // 6 bar heavy glass with little sugar: well within rating and limit.
-  safeContent = { baseBrew: base, lines: [], sugars: [{ type: 'sucrose', gPerL: 2 }], process, bottleFormatId: wine, targetVolumes: 2, sweetnessNote: '', highestTempC: 25 };
+  safeContent = {
+    baseBrew: base,
+    lines: [],
+    sugars: [{ type: 'sucrose', gPerL: 2 }],
+    process,
+    bottleFormatId: wine,
+    targetVolumes: 2,
+    sweetnessNote: '',
+    highestTempC: 25,
+  };
   // 3 bar crown cap with 12 g/L of sugar at 35 °C: over the rating and the alcohol limit.
   dangerContent = { ...safeContent, sugars: [{ type: 'sucrose', gPerL: 12 }], bottleFormatId: crown, highestTempC: 35 };
 });
 afterAll(stopApp);
 
-const make = async (content: Record<string, unknown>, name: string) => (await developer.post('/api/recipes').send({ name, content }).expect(201)).body as { id: number };
+const make = async (content: Record<string, unknown>, name: string) =>
+  (await developer.post('/api/recipes').send({ name, content }).expect(201)).body as { id: number };
 
 describe('review of a recipe version', () => {
   it('goes draft → submitted → approved, e-mails owners then the author, and is recorded', async () => {
     const { id } = await make(safeContent, 'Quince sparkle');
     expect((await brewer.get(`/api/recipes/${id}/review`).expect(200)).body.state).toBe('draft');
-    const submitted = await developer.post(`/api/recipes/${id}/submit`).send({ version: 1, message: 'Ready for the spring run' }).expect(200);
+    const submitted = await developer
+      .post(`/api/recipes/${id}/submit`)
+      .send({ version: 1, message: 'Ready for the spring run' })
+      .expect(200);
     expect(submitted.body).toMatchObject({ state: 'submitted', submittedVersion: 1 });
     expect(await OutboxMessage.count({ where: { to: ownerEmail, kind: 'review' } })).toBeGreaterThan(0);
-    const approved = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, comment: 'Good numbers' }).expect(200);
+    const approved = await owner
+      .post(`/api/recipes/${id}/approve`)
+      .send({ version: 1, comment: 'Good numbers' })
+      .expect(200);
     expect(approved.body).toMatchObject({ state: 'approved', approvedVersion: 1, submittedVersion: null });
     expect(approved.body.events.map((e: { action: string }) => e.action)).toEqual(['approved', 'submitted']);
-    const mail = await OutboxMessage.findOne({ where: { to: developerEmail, kind: 'review' }, order: [['id', 'DESC']] });
+    const mail = await OutboxMessage.findOne({
+      where: { to: developerEmail, kind: 'review' },
+      order: [['id', 'DESC']],
+    });
     expect(mail?.subject).toBe('Approved: Quince sparkle v1');
     const production = await brewer.get('/api/recipes').query({ status: 'approved' }).expect(200);
     expect(production.body.map((r: { id: number }) => r.id)).toContain(id);
@@ -61,10 +95,20 @@ describe('review of a recipe version', () => {
     const { id } = await make(safeContent, 'Locked pear');
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
     await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(200);
-    await developer.put(`/api/recipes/${id}`).send({ name: 'Locked pear', baseVersion: 1, content: { ...safeContent, sugars: [{ type: 'sucrose', gPerL: 3 }] } }).expect(200);
+    await developer
+      .put(`/api/recipes/${id}`)
+      .send({
+        name: 'Locked pear',
+        baseVersion: 1,
+        content: { ...safeContent, sugars: [{ type: 'sucrose', gPerL: 3 }] },
+      })
+      .expect(200);
     const review = await brewer.get(`/api/recipes/${id}/review`).expect(200);
     expect(review.body).toMatchObject({ state: 'draft', currentVersion: 2, approvedVersion: 1 });
-    const scaled = await brewer.post(`/api/recipes/${id}/scale`).send({ batch: { kind: 'litres', value: 10 }, version: 1 }).expect(200);
+    const scaled = await brewer
+      .post(`/api/recipes/${id}/scale`)
+      .send({ batch: { kind: 'litres', value: 10 }, version: 1 })
+      .expect(200);
     expect(scaled.body.sugars[0]).toMatchObject({ value: 20, unit: 'g' }); // 2 g/L × 10 L, the approved version's sugar
   });
 
@@ -75,18 +119,29 @@ describe('review of a recipe version', () => {
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(409);
     const missing = await owner.post(`/api/recipes/${id}/return`).send({ version: 1, comment: '' }).expect(400);
     expect(missing.body.error.fields.comment).toBeDefined();
-    const returned = await owner.post(`/api/recipes/${id}/return`).send({ version: 1, comment: 'Less sugar please' }).expect(200);
+    const returned = await owner
+      .post(`/api/recipes/${id}/return`)
+      .send({ version: 1, comment: 'Less sugar please' })
+      .expect(200);
     expect(returned.body.state).toBe('returned');
-    expect((await OutboxMessage.findOne({ where: { to: developerEmail }, order: [['id', 'DESC']] }))?.subject).toBe('Changes asked: Returned plum v1');
+    expect((await OutboxMessage.findOne({ where: { to: developerEmail }, order: [['id', 'DESC']] }))?.subject).toBe(
+      'Changes asked: Returned plum v1',
+    );
     await owner.post(`/api/recipes/${id}/withdraw`).send({ reason: 'x' }).expect(409);
-    const tooLong = await owner.post(`/api/recipes/${id}/return`).send({ version: 1, comment: 'x'.repeat(2001) }).expect(400);
+    const tooLong = await owner
+      .post(`/api/recipes/${id}/return`)
+      .send({ version: 1, comment: 'x'.repeat(2001) })
+      .expect(400);
     expect(tooLong.body.error.fields.comment).toMatch(/2,000/);
   });
 
   it('refuses approval when the recipe changed since the owner opened it', async () => {
     const { id } = await make(safeContent, 'Moving target');
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
-    await developer.put(`/api/recipes/${id}`).send({ name: 'Moving target', baseVersion: 1, content: safeContent }).expect(200);
+    await developer
+      .put(`/api/recipes/${id}`)
+      .send({ name: 'Moving target', baseVersion: 1, content: safeContent })
+      .expect(200);
     const res = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(409);
     expect(res.body.error.message).toMatch(/changed since you opened it/);
   });
@@ -94,38 +149,66 @@ describe('review of a recipe version', () => {
   it('refuses a version at or over the alcohol limit, override or not, unless the brewery declared it is licensed', async () => {
     const { id } = await make(dangerContent, 'Strong van special');
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
-    const refused = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, overrideReason: 'We know' }).expect(409);
+    const refused = await owner
+      .post(`/api/recipes/${id}/approve`)
+      .send({ version: 1, overrideReason: 'We know' })
+      .expect(409);
     expect(refused.body.error.code).toBe('alcohol_limit');
     expect(refused.body.error.message).toMatch(/licensed/);
     // Only owners declare it, and who did is recorded.
-    await developer.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: true }).expect(403);
-    const declared = await owner.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: true }).expect(200);
+    await developer
+      .patch('/api/organisation')
+      .send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: true })
+      .expect(403);
+    const declared = await owner
+      .patch('/api/organisation')
+      .send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: true })
+      .expect(200);
     expect(declared.body.organisation.licensedForAlcohol).toBe(true);
     const brewery = await Organisation.findByPk(declared.body.organisation.id);
     expect(brewery!.licenceDeclaredById).toBe(declared.body.user.id);
     expect(brewery!.licenceDeclaredAt).toBeInstanceOf(Date);
     // Licensed, the danger still needs its written override.
     await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(409);
-    await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, overrideReason: 'Sold as a licensed alcoholic product' }).expect(200);
-    await owner.patch('/api/organisation').send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: false }).expect(200);
+    await owner
+      .post(`/api/recipes/${id}/approve`)
+      .send({ version: 1, overrideReason: 'Sold as a licensed alcoholic product' })
+      .expect(200);
+    await owner
+      .patch('/api/organisation')
+      .send({ name: 'Test Ferments', abvLimitPercent: 0.5, licensedForAlcohol: false })
+      .expect(200);
   });
 
   it('blocks approval on a danger finding unless the owner writes why', async () => {
     const { id } = await make({ ...dangerContent, sugars: [{ type: 'sucrose', gPerL: 4 }] }, 'Hot van special');
     await developer.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
     const blocked = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(409);
-    expect(blocked.body.error).toMatchObject({ code: 'danger_finding', fields: { overrideReason: expect.any(String) } });
-    const approved = await owner.post(`/api/recipes/${id}/approve`).send({ version: 1, overrideReason: 'Sold chilled only, delivered in a cold van' }).expect(200);
-    expect(approved.body.events[0]).toMatchObject({ action: 'approved', overrideReason: 'Sold chilled only, delivered in a cold van' });
+    expect(blocked.body.error).toMatchObject({
+      code: 'danger_finding',
+      fields: { overrideReason: expect.any(String) },
+    });
+    const approved = await owner
+      .post(`/api/recipes/${id}/approve`)
+      .send({ version: 1, overrideReason: 'Sold chilled only, delivered in a cold van' })
+      .expect(200);
+    expect(approved.body.events[0]).toMatchObject({
+      action: 'approved',
+      overrideReason: 'Sold chilled only, delivered in a cold van',
+    });
     // Lists for production carry the approved version's safety level, so the danger is seen before the recipe is opened.
-    const production = (await brewer.get('/api/recipes').query({ status: 'approved' }).expect(200)).body as { id: number; safetyLevel: string }[];
+    const production = (await brewer.get('/api/recipes').query({ status: 'approved' }).expect(200)).body as {
+      id: number;
+      safetyLevel: string;
+    }[];
     expect(production.find((r) => r.id === id)?.safetyLevel).toBe('danger');
     const withdrawn = await owner2.post(`/api/recipes/${id}/withdraw`).send({ reason: 'Summer heat' }).expect(200);
     expect(withdrawn.body).toMatchObject({ state: 'draft', approvedVersion: null });
   });
 
   it('lets nobody approve their own submission while another owner exists', async () => {
-    const { id } = (await owner.post('/api/recipes').send({ name: 'Owner made', content: safeContent }).expect(201)).body;
+    const { id } = (await owner.post('/api/recipes').send({ name: 'Owner made', content: safeContent }).expect(201))
+      .body;
     await owner.post(`/api/recipes/${id}/submit`).send({ version: 1 }).expect(200);
     await owner.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(403);
     await owner2.post(`/api/recipes/${id}/approve`).send({ version: 1 }).expect(200);

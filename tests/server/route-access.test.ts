@@ -14,7 +14,10 @@ function routesOf(router: Router): { route: string; access: unknown }[] {
   for (const layer of (router as unknown as { stack: Layer[] }).stack) {
     if (layer.route) {
       const first = layer.route.stack[0]?.handle as Record<symbol, unknown> | undefined;
-      found.push({ route: `${Object.keys(layer.route.methods).join(',')} ${layer.route.path}`, access: first?.[ACCESS] });
+      found.push({
+        route: `${Object.keys(layer.route.methods).join(',')} ${layer.route.path}`,
+        access: first?.[ACCESS],
+      });
     } else if (layer.handle.stack) {
       found.push(...routesOf(layer.handle));
     }

@@ -4,7 +4,7 @@ import request from 'supertest';
 import { Invitation, User } from '@/server/db';
 import { hashToken } from '@/server/services/tokens';
 
-import { addMember, linkFromOutbox, signUpOwner, startApp, stopApp, uniqueEmail, type Agent } from './helpers';
+import { addMember, type Agent, linkFromOutbox, signUpOwner, startApp, stopApp, uniqueEmail } from './helpers';
 
 let app: Express;
 beforeAll(async () => {
@@ -54,12 +54,18 @@ describe('POST /api/auth/accept-invitation', () => {
     const email = uniqueEmail();
     await owner.agent.post('/api/team/invitations').send({ email, role: 'developer' }).expect(201);
     const { token } = await linkFromOutbox(email);
-    const res = await request(app).post('/api/auth/accept-invitation').send({ token, name: 'Peregrine Ash', password: 'member-pass-1' }).expect(201);
+    const res = await request(app)
+      .post('/api/auth/accept-invitation')
+      .send({ token, name: 'Peregrine Ash', password: 'member-pass-1' })
+      .expect(201);
     expect(res.body.user).toMatchObject({ email, role: 'developer', name: 'Peregrine Ash' });
     expect(res.body.organisation.id).toBe(owner.session.organisation.id);
     expect(String(res.headers['set-cookie'])).toMatch(/fw_session=/);
 
-    const again = await request(app).post('/api/auth/accept-invitation').send({ token, name: 'Someone Else', password: 'member-pass-2' }).expect(410);
+    const again = await request(app)
+      .post('/api/auth/accept-invitation')
+      .send({ token, name: 'Someone Else', password: 'member-pass-2' })
+      .expect(410);
     expect(again.body.error.message).toMatch(/already been used/);
     expect(await User.count({ where: { email } })).toBe(1);
   });
@@ -69,8 +75,14 @@ describe('POST /api/auth/accept-invitation', () => {
     const expiredEmail = uniqueEmail();
     await agent.post('/api/team/invitations').send({ email: expiredEmail, role: 'brewer' }).expect(201);
     const expired = await linkFromOutbox(expiredEmail);
-    await Invitation.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { tokenHash: hashToken(expired.token) } });
-    const res = await request(app).post('/api/auth/accept-invitation').send({ token: expired.token, name: 'A B', password: 'member-pass-1' }).expect(410);
+    await Invitation.update(
+      { expiresAt: new Date(Date.now() - 1000) },
+      { where: { tokenHash: hashToken(expired.token) } },
+    );
+    const res = await request(app)
+      .post('/api/auth/accept-invitation')
+      .send({ token: expired.token, name: 'A B', password: 'member-pass-1' })
+      .expect(410);
     expect(res.body.error.message).toMatch(/expired/);
 
     const revokedEmail = uniqueEmail();
@@ -107,7 +119,10 @@ describe('PATCH /api/team/members/:id and deactivation', () => {
 
   it('keeps at least one active owner', async () => {
     const owner = await signUpOwner(app);
-    const res = await owner.agent.patch(`/api/team/members/${owner.session.user.id}`).send({ role: 'brewer' }).expect(400);
+    const res = await owner.agent
+      .patch(`/api/team/members/${owner.session.user.id}`)
+      .send({ role: 'brewer' })
+      .expect(400);
     expect(res.body.error.message).toMatch(/at least one active owner/);
     await owner.agent.post(`/api/team/members/${owner.session.user.id}/deactivate`).send({}).expect(400);
   });
@@ -119,9 +134,18 @@ describe('PATCH /api/team/members/:id and deactivation', () => {
     await owner.agent.post(`/api/team/members/${dev.session.user.id}/deactivate`).send({}).expect(200);
     await dev.agent.get('/api/auth/session').expect(401);
     // A deactivated account answers a right and a wrong password alike, and like an unknown address.
-    const right = await request(app).post('/api/auth/sign-in').send({ email: dev.email, password: dev.password }).expect(401);
-    const wrong = await request(app).post('/api/auth/sign-in').send({ email: dev.email, password: 'not-the-password' }).expect(401);
-    const unknown = await request(app).post('/api/auth/sign-in').send({ email: uniqueEmail('nobody'), password: dev.password }).expect(401);
+    const right = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: dev.email, password: dev.password })
+      .expect(401);
+    const wrong = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: dev.email, password: 'not-the-password' })
+      .expect(401);
+    const unknown = await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail('nobody'), password: dev.password })
+      .expect(401);
     expect(right.body).toEqual(wrong.body);
     expect(right.body).toEqual(unknown.body);
     await owner.agent.post(`/api/team/members/${dev.session.user.id}/reactivate`).send({}).expect(200);
@@ -137,7 +161,10 @@ describe('who may call the team routes', () => {
   let targetId: number;
   beforeAll(async () => {
     owner = await signUpOwner(app);
-    members = { developer: (await addMember(app, owner.agent, 'developer')).agent, brewer: (await addMember(app, owner.agent, 'brewer')).agent };
+    members = {
+      developer: (await addMember(app, owner.agent, 'developer')).agent,
+      brewer: (await addMember(app, owner.agent, 'brewer')).agent,
+    };
     targetId = (await addMember(app, owner.agent, 'brewer')).session.user.id;
   });
 
@@ -173,7 +200,10 @@ describe('who may call the team routes', () => {
     expect(team.body.members.map((m: { id: number }) => m.id)).toEqual([stranger.session.user.id]);
     await stranger.agent.patch(`/api/team/members/${targetId}`).send({ role: 'owner' }).expect(404);
     await stranger.agent.post(`/api/team/members/${targetId}/deactivate`).send({}).expect(404);
-    const invitation = await owner.agent.post('/api/team/invitations').send({ email: uniqueEmail(), role: 'brewer' }).expect(201);
+    const invitation = await owner.agent
+      .post('/api/team/invitations')
+      .send({ email: uniqueEmail(), role: 'brewer' })
+      .expect(201);
     await stranger.agent.delete(`/api/team/invitations/${invitation.body.id}`).send({}).expect(404);
     expect((await User.findByPk(targetId))?.role).toBe('brewer');
   });

@@ -12,11 +12,33 @@ const sharedPresent = fs.existsSync(path.join(SHARED, 'FOOD_DES.txt'));
 
 /** A tiny dataset in the SR25 abbreviated format (fields ^, text ~, CRLF), written by the test itself. */
 function writeFixture(dir: string, strawberrySugar = '4.89') {
-  const food = (no: string, group: string, name: string, maker = '') => `~${no}~^~${group}~^~${name}~^~${name.toUpperCase()}~^~~^~${maker}~^~~^~~^0^~~^6.25^^^`;
-  const abbrev = (no: string, sugar: string, fat: string) => `~${no}~^~X~^90.95^32^0.67^${fat}^0.40^7.68^2.0^${sugar}^16^0.41`;
-  fs.writeFileSync(path.join(dir, 'FOOD_DES.txt'), [food('09316', '0900', 'Strawberries, raw'), food('02010', '0200', 'Spices, cinnamon, ground'), food('19999', '1900', 'Candy bar, branded', 'A Maker')].join('\r\n') + '\r\n', 'latin1');
-  fs.writeFileSync(path.join(dir, 'ABBREV.txt'), [abbrev('09316', strawberrySugar, '0.30'), abbrev('02010', '2.17', '1.24'), abbrev('19999', '50', '20')].join('\r\n') + '\r\n', 'latin1');
-  fs.writeFileSync(path.join(dir, 'WEIGHT.txt'), ['~09316~^1^1^~cup, halves~^152^^', '~09316~^2^1^~medium (1-1/4" dia)~^12^^', '~02010~^1^1^~tsp~^2.6^^'].join('\r\n') + '\r\n', 'latin1');
+  const food = (no: string, group: string, name: string, maker = '') =>
+    `~${no}~^~${group}~^~${name}~^~${name.toUpperCase()}~^~~^~${maker}~^~~^~~^0^~~^6.25^^^`;
+  const abbrev = (no: string, sugar: string, fat: string) =>
+    `~${no}~^~X~^90.95^32^0.67^${fat}^0.40^7.68^2.0^${sugar}^16^0.41`;
+  fs.writeFileSync(
+    path.join(dir, 'FOOD_DES.txt'),
+    [
+      food('09316', '0900', 'Strawberries, raw'),
+      food('02010', '0200', 'Spices, cinnamon, ground'),
+      food('19999', '1900', 'Candy bar, branded', 'A Maker'),
+    ].join('\r\n') + '\r\n',
+    'latin1',
+  );
+  fs.writeFileSync(
+    path.join(dir, 'ABBREV.txt'),
+    [abbrev('09316', strawberrySugar, '0.30'), abbrev('02010', '2.17', '1.24'), abbrev('19999', '50', '20')].join(
+      '\r\n',
+    ) + '\r\n',
+    'latin1',
+  );
+  fs.writeFileSync(
+    path.join(dir, 'WEIGHT.txt'),
+    ['~09316~^1^1^~cup, halves~^152^^', '~09316~^2^1^~medium (1-1/4" dia)~^12^^', '~02010~^1^1^~tsp~^2.6^^'].join(
+      '\r\n',
+    ) + '\r\n',
+    'latin1',
+  );
 }
 
 let dir: string;
@@ -34,10 +56,25 @@ describe('reading the SR25 format', () => {
     writeFixture(dir);
     const foods = readSrFoods(dir);
     expect(foods).toHaveLength(3);
-    expect(foods[0]).toMatchObject({ record: '09316', name: 'Strawberries, raw', foodGroup: '0900', branded: false, sugarsG: 4.89, fatG: 0.3, energyKcal: 32 });
-    expect(foods[0].measures).toEqual([{ label: '1 cup, halves', grams: 152 }, { label: '1 medium (1-1/4" dia)', grams: 12 }]);
+    expect(foods[0]).toMatchObject({
+      record: '09316',
+      name: 'Strawberries, raw',
+      foodGroup: '0900',
+      branded: false,
+      sugarsG: 4.89,
+      fatG: 0.3,
+      energyKcal: 32,
+    });
+    expect(foods[0].measures).toEqual([
+      { label: '1 cup, halves', grams: 152 },
+      { label: '1 medium (1-1/4" dia)', grams: 12 },
+    ]);
     expect(foods[2].branded).toBe(true);
-    expect(ingredientFromSr(foods[1])).toMatchObject({ category: 'spice', sourceDataset: 'USDA SR25', sourceRecord: '02010' });
+    expect(ingredientFromSr(foods[1])).toMatchObject({
+      category: 'spice',
+      sourceDataset: 'USDA SR25',
+      sourceRecord: '02010',
+    });
   });
 
   it('says clearly when a folder is not in that format', () => {
@@ -55,7 +92,10 @@ describe('reading the SR25 format', () => {
 describe('importDatasetIngredients', () => {
   it('imports, then changes nothing on a second run, then updates what changed', async () => {
     writeFixture(dir);
-    const rows = () => readSrFoods(dir).filter((f) => !f.branded).map(ingredientFromSr);
+    const rows = () =>
+      readSrFoods(dir)
+        .filter((f) => !f.branded)
+        .map(ingredientFromSr);
     expect(await importDatasetIngredients(rows())).toEqual({ created: 2, updated: 0, unchanged: 0 });
     expect(await importDatasetIngredients(rows())).toEqual({ created: 0, updated: 0, unchanged: 2 });
     writeFixture(dir, '5.10');
@@ -74,7 +114,10 @@ describe('the starter library', () => {
   });
 
   const compare = sharedPresent ? it : it.skip;
-  if (!sharedPresent) console.log(`USDA SR25 files not found at ${SHARED}: the starter library is not compared with the dataset in this run.`);
+  if (!sharedPresent)
+    console.log(
+      `USDA SR25 files not found at ${SHARED}: the starter library is not compared with the dataset in this run.`,
+    );
   compare('matches the USDA National Nutrient Database for Standard Reference, Release 25, row by row', () => {
     const byRecord = new Map(readSrFoods(SHARED).map((f) => [f.record, f]));
     for (const row of loadStarterIngredients()) {
@@ -88,17 +131,25 @@ describe('the starter library', () => {
 describe('the full USDA SR25 import', () => {
   const full = sharedPresent ? it : it.skip;
   if (!sharedPresent) console.log(`USDA SR25 files not found at ${SHARED}: the full import is not tested in this run.`);
-  full('imports every generic food with published values (SR25: strawberries 4.89 g, honey 82.12 g, granulated sugar 99.80 g sugars per 100 g)', async () => {
-    const foods = readSrFoods(SHARED);
-    expect(foods).toHaveLength(8463);
-    const generic = foods.filter((f) => !f.branded);
-    const report = await importDatasetIngredients(generic.map(ingredientFromSr));
-    expect(report.created + report.updated + report.unchanged).toBe(generic.length);
-    expect(await datasetIngredientCount()).toBe(generic.length);
-    const sugars = async (record: string) => (await Ingredient.findOne({ where: { sourceRecord: record } }))?.sugarsG;
-    expect(await sugars('09316')).toBe(4.89);
-    expect(await sugars('19296')).toBe(82.12);
-    expect(await sugars('19335')).toBe(99.8);
-    expect(await importDatasetIngredients(generic.map(ingredientFromSr))).toEqual({ created: 0, updated: 0, unchanged: generic.length });
-  }, 60_000);
+  full(
+    'imports every generic food with published values (SR25: strawberries 4.89 g, honey 82.12 g, granulated sugar 99.80 g sugars per 100 g)',
+    async () => {
+      const foods = readSrFoods(SHARED);
+      expect(foods).toHaveLength(8463);
+      const generic = foods.filter((f) => !f.branded);
+      const report = await importDatasetIngredients(generic.map(ingredientFromSr));
+      expect(report.created + report.updated + report.unchanged).toBe(generic.length);
+      expect(await datasetIngredientCount()).toBe(generic.length);
+      const sugars = async (record: string) => (await Ingredient.findOne({ where: { sourceRecord: record } }))?.sugarsG;
+      expect(await sugars('09316')).toBe(4.89);
+      expect(await sugars('19296')).toBe(82.12);
+      expect(await sugars('19335')).toBe(99.8);
+      expect(await importDatasetIngredients(generic.map(ingredientFromSr))).toEqual({
+        created: 0,
+        updated: 0,
+        unchanged: generic.length,
+      });
+    },
+    60_000,
+  );
 });

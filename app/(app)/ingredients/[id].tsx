@@ -14,20 +14,37 @@ export default function IngredientScreen() {
   const copy = useCopyIngredientMutation();
   const archive = useArchiveIngredientMutation();
   const canEdit = can(session?.user.role, 'ingredients.edit');
-  if (ingredient.isError) return <Screen title="Ingredient"><Banner tone="danger">{ingredient.error.message}</Banner></Screen>;
+  if (ingredient.isError)
+    return (
+      <Screen title="Ingredient">
+        <Banner tone="danger">{ingredient.error.message}</Banner>
+      </Screen>
+    );
   if (!ingredient.data) return <Loading />;
   const item = ingredient.data;
   const actions = canEdit ? (
     <>
-      {item.scope === 'house' ? <Button label="Edit" onPress={() => router.push(`/ingredients/edit/${item.id}`)} /> : null}
+      {item.scope === 'house' ? (
+        <Button label="Edit" onPress={() => router.push(`/ingredients/edit/${item.id}`)} />
+      ) : null}
       <Button
         label="Copy to a house ingredient"
         variant="secondary"
         busy={copy.isPending}
-        onPress={() => copy.mutate({ id: item.id, name: `${item.name} (house copy)`.slice(0, 200) }, { onSuccess: (created) => router.push(`/ingredients/edit/${created.id}`) })}
+        onPress={() =>
+          copy.mutate(
+            { id: item.id, name: `${item.name} (house copy)`.slice(0, 200) },
+            { onSuccess: (created) => router.push(`/ingredients/edit/${created.id}`) },
+          )
+        }
       />
       {item.scope === 'house' ? (
-        <Button label={item.archived ? 'Restore' : 'Archive'} variant="quiet" busy={archive.isPending} onPress={() => archive.mutate({ id: item.id, archived: !item.archived })} />
+        <Button
+          label={item.archived ? 'Restore' : 'Archive'}
+          variant="quiet"
+          busy={archive.isPending}
+          onPress={() => archive.mutate({ id: item.id, archived: !item.archived })}
+        />
       ) : null}
     </>
   ) : null;

@@ -17,7 +17,16 @@ export default function IngredientsScreen() {
       subtitle="Sugar and composition per gram, from the USDA nutrient database and your own house ingredients."
       actions={canEdit ? <Button label="New house ingredient" onPress={() => router.push('/ingredients/new')} /> : null}
     >
-      <Card aside={<Button label={showArchived ? 'Show current' : 'Show archived'} variant="quiet" onPress={() => setShowArchived(!showArchived)} />} title={showArchived ? 'Archived house ingredients' : 'Library'}>
+      <Card
+        aside={
+          <Button
+            label={showArchived ? 'Show current' : 'Show archived'}
+            variant="quiet"
+            onPress={() => setShowArchived(!showArchived)}
+          />
+        }
+        title={showArchived ? 'Archived house ingredients' : 'Library'}
+      >
         <IngredientList key={String(showArchived)} showArchived={showArchived} />
       </Card>
     </Screen>

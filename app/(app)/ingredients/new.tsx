@@ -8,7 +8,11 @@ export default function NewIngredientScreen() {
   const router = useRouter();
   const create = useCreateIngredientMutation();
   return (
-    <Screen title="New house ingredient" subtitle="Enter the values from the product label for one serving." maxWidth={900}>
+    <Screen
+      title="New house ingredient"
+      subtitle="Enter the values from the product label for one serving."
+      maxWidth={900}
+    >
       <Card>
         <HouseIngredientForm
           submitLabel="Save ingredient"

@@ -2,13 +2,18 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { HistoryView } from '@/components/recipes/HistoryView';
-import { ReviewPanel } from '@/components/recipes/ReviewPanel';
 import { RecipeEditor } from '@/components/recipes/RecipeEditor';
+import { ReviewPanel } from '@/components/recipes/ReviewPanel';
 import { ScaleView } from '@/components/recipes/ScaleView';
 import { TastingsView } from '@/components/recipes/TastingsView';
 import { Banner, Button, Loading, Screen, Segmented } from '@/components/ui';
 import { useBottleFormatsQuery } from '@/lib/api/bottle-formats';
-import { useArchiveRecipeMutation, useDuplicateRecipeMutation, useRecipeQuery, useSaveRecipeMutation } from '@/lib/api/recipes';
+import {
+  useArchiveRecipeMutation,
+  useDuplicateRecipeMutation,
+  useRecipeQuery,
+  useSaveRecipeMutation,
+} from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
 import { can } from '@/lib/roles';
 
@@ -26,7 +31,12 @@ export default function RecipeScreen() {
   const archive = useArchiveRecipeMutation(recipeId);
   const brewer = !can(session?.user.role, 'recipes.develop');
   const [tab, setTab] = useState<Tab>(brewer ? 'scale' : 'design');
-  if (recipe.isError) return <Screen title="Recipe"><Banner tone="danger">{recipe.error.message}</Banner></Screen>;
+  if (recipe.isError)
+    return (
+      <Screen title="Recipe">
+        <Banner tone="danger">{recipe.error.message}</Banner>
+      </Screen>
+    );
   if (!recipe.data || !formats.data || !session) return <Loading />;
   const archived = recipe.data.status === 'archived';
   const canEdit = can(session.user.role, 'recipes.edit') && !archived;
@@ -38,14 +48,38 @@ export default function RecipeScreen() {
       actions={
         can(session.user.role, 'recipes.develop') ? (
           <>
-            <Button label="Duplicate" variant="secondary" busy={duplicate.isPending} onPress={() => duplicate.mutate(undefined, { onSuccess: (copy) => router.push(`/recipes/${copy.id}`) })} />
-            <Button label={archived ? 'Restore' : 'Archive'} variant="quiet" busy={archive.isPending} onPress={() => archive.mutate(!archived)} />
+            <Button
+              label="Duplicate"
+              variant="secondary"
+              busy={duplicate.isPending}
+              onPress={() => duplicate.mutate(undefined, { onSuccess: (copy) => router.push(`/recipes/${copy.id}`) })}
+            />
+            <Button
+              label={archived ? 'Restore' : 'Archive'}
+              variant="quiet"
+              busy={archive.isPending}
+              onPress={() => archive.mutate(!archived)}
+            />
           </>
         ) : null
       }
     >
-      {archived ? <Banner tone="info">This recipe is archived: it can be read, duplicated or restored, not changed.</Banner> : null}
-      <Segmented label="Part of the recipe" showLabel={false} value={tab} onChange={setTab} options={[{ value: 'design', label: 'Design' }, { value: 'review', label: 'Review' }, { value: 'tastings', label: 'Tastings' }, { value: 'scale', label: brewer ? 'Batch' : 'Scale' }, { value: 'history', label: 'History' }]} />
+      {archived ? (
+        <Banner tone="info">This recipe is archived: it can be read, duplicated or restored, not changed.</Banner>
+      ) : null}
+      <Segmented
+        label="Part of the recipe"
+        showLabel={false}
+        value={tab}
+        onChange={setTab}
+        options={[
+          { value: 'design', label: 'Design' },
+          { value: 'review', label: 'Review' },
+          { value: 'tastings', label: 'Tastings' },
+          { value: 'scale', label: brewer ? 'Batch' : 'Scale' },
+          { value: 'history', label: 'History' },
+        ]}
+      />
       {tab === 'design' ? (
         <RecipeEditor
           recipe={recipe.data}
@@ -61,10 +95,21 @@ export default function RecipeScreen() {
           onSave={(input) => save.mutateAsync({ ...input, note: '' })}
         />
       ) : null}
-      {tab === 'tastings' ? <TastingsView recipeId={recipeId} canEdit={canEdit} content={recipe.data.content} onShowHistory={() => setTab('history')} /> : null}
+      {tab === 'tastings' ? (
+        <TastingsView
+          recipeId={recipeId}
+          canEdit={canEdit}
+          content={recipe.data.content}
+          onShowHistory={() => setTab('history')}
+        />
+      ) : null}
       {tab === 'review' ? <ReviewPanel recipeId={recipeId} session={session} /> : null}
-      {tab === 'scale' ? <ScaleView recipe={recipe.data} units={session.user.unitSystem} productionOnly={brewer} /> : null}
-      {tab === 'history' ? <HistoryView recipeId={recipeId} current={recipe.data.currentVersion} canEdit={canEdit} /> : null}
+      {tab === 'scale' ? (
+        <ScaleView recipe={recipe.data} units={session.user.unitSystem} productionOnly={brewer} />
+      ) : null}
+      {tab === 'history' ? (
+        <HistoryView recipeId={recipeId} current={recipe.data.currentVersion} canEdit={canEdit} />
+      ) : null}
     </Screen>
   );
 }

@@ -63,11 +63,13 @@ describe('Brix and specific gravity of sucrose solutions', () => {
   ];
 
   it('converts °Bx to specific gravity as the CRC sucrose table', () => {
-    for (const [brix, density] of table) expect(Math.abs(brixToSpecificGravity(brix) - density / 0.998207)).toBeLessThan(0.001);
+    for (const [brix, density] of table)
+      expect(Math.abs(brixToSpecificGravity(brix) - density / 0.998207)).toBeLessThan(0.001);
   });
 
   it('converts specific gravity back to °Bx', () => {
-    for (const [brix, density] of table) expect(Math.abs(specificGravityToBrix(density / 0.998207) - brix)).toBeLessThan(0.25);
+    for (const [brix, density] of table)
+      expect(Math.abs(specificGravityToBrix(density / 0.998207) - brix)).toBeLessThan(0.25);
     expect(specificGravityToBrix(1)).toBe(0);
   });
 

@@ -1,5 +1,5 @@
-import { M_CO2, M_ETHANOL, M_HEXOSE, M_SUCROSE, CO2_G_PER_VOLUME } from '@/lib/chemistry/constants';
 import { AIR_GASES, bunsenCoefficient } from '@/lib/chemistry/air';
+import { CO2_G_PER_VOLUME, M_CO2, M_ETHANOL, M_HEXOSE, M_SUCROSE } from '@/lib/chemistry/constants';
 import { co2SolubilityMolPerKgAtm, co2SolubilityMolPerLAtm, dissolvedVolumes } from '@/lib/chemistry/solubility';
 import { waterDensityGPerL, waterVapourPressureAtm } from '@/lib/chemistry/water';
 
@@ -65,7 +65,12 @@ describe('air dissolved in water (Weiss 1970)', () => {
       [30, 7.56],
       [40, 6.41],
     ];
-    for (const [tempC, mgPerL] of table) within(bunsenCoefficient(gas('O2'), tempC) * 0.20946 * (1 - waterVapourPressureAtm(tempC)) * 1.42905 * 1000, mgPerL, 0.005);
+    for (const [tempC, mgPerL] of table)
+      within(
+        bunsenCoefficient(gas('O2'), tempC) * 0.20946 * (1 - waterVapourPressureAtm(tempC)) * 1.42905 * 1000,
+        mgPerL,
+        0.005,
+      );
   });
 
   it('matches the compiled Henry constants of nitrogen, oxygen and argon at 25 °C', () => {

@@ -1,4 +1,4 @@
-import { computeCarbonation, computePriming, ratingLevel, type CarbonationInput } from '@/lib/chemistry/carbonation';
+import { type CarbonationInput, computeCarbonation, computePriming, ratingLevel } from '@/lib/chemistry/carbonation';
 import { equilibriumAt, liquidFills, maxCo2MolForGauge, volumesToMol } from '@/lib/chemistry/pressure';
 
 const within = (actual: number, expected: number, relative: number) => {
@@ -16,16 +16,28 @@ describe('pressure of a sealed container', () => {
     // liquid 0.878 ÷ 22.41397 × 0.5 L = 0.0195860 mol/atm; headspace 0.025 L ÷ (0.0820574 × 293.15) = 0.0010393 mol/atm;
     // p(CO2) = 0.0557688 ÷ 0.0206253 = 2.70391 atm. The sealed-in air and vapour are again at 1 atm together, so the
     // gauge reads 2.70391 atm = 2.7397 bar.
-    within(equilibriumAt({ liquidMl: 500, headspaceMl: 25, sealedTempC: 20 }, twoAndHalfIn500, 20).gaugeBar, 2.7397, 0.005);
+    within(
+      equilibriumAt({ liquidMl: 500, headspaceMl: 25, sealedTempC: 20 }, twoAndHalfIn500, 20).gaugeBar,
+      2.7397,
+      0.005,
+    );
     // With no headspace: 2.5 ÷ 0.878 = 2.84738 atm = 2.8851 bar.
-    within(equilibriumAt({ liquidMl: 500, headspaceMl: 0, sealedTempC: 20 }, twoAndHalfIn500, 20).gaugeBar, 2.8851, 0.005);
+    within(
+      equilibriumAt({ liquidMl: 500, headspaceMl: 0, sealedTempC: 20 }, twoAndHalfIn500, 20).gaugeBar,
+      2.8851,
+      0.005,
+    );
   });
 
   it('is continuous as the headspace goes to zero, because the air dissolved in the liquid stays', () => {
     // Before, the sealed-in air vanished at exactly 0 mL and the gauge dropped by about 1 bar.
     for (const tempC of [4, 20]) {
       const none = equilibriumAt({ liquidMl: 500, headspaceMl: 0, sealedTempC: 20 }, twoAndHalfIn500, tempC).gaugeBar;
-      const hair = equilibriumAt({ liquidMl: 500, headspaceMl: 0.01, sealedTempC: 20 }, twoAndHalfIn500, tempC).gaugeBar;
+      const hair = equilibriumAt(
+        { liquidMl: 500, headspaceMl: 0.01, sealedTempC: 20 },
+        twoAndHalfIn500,
+        tempC,
+      ).gaugeBar;
       expect(Math.abs(none - hair)).toBeLessThan(0.005);
     }
   });
@@ -92,7 +104,10 @@ describe('computeCarbonation', () => {
 
   it('flags alcohol over the limit as danger and judges pressure at the highest temperature', () => {
     const result = computeCarbonation(base);
-    expect(result.findings.find((f) => f.code.startsWith('alcohol'))).toMatchObject({ level: 'danger', code: 'alcohol-over-limit' });
+    expect(result.findings.find((f) => f.code.startsWith('alcohol'))).toMatchObject({
+      level: 'danger',
+      code: 'alcohol-over-limit',
+    });
     // 2.37 volumes at 35 °C: about 2.37 ÷ 0.59 (Bunsen coefficient near 35 °C) ≈ 4 atm of CO2, over a 3 bar rating.
     const pressure = result.findings.find((f) => f.code.startsWith('pressure'))!;
     expect(pressure).toMatchObject({ level: 'danger', code: 'pressure-over-rating' });
@@ -104,7 +119,13 @@ describe('computeCarbonation', () => {
     // 2.5 volumes in 500 mL + 25 mL, sealed and checked at 20 °C: 2.7397 bar by hand (see "at the sealing temperature"
     // above). Ratings 1 % either side of 2.7397 ÷ 0.75 = 3.6529 bar and of 2.7397 bar itself.
     const at = (rating: number) =>
-      computeCarbonation({ ...base, sugars: [], residualCo2Volumes: 2.5, temperaturesC: [20], maxWorkingPressureBar: rating }).findings.find((f) => f.code.startsWith('pressure'))!;
+      computeCarbonation({
+        ...base,
+        sugars: [],
+        residualCo2Volumes: 2.5,
+        temperaturesC: [20],
+        maxWorkingPressureBar: rating,
+      }).findings.find((f) => f.code.startsWith('pressure'))!;
     expect(at(3.6529 * 1.01)).toMatchObject({ level: 'ok', code: 'pressure-within-rating' });
     expect(at(3.6529 * 0.99)).toMatchObject({ level: 'caution', code: 'pressure-near-rating' });
     expect(at(2.7397 * 1.01)).toMatchObject({ level: 'caution', code: 'pressure-near-rating' });
@@ -113,14 +134,23 @@ describe('computeCarbonation', () => {
 
   it('calls a bottle the warmed liquid fills a danger, saying where and how much headspace to leave', () => {
     // 750 mL with 2 mL of headspace, sealed at 20 °C: fills at 30.3 °C and needs 3.145 mL at 35 °C (worked out above).
-    const result = computeCarbonation({ ...base, liquidMl: 750, headspaceMl: 2, temperaturesC: [4, 20], warmDayTempC: 35, maxWorkingPressureBar: 10 });
+    const result = computeCarbonation({
+      ...base,
+      liquidMl: 750,
+      headspaceMl: 2,
+      temperaturesC: [4, 20],
+      warmDayTempC: 35,
+      maxWorkingPressureBar: 10,
+    });
     const fill = result.findings.find((f) => f.code === 'liquid-fills-bottle')!;
     expect(fill.level).toBe('danger');
     expect(fill.message).toMatch(/At 30\.3 °C the warmed liquid fills the bottle/);
     expect(fill.values).toMatchObject({ leastHeadspaceMl: 4 });
     expect(result.pressures.find((p) => p.tempC === 35)).toMatchObject({ liquidFills: true, overRating: true });
     // A bottle filled to the brim is full from the start.
-    expect(computeCarbonation({ ...base, headspaceMl: 0 }).findings.find((f) => f.code === 'liquid-fills-bottle')?.message).toMatch(/^The liquid fills the bottle/);
+    expect(
+      computeCarbonation({ ...base, headspaceMl: 0 }).findings.find((f) => f.code === 'liquid-fills-bottle')?.message,
+    ).toMatch(/^The liquid fills the bottle/);
   });
 
   it('counts lactose as sweetness only', () => {
@@ -143,7 +173,9 @@ describe('computeCarbonation', () => {
       ingredients: [{ name: 'Butter shortbread', sugarG: 2, fermentableShare: 1, fatG: 3, inBottle: true }],
     });
     const codes = result.findings.map((f) => f.code);
-    expect(codes).toEqual(expect.arrayContaining(['solids-in-bottle', 'fatty-ingredients', 'temperature-out-of-range']));
+    expect(codes).toEqual(
+      expect.arrayContaining(['solids-in-bottle', 'fatty-ingredients', 'temperature-out-of-range']),
+    );
   });
 });
 

@@ -9,10 +9,19 @@ export default function EditIngredientScreen() {
   const router = useRouter();
   const ingredient = useIngredientQuery(Number(id));
   const update = useUpdateIngredientMutation();
-  if (ingredient.isError) return <Screen title="Ingredient"><Banner tone="danger">{ingredient.error.message}</Banner></Screen>;
+  if (ingredient.isError)
+    return (
+      <Screen title="Ingredient">
+        <Banner tone="danger">{ingredient.error.message}</Banner>
+      </Screen>
+    );
   if (!ingredient.data) return <Loading />;
   return (
-    <Screen title={`Edit ${ingredient.data.name}`} subtitle="Values are shown per 100 g; enter a label's serving instead if that is easier." maxWidth={900}>
+    <Screen
+      title={`Edit ${ingredient.data.name}`}
+      subtitle="Values are shown per 100 g; enter a label's serving instead if that is easier."
+      maxWidth={900}
+    >
       {ingredient.data.scope === 'dataset' ? (
         <Banner tone="caution">Dataset ingredients are read-only. Copy it to a house ingredient to change it.</Banner>
       ) : (

@@ -1,5 +1,6 @@
-// ESLint flat config. Run from the repository root (`npm run lint` passes --config), so paths below are from there.
+// ESLint flat config, at the root where editors find it. Formatting is Prettier's (`npm run lint` runs both).
 const expoConfig = require('eslint-config-expo/flat');
+const simpleImportSort = require('eslint-plugin-simple-import-sort');
 
 module.exports = [
   ...expoConfig,
@@ -7,14 +8,21 @@ module.exports = [
     ignores: ['dist/**', 'data/**', 'node_modules/**', '.expo/**', 'tests/e2e/screenshots/**', 'tests/e2e/results/**'],
   },
   {
+    plugins: { 'simple-import-sort': simpleImportSort },
     rules: {
       'import/no-unresolved': 'off',
+      'import/order': 'off',
+      'simple-import-sort/imports': 'error',
+      'simple-import-sort/exports': 'error',
     },
   },
   {
     files: ['**/*.ts', '**/*.tsx'],
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
+      ],
     },
   },
   {
