@@ -5,21 +5,9 @@ import type { BrixRequest, CarbonationRequest, PrimingRequest } from '@/lib/sche
 
 import { api } from './client';
 import { staleTimes } from './query-client';
+import type { BottleFormatRef, BrixAnswer, CarbonationAnswer, PrimingAnswer } from './types';
 
-export type BottleFormatRef = {
-  id: number;
-  name: string;
-  maxWorkingPressureBar: number;
-  pressureSource: string;
-} | null;
-export type CarbonationAnswer = CarbonationResult & { bottleFormat: BottleFormatRef };
-export type PrimingAnswer = PrimingResult & { bottleFormat: BottleFormatRef };
-export interface BrixAnswer {
-  brix: number;
-  specificGravity: number;
-  sugarGPerL: number;
-  caution: string;
-}
+export type { BottleFormatRef, BrixAnswer, CarbonationAnswer, PrimingAnswer };
 
 export const calculationKeys = {
   carbonation: (request: CarbonationRequest | undefined) => ['calculations', 'carbonation', request] as const,

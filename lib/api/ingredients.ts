@@ -5,24 +5,9 @@ import type { HouseIngredientInput } from '@/lib/schemas/ingredients';
 
 import { api } from './client';
 import { staleTimes } from './query-client';
-import type { Attachment, Ingredient } from './types';
+import type { Attachment, Ingredient, IngredientChangeEntry, IngredientPage } from './types';
 
-export type { Attachment, Ingredient };
-
-export interface IngredientPage {
-  items: Ingredient[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
-export interface IngredientChangeEntry {
-  id: number;
-  action: string;
-  at: string;
-  by: string | null;
-  changes: Record<string, [unknown, unknown]>;
-}
+export type { Attachment, Ingredient, IngredientChangeEntry, IngredientPage };
 
 export interface IngredientQuery {
   q: string;

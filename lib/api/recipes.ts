@@ -15,46 +15,9 @@ import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput
 
 import { api } from './client';
 import { staleTimes } from './query-client';
-import type { RecipeDetail, RecipeSummary } from './types';
+import type { RecipeDetail, RecipeSummary, ReviewTimeline, TastingEntry, VersionEntry } from './types';
 
-export type { RecipeDetail, RecipeSummary };
-
-export interface ReviewTimeline {
-  state: ReviewState;
-  currentVersion: number;
-  submittedVersion: number | null;
-  approvedVersion: number | null;
-  events: {
-    id: number;
-    version: number;
-    action: string;
-    by: string | null;
-    comment: string;
-    overrideReason: string | null;
-    selfApproved: boolean;
-    at: string;
-  }[];
-}
-
-export interface VersionEntry {
-  number: number;
-  note: string;
-  savedBy: string | null;
-  savedAt: string;
-}
-
-export interface TastingEntry {
-  id: number;
-  /** The version tasted. */
-  versionNumber: number;
-  /** The version its sugar addition made, if any. */
-  createdVersion: number | null;
-  tastedOn: string;
-  by: string | null;
-  notes: string;
-  scores: { sweetness: number; sourness: number; fizz: number; flavour: number };
-  sugarAddition: TastingInput['sugarAddition'];
-}
+export type { RecipeDetail, RecipeSummary, ReviewTimeline, TastingEntry, VersionEntry };
 
 export type { Change, RecipeEvaluation, ScaledRecipe };
 

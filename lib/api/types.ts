@@ -1,7 +1,8 @@
+import type { CarbonationResult, PrimingResult } from '@/lib/chemistry/carbonation';
 import type { Allergen, Category, Measure } from '@/lib/ingredients';
 import type { Role } from '@/lib/roles';
 import type { BottleFormatInput } from '@/lib/schemas/bottle-formats';
-import type { RecipeContent } from '@/lib/schemas/recipes';
+import type { RecipeContent, TastingInput } from '@/lib/schemas/recipes';
 import type { ReviewState } from '@/lib/schemas/reviews';
 import type { UnitSystem } from '@/lib/units';
 
@@ -157,4 +158,74 @@ export interface RecipeDetail extends Omit<RecipeSummary, 'reviewState'> {
   savedBy: string | null;
   savedAt: string;
   ingredientNames: Record<number, string>;
+}
+
+// Answers of the recipe, review, ingredient and calculation routes: the services declare these as their return
+// types and the client hooks read them, so a change on either side is a type error on the other.
+
+export interface ReviewTimeline {
+  state: ReviewState;
+  currentVersion: number;
+  submittedVersion: number | null;
+  approvedVersion: number | null;
+  events: {
+    id: number;
+    version: number;
+    action: string;
+    by: string | null;
+    comment: string;
+    overrideReason: string | null;
+    selfApproved: boolean;
+    at: string;
+  }[];
+}
+
+export interface VersionEntry {
+  number: number;
+  note: string;
+  savedBy: string | null;
+  savedAt: string;
+}
+
+export interface TastingEntry {
+  id: number;
+  /** The version tasted. */
+  versionNumber: number;
+  /** The version its sugar addition made, if any. */
+  createdVersion: number | null;
+  tastedOn: string;
+  by: string | null;
+  notes: string;
+  scores: { sweetness: number; sourness: number; fizz: number; flavour: number };
+  sugarAddition: TastingInput['sugarAddition'];
+}
+
+export interface IngredientPage {
+  items: Ingredient[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface IngredientChangeEntry {
+  id: number;
+  action: string;
+  at: string;
+  by: string | null;
+  changes: Record<string, [unknown, unknown]>;
+}
+
+export type BottleFormatRef = {
+  id: number;
+  name: string;
+  maxWorkingPressureBar: number;
+  pressureSource: string;
+} | null;
+export type CarbonationAnswer = CarbonationResult & { bottleFormat: BottleFormatRef };
+export type PrimingAnswer = PrimingResult & { bottleFormat: BottleFormatRef };
+export interface BrixAnswer {
+  brix: number;
+  specificGravity: number;
+  sugarGPerL: number;
+  caution: string;
 }

@@ -1,5 +1,6 @@
 import { Op } from 'sequelize';
 
+import type { CarbonationAnswer, PrimingAnswer } from '@/lib/api/types';
 import { brixToSpecificGravity, brixToSugarGPerL, READING_CAUTION, specificGravityToBrix } from '@/lib/chemistry/brix';
 import {
   type CarbonationResult,
@@ -100,10 +101,7 @@ async function resolveIngredients(
   });
 }
 
-export async function carbonation(
-  auth: AuthContext,
-  input: CarbonationRequest,
-): Promise<CarbonationResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
+export async function carbonation(auth: AuthContext, input: CarbonationRequest): Promise<CarbonationAnswer> {
   const container = await resolveContainer(auth, input);
   const result = computeCarbonation({
     ...input,
@@ -115,10 +113,7 @@ export async function carbonation(
   return { ...result, bottleFormat: container.bottleFormat };
 }
 
-export async function priming(
-  auth: AuthContext,
-  input: PrimingRequest,
-): Promise<PrimingResult & { bottleFormat: ResolvedContainer['bottleFormat'] }> {
+export async function priming(auth: AuthContext, input: PrimingRequest): Promise<PrimingAnswer> {
   const container = await resolveContainer(auth, input);
   if (input.sugarType === 'lactose') {
     throw badRequest('Lactose does not ferment, so it cannot carbonate a drink.', {

@@ -1,6 +1,6 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 
-import type { Ingredient as IngredientDtoShape } from '@/lib/api/types';
+import type { Ingredient as IngredientDtoShape, IngredientChangeEntry, IngredientPage } from '@/lib/api/types';
 import type { Measure } from '@/lib/ingredients';
 import { type HouseIngredientInput, type IngredientSearch, per100g } from '@/lib/schemas/ingredients';
 import { Ingredient, IngredientChange, sequelize, transaction, User } from '@/server/db';
@@ -126,10 +126,7 @@ export function ftsQuery(q: string): string | null {
  * Ingredients a brewery may use: the dataset and its own house ingredients (house first), ranked by relevance
  * (BM25 over the names) when there is a query, by name otherwise.
  */
-export async function searchIngredients(
-  auth: AuthContext,
-  search: IngredientSearch,
-): Promise<{ items: IngredientDto[]; total: number; page: number; pageSize: number }> {
+export async function searchIngredients(auth: AuthContext, search: IngredientSearch): Promise<IngredientPage> {
   const match = ftsQuery(search.q);
   const filters = [
     '(i.organisation_id IS NULL OR i.organisation_id = :org)',
@@ -192,7 +189,7 @@ async function ownHouseIngredient(auth: AuthContext, id: number, transaction?: T
   return found;
 }
 
-export async function ingredientChanges(auth: AuthContext, id: number) {
+export async function ingredientChanges(auth: AuthContext, id: number): Promise<IngredientChangeEntry[]> {
   const ingredient = await visibleIngredient(auth, id);
   const rows = await IngredientChange.findAll({
     where: { ingredientId: ingredient.id },

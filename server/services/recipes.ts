@@ -1,6 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 
-import type { RecipeDetail, RecipeSummary } from '@/lib/api/types';
+import type { RecipeDetail, RecipeSummary, TastingEntry, VersionEntry } from '@/lib/api/types';
 import { SUGARS } from '@/lib/chemistry/sugars';
 import { type Change, diffRecipes } from '@/lib/recipes/diff';
 import { evaluateRecipe, type IngredientFacts, type RecipeEvaluation } from '@/lib/recipes/evaluate';
@@ -247,7 +247,7 @@ async function writeVersion(
   return found;
 }
 
-export async function listVersions(auth: AuthContext, id: number) {
+export async function listVersions(auth: AuthContext, id: number): Promise<VersionEntry[]> {
   const recipe = await ownRecipe(auth, id);
   const versions = await RecipeVersion.findAll({
     where: { recipeId: recipe.id },
@@ -355,7 +355,7 @@ export async function scale(
  * Records a tasting of the newest version. A sugar addition makes the next version; the tasting and that version are
  * written in one transaction, so neither exists without the other.
  */
-export async function addTasting(auth: AuthContext, id: number, input: TastingInput) {
+export async function addTasting(auth: AuthContext, id: number, input: TastingInput): Promise<TastingEntry[]> {
   const recipe = await getRecipe(auth, id);
   const tasted = recipe.currentVersion;
   await transaction(async (t) => {
@@ -384,7 +384,7 @@ export async function addTasting(auth: AuthContext, id: number, input: TastingIn
   return listTastings(auth, id);
 }
 
-export async function listTastings(auth: AuthContext, id: number) {
+export async function listTastings(auth: AuthContext, id: number): Promise<TastingEntry[]> {
   const recipe = await ownRecipe(auth, id);
   const rows = await Tasting.findAll({
     where: { recipeId: recipe.id },

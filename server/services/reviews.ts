@@ -1,5 +1,6 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 
+import type { ReviewTimeline } from '@/lib/api/types';
 import { rolesWith } from '@/lib/roles';
 import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '@/lib/schemas/reviews';
 import { Organisation, Recipe, RecipeReview, RecipeVersion, transaction, User } from '@/server/db';
@@ -46,7 +47,7 @@ async function lastAction(recipe: Recipe): Promise<RecipeReview | null> {
 
 const ownRecipe = (auth: AuthContext, id: number) => findOwnRecipe(auth, id, { active: true });
 
-export async function reviewTimeline(auth: AuthContext, id: number) {
+export async function reviewTimeline(auth: AuthContext, id: number): Promise<ReviewTimeline> {
   const recipe = await findOwnRecipe(auth, id);
   const events = await RecipeReview.findAll({
     where: { recipeId: id },
@@ -83,7 +84,7 @@ async function notify(
 }
 
 /** A developer (or owner) asks for the newest version to be approved for production. */
-export async function submit(auth: AuthContext, id: number, input: SubmitInput) {
+export async function submit(auth: AuthContext, id: number, input: SubmitInput): Promise<ReviewTimeline> {
   const recipe = await ownRecipe(auth, id);
   if (input.version !== recipe.currentVersion)
     throw wrongState(`Only the newest version (${recipe.currentVersion}) can be submitted.`);
@@ -163,7 +164,7 @@ function assertWaitingVersion(recipe: Recipe, version: number) {
  * An owner approves the submitted version. Nobody approves their own submission unless they are the brewery's
  * only active owner (recorded). A danger finding blocks approval unless the owner writes why they override it.
  */
-export async function approve(auth: AuthContext, id: number, input: ApproveInput) {
+export async function approve(auth: AuthContext, id: number, input: ApproveInput): Promise<ReviewTimeline> {
   const recipe = await ownRecipe(auth, id);
   assertWaitingVersion(recipe, input.version);
   const author = await submitter(recipe);
@@ -243,7 +244,7 @@ export async function approve(auth: AuthContext, id: number, input: ApproveInput
 }
 
 /** An owner returns the submitted version with the changes to make. */
-export async function returnForChanges(auth: AuthContext, id: number, input: ReturnInput) {
+export async function returnForChanges(auth: AuthContext, id: number, input: ReturnInput): Promise<ReviewTimeline> {
   const recipe = await ownRecipe(auth, id);
   assertWaitingVersion(recipe, input.version);
   const author = await submitter(recipe);
@@ -280,7 +281,7 @@ export async function returnForChanges(auth: AuthContext, id: number, input: Ret
 }
 
 /** An owner takes an approval back; production has no approved version until one is approved again. */
-export async function withdraw(auth: AuthContext, id: number, input: WithdrawInput) {
+export async function withdraw(auth: AuthContext, id: number, input: WithdrawInput): Promise<ReviewTimeline> {
   const recipe = await ownRecipe(auth, id);
   if (recipe.approvedVersion === null) throw wrongState('No version of this recipe is approved.');
   const version = recipe.approvedVersion;
