@@ -21,7 +21,17 @@ export const palette = {
   sky: '#245C8A', // 6.5:1 on paper: information
   skyTint: '#E2EDF6',
   white: '#FFFFFF',
-  focus: '#D98E04', // focus ring, 3:1 against bottle and paper
+  focus: '#D98E04', // focus ring, 3:1 against bottle and paper; the amber of the logo
+  linen: '#E4DED2', // card, table and chart hairlines
+  oat: '#EDE8DE', // dividers between rows
+  bottleLight: '#2F6A5F',
+  bottleLine: '#3B6A61',
+  mint: '#E8F0EC', // text on the rail
+  mintMuted: '#BFD3CC',
+  mintPale: '#D3E2DC',
+  sage: '#E6EFEC', // a chosen option's background
+  hawthornDeep: '#7E1C23',
+  umber: '#3D3422', // text on caution tints
 } as const;
 
 export const colors = {
@@ -44,8 +54,17 @@ export const colors = {
   infoTint: palette.skyTint,
   focus: palette.focus,
   rail: palette.bottle,
-  railText: '#E8F0EC',
-  railActive: '#2F6A5F',
+  railText: palette.mint,
+  railTextMuted: palette.mintMuted,
+  railLine: palette.bottleLine,
+  railActive: palette.bottleLight,
+  panelText: palette.mintPale,
+  hairline: palette.linen,
+  divider: palette.oat,
+  selected: palette.sage,
+  dangerStrong: palette.hawthornDeep,
+  textOnCaution: palette.umber,
+  brand: palette.focus,
 } as const;
 
 export const fonts = {
@@ -60,7 +79,10 @@ export const fontSize = {
   md: 17,
   lg: 20,
   xl: 24,
+  display: 26,
   xxl: 30,
+  /** The printed card's checkpoints: a little larger than body text, for reading at arm's length. */
+  lead: 18,
 } as const;
 
 export const space = {

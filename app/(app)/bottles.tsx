@@ -2,8 +2,8 @@ import { useState } from 'react';
 
 import { BottleFormatForm } from '@/components/bottles/BottleFormatForm';
 import { BottleFormatsTable } from '@/components/bottles/BottleFormatsTable';
-import { Cautions } from '@/components/calculations/Cautions';
 import { Banner, Button, Card, Loading, Screen } from '@/components/ui';
+import { Cautions } from '@/components/ui/calculations/Cautions';
 import {
   type BottleFormat,
   useBottleFormatsQuery,

@@ -1,6 +1,6 @@
-import { UnitToggle } from '@/components/calculations/UnitToggle';
 import { QuickCheck } from '@/components/quick-check/QuickCheck';
 import { Banner, Loading, Screen } from '@/components/ui';
+import { UnitToggle } from '@/components/ui/calculations/UnitToggle';
 import { useBottleFormatsQuery } from '@/lib/api/bottle-formats';
 import { useSessionQuery } from '@/lib/api/session';
 

@@ -7,7 +7,7 @@ import { RecipeCardView } from '@/components/print/RecipeCardView';
 import { Banner, Button, Loading } from '@/components/ui';
 import { cardQuery, useCardQuery } from '@/lib/api/recipes';
 import { env } from '@/lib/env';
-import { colors, space } from '@/lib/theme';
+import { colors, fontSize, space } from '@/lib/theme';
 
 /** The printable card of a recipe version at a batch size, outside the app's frame so that only the card prints. */
 export default function PrintCardScreen() {
@@ -55,5 +55,5 @@ const styles = StyleSheet.create({
   content: { padding: space.lg },
   inner: { width: '100%', maxWidth: 820, alignSelf: 'center', gap: space.lg },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
-  back: { color: colors.primary, textDecorationLine: 'underline', fontSize: 17 },
+  back: { color: colors.primary, textDecorationLine: 'underline', fontSize: fontSize.md },
 });

@@ -3,7 +3,7 @@ import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native'
 
 import { Logo } from '@/components/ui/Logo';
 import { Text } from '@/components/ui/Text';
-import { breakpoints, colors, fonts, radius, space } from '@/lib/theme';
+import { breakpoints, colors, fonts, fontSize, radius, space } from '@/lib/theme';
 
 /**
  * The frame of the signed-out pages: the form on a card, and on wide windows a panel saying what
@@ -45,15 +45,15 @@ const styles = StyleSheet.create({
   contentWide: { flexDirection: 'row', justifyContent: 'center', alignItems: 'center', gap: space.xxl * 2 },
   phoneLogo: { alignSelf: 'center' },
   panel: { width: 380, backgroundColor: colors.rail, borderRadius: radius.lg, padding: space.xxl, gap: space.lg },
-  panelTitle: { color: colors.railText, fontSize: 26, lineHeight: 32, fontFamily: fonts.bold },
-  panelText: { color: '#D3E2DC' },
+  panelTitle: { color: colors.railText, fontSize: fontSize.display, lineHeight: 32, fontFamily: fonts.bold },
+  panelText: { color: colors.panelText },
   card: {
     width: '100%',
     maxWidth: 460,
     backgroundColor: colors.surface,
     borderRadius: radius.lg,
     borderWidth: 1,
-    borderColor: '#E4DED2',
+    borderColor: colors.hairline,
     padding: space.xl,
     gap: space.lg,
   },

@@ -1,7 +1,7 @@
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { Button, FormField, FormStatus, Select, submitTo } from '@/components/ui';
+import { Button, FormField, FormNumberField, FormStatus, Select, submitTo } from '@/components/ui';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { check, parseNumber } from '@/lib/forms';
 import {
@@ -69,18 +69,13 @@ export function BottleFormatForm({ format, onSubmit, onCancel, error }: Props) {
           <FormField name="name" label="Name" />
           <View style={styles.row}>
             <View style={styles.cell}>
-              <FormField name="liquidMl" label="Liquid" suffix="mL" inputMode="decimal" />
+              <FormNumberField name="liquidMl" label="Liquid" unit="mL" />
             </View>
             <View style={styles.cell}>
-              <FormField name="headspaceMl" label="Headspace" suffix="mL" inputMode="decimal" />
+              <FormNumberField name="headspaceMl" label="Headspace" unit="mL" />
             </View>
             <View style={styles.cell}>
-              <FormField
-                name="maxWorkingPressureBar"
-                label="Maximum working pressure"
-                suffix="bar"
-                inputMode="decimal"
-              />
+              <FormNumberField name="maxWorkingPressureBar" label="Maximum working pressure" unit="bar" />
             </View>
           </View>
           <Select

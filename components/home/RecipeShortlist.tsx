@@ -1,13 +1,13 @@
 import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
-import { STATE_TONE } from '@/components/recipes/ReviewPanel';
 import { Badge, Card, SafetyBadge, Text } from '@/components/ui';
+import { STATE_TONE } from '@/components/ui/review-tone';
 import { type RecipeSummary, useRecipesQuery } from '@/lib/api/recipes';
 import type { Role } from '@/lib/roles';
 import { can } from '@/lib/roles';
 import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
-import { colors, fonts, space } from '@/lib/theme';
+import { colors, fonts, fontSize, space } from '@/lib/theme';
 
 const VIEW: Record<
   Role,
@@ -76,7 +76,7 @@ const styles = StyleSheet.create({
   link: {
     color: colors.primary,
     fontFamily: fonts.semibold,
-    fontSize: 17,
+    fontSize: fontSize.md,
     lineHeight: 24,
     textDecorationLine: 'underline',
   },

@@ -1,7 +1,7 @@
 import { Formik } from 'formik';
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
-import { Button, FormField, FormStatus, Segmented, Select, submitTo, Text } from '@/components/ui';
+import { Button, FormField, FormNumberField, FormStatus, Segmented, Select, submitTo, Text } from '@/components/ui';
 import type { Ingredient } from '@/lib/api/ingredients';
 import { check, parseNumber } from '@/lib/forms';
 import {
@@ -122,11 +122,10 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
             </Text>
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField
+                <FormNumberField
                   name="servingSize"
                   label="Serving size"
-                  suffix={values.servingUnit === 'ml' ? 'mL' : 'g'}
-                  inputMode="decimal"
+                  unit={values.servingUnit === 'ml' ? 'mL' : 'g'}
                 />
               </View>
               <View style={styles.cell}>
@@ -142,28 +141,28 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
               </View>
               {values.servingUnit === 'ml' ? (
                 <View style={styles.cell}>
-                  <FormField name="servingGrams" label="Grams per serving" suffix="g" inputMode="decimal" />
+                  <FormNumberField name="servingGrams" label="Grams per serving" unit="g" />
                 </View>
               ) : null}
             </View>
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField name="sugarsG" label="Total sugars per serving" suffix="g" inputMode="decimal" />
+                <FormNumberField name="sugarsG" label="Total sugars per serving" unit="g" />
               </View>
               <View style={styles.cell}>
-                <FormField name="carbohydrateG" label="Carbohydrate per serving" suffix="g" inputMode="decimal" />
+                <FormNumberField name="carbohydrateG" label="Carbohydrate per serving" unit="g" />
               </View>
               <View style={styles.cell}>
-                <FormField name="energyKcal" label="Energy per serving" suffix="kcal" inputMode="decimal" />
+                <FormNumberField name="energyKcal" label="Energy per serving" unit="kcal" />
               </View>
               <View style={styles.cell}>
-                <FormField name="fibreG" label="Fibre per serving" suffix="g" inputMode="decimal" />
+                <FormNumberField name="fibreG" label="Fibre per serving" unit="g" />
               </View>
               <View style={styles.cell}>
-                <FormField name="fatG" label="Fat per serving" suffix="g" inputMode="decimal" />
+                <FormNumberField name="fatG" label="Fat per serving" unit="g" />
               </View>
               <View style={styles.cell}>
-                <FormField name="proteinG" label="Protein per serving" suffix="g" inputMode="decimal" />
+                <FormNumberField name="proteinG" label="Protein per serving" unit="g" />
               </View>
             </View>
             {preview !== null && !errors.sugarsG ? (
@@ -171,27 +170,26 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
             ) : null}
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField
+                <FormNumberField
                   name="fermentableSharePct"
                   label="Share of sugars yeast can ferment"
-                  suffix="%"
-                  inputMode="decimal"
+                  unit="%"
+
                   hint="100 % for fruit sugars and sucrose; 0 % for lactose."
                 />
               </View>
               <View style={styles.cell}>
-                <FormField
+                <FormNumberField
                   name="steepSharePct"
                   label="Share reaching the liquid when steeped and strained"
-                  suffix="%"
-                  inputMode="decimal"
+                  unit="%"
                 />
               </View>
               <View style={styles.cell}>
-                <FormField
+                <FormNumberField
                   name="costPerKg"
                   label="Cost per kg"
-                  inputMode="decimal"
+
                   hint="Optional, in your currency."
                 />
               </View>

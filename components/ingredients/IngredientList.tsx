@@ -17,7 +17,7 @@ import {
 import { type Ingredient, useIngredientSearchQuery } from '@/lib/api/ingredients';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { CATEGORIES, type Category, CATEGORY_LABELS } from '@/lib/ingredients';
-import { colors, fonts, space } from '@/lib/theme';
+import { colors, fonts, fontSize, space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
 const PAGE_SIZE = 25;
@@ -123,7 +123,7 @@ const styles = StyleSheet.create({
   link: {
     color: colors.primary,
     fontFamily: fonts.semibold,
-    fontSize: 17,
+    fontSize: fontSize.md,
     lineHeight: 24,
     textDecorationLine: 'underline',
   },

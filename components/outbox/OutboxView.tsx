@@ -91,7 +91,7 @@ const styles = StyleSheet.create({
     padding: space.md,
     borderRadius: radius.md,
     borderWidth: 1,
-    borderColor: '#E4DED2',
+    borderColor: colors.hairline,
     backgroundColor: colors.surface,
   },
   itemOpen: { borderColor: colors.primary },

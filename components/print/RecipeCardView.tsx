@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Text } from '@/components/ui';
 import type { RecipeCard } from '@/lib/recipes/card';
-import { colors, fonts, space } from '@/lib/theme';
+import { colors, fonts, fontSize, space } from '@/lib/theme';
 
 const SAFETY_WORDS = { ok: 'OK', caution: 'CAUTION', danger: 'DANGER' } as const;
 
@@ -108,12 +108,12 @@ const styles = StyleSheet.create({
     gap: space.sm,
     borderRadius: 12,
     borderWidth: 1,
-    borderColor: '#E4DED2',
+    borderColor: colors.hairline,
   },
-  notApproved: { fontFamily: fonts.bold, color: colors.danger, fontSize: 20 },
+  notApproved: { fontFamily: fonts.bold, color: colors.danger, fontSize: fontSize.lg },
   section: { gap: space.xs, paddingTop: space.md },
   amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, flexWrap: 'wrap' },
-  amountValue: { fontFamily: fonts.bold, fontSize: 26, lineHeight: 32, minWidth: 130 },
-  amountName: { fontSize: 20, lineHeight: 26 },
-  checkpoint: { fontSize: 18, lineHeight: 32 },
+  amountValue: { fontFamily: fonts.bold, fontSize: fontSize.display, lineHeight: 32, minWidth: 130 },
+  amountName: { fontSize: fontSize.lg, lineHeight: 26 },
+  checkpoint: { fontSize: fontSize.lead, lineHeight: 32 },
 });

@@ -1,16 +1,14 @@
 import { useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { FindingList } from '@/components/calculations/FindingList';
-import { Banner, Button, Card, FormField, Select, Text } from '@/components/ui';
+import { Banner, Button, Card, FormNumberField, Select, Text } from '@/components/ui';
+import { FindingList } from '@/components/ui/calculations/FindingList';
 import { usePrimingQuery } from '@/lib/api/calculations';
-import { SUGARS } from '@/lib/chemistry/sugars';
+import { SUGAR_OPTIONS, SUGARS } from '@/lib/chemistry/sugars';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { type QuickCheckValues, toPrimingRequest } from '@/lib/quick-check';
 import { space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
-
-import { sugarOptions } from './QuickCheckInputs';
 
 /** "How much sugar for this fizz?": fills the sugar that reaches the target and shows the alcohol that follows. */
 export function PrimingHelper({ units }: { units: UnitSystem }) {
@@ -24,11 +22,11 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
     <Card title="Sugar for a target fizz">
       <View style={styles.row}>
         <View style={styles.cell}>
-          <FormField
+          <FormNumberField
             name="targetVolumes"
             label="Target carbonation"
-            suffix="volumes"
-            inputMode="decimal"
+            unit="volumes"
+
             hint="Kombucha often has 2.5 to 3 volumes: more fizz needs a bottle rated for it."
           />
         </View>
@@ -37,7 +35,7 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
         compact
         label="Sugar to use"
         value={values.primingSugar}
-        options={sugarOptions.filter((o) => o.value !== 'lactose')}
+        options={SUGAR_OPTIONS.filter((o) => o.value !== 'lactose')}
         onChange={(type) => setFieldValue('primingSugar', type)}
       />
       {errors.targetVolumes ? null : priming.isError ? <Banner tone="danger">{priming.error.message}</Banner> : null}

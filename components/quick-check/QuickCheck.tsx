@@ -2,8 +2,9 @@ import { Formik, setIn, useFormikContext } from 'formik';
 import { useEffect, useRef } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
-import { SummaryStrip } from '@/components/calculations/SummaryStrip';
 import { Banner, Card, Loading } from '@/components/ui';
+import { CarbonationResults } from '@/components/ui/calculations/CarbonationResults';
+import { SummaryStrip } from '@/components/ui/calculations/SummaryStrip';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { useCarbonationQuery } from '@/lib/api/calculations';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
@@ -20,7 +21,6 @@ import type { UnitSystem } from '@/lib/units';
 import { BrixCard } from './BrixCard';
 import { PrimingHelper } from './PrimingHelper';
 import { QuickCheckInputs } from './QuickCheckInputs';
-import { QuickCheckResults } from './QuickCheckResults';
 
 const TEMPERATURE_NAMES = ['Conditioning room', 'Cold store', 'Highest'];
 
@@ -124,7 +124,7 @@ function LiveResults({ units, limitPercent }: { units: UnitSystem; limitPercent:
       {!request ? (
         <Banner tone="caution">Some inputs need attention: these results are for the last valid values.</Banner>
       ) : null}
-      <QuickCheckResults
+      <CarbonationResults
         answer={answer.data}
         chart={chart.data}
         units={units}

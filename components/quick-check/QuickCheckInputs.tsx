@@ -1,23 +1,12 @@
 import { useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { Button, Card, FormField, Segmented, Select, Text } from '@/components/ui';
+import { Button, Card, FormNumberField, Segmented, Select, Text } from '@/components/ui';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
-import { SUGAR_TYPES, SUGARS } from '@/lib/chemistry/sugars';
+import { SUGAR_OPTIONS, SUGARS } from '@/lib/chemistry/sugars';
 import type { QuickCheckValues } from '@/lib/quick-check';
-import { space } from '@/lib/theme';
+import { colors, space } from '@/lib/theme';
 import { convertUnit, displayUnits, formatPressure, unitLabels, type UnitSystem } from '@/lib/units';
-
-const SHORT_SUGAR_LABELS: Record<(typeof SUGAR_TYPES)[number], string> = {
-  sucrose: 'Sucrose',
-  glucose: 'Glucose',
-  fructose: 'Fructose',
-  honey: 'Honey',
-  'maple-syrup': 'Maple syrup',
-  'agave-syrup': 'Agave syrup',
-  lactose: 'Lactose',
-};
-export const sugarOptions = SUGAR_TYPES.map((type) => ({ value: type, label: SHORT_SUGAR_LABELS[type] }));
 
 /** The inputs of the Quick check: the bottle, the sugar, the CO2 already in the base, the temperatures. */
 export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; units: UnitSystem }) {
@@ -60,24 +49,24 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
         ) : null}
         <View style={styles.row}>
           <View style={styles.cell}>
-            <FormField name="liquid" label="Liquid per bottle" suffix={volumeUnit} inputMode="decimal" />
+            <FormNumberField name="liquid" label="Liquid per bottle" unit={volumeUnit} />
           </View>
           <View style={styles.cell}>
-            <FormField
+            <FormNumberField
               name="headspace"
               label="Headspace"
-              suffix={volumeUnit}
-              inputMode="decimal"
+              unit={volumeUnit}
+
               hint="Gas space under the cap."
             />
           </View>
         </View>
         {chosen ? null : (
-          <FormField
+          <FormNumberField
             name="maxPressure"
             label="Maximum working pressure"
-            suffix={unitLabels[u.pressure]}
-            inputMode="decimal"
+            unit={unitLabels[u.pressure]}
+
             hint="From the bottle supplier's sheet. Leave empty if you do not know it."
           />
         )}
@@ -90,16 +79,15 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
               compact
               label={`Sugar ${index + 1}`}
               value={sugar.type}
-              options={sugarOptions}
+              options={SUGAR_OPTIONS}
               onChange={(type) => setFieldValue(`sugars.${index}.type`, type)}
             />
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField
+                <FormNumberField
                   name={`sugars.${index}.grams`}
                   label={`Grams of ${SUGARS[sugar.type].label.toLowerCase()}`}
-                  suffix="g"
-                  inputMode="decimal"
+                  unit="g"
                 />
               </View>
               {values.sugars.length > 1 ? (
@@ -140,22 +128,22 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
           ]}
         />
         {values.residualMode === 'volumes' ? (
-          <FormField name="residualVolumes" label="Residual CO2" suffix="volumes" inputMode="decimal" />
+          <FormNumberField name="residualVolumes" label="Residual CO2" unit="volumes" />
         ) : (
-          <FormField
+          <FormNumberField
             name="lastOpenTemp"
             label="Temperature when it was last open"
-            suffix={tempUnit}
-            inputMode="decimal"
+            unit={tempUnit}
+
             hint="Estimated as saturated with CO2 at that temperature."
           />
         )}
         <View style={styles.row}>
           <View style={styles.cell}>
-            <FormField name="sealedTemp" label="Temperature when capped" suffix={tempUnit} inputMode="decimal" />
+            <FormNumberField name="sealedTemp" label="Temperature when capped" unit={tempUnit} />
           </View>
           <View style={styles.cell}>
-            <FormField name="baseAbv" label="Alcohol already in the base" suffix="% ABV" inputMode="decimal" />
+            <FormNumberField name="baseAbv" label="Alcohol already in the base" unit="% ABV" />
           </View>
         </View>
       </Card>
@@ -163,17 +151,17 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
       <Card title="Temperatures the bottles will see">
         <View style={styles.row}>
           <View style={styles.cell}>
-            <FormField name="conditioningTemp" label="Conditioning room" suffix={tempUnit} inputMode="decimal" />
+            <FormNumberField name="conditioningTemp" label="Conditioning room" unit={tempUnit} />
           </View>
           <View style={styles.cell}>
-            <FormField name="coldTemp" label="Cold store" suffix={tempUnit} inputMode="decimal" />
+            <FormNumberField name="coldTemp" label="Cold store" unit={tempUnit} />
           </View>
           <View style={styles.cell}>
-            <FormField
+            <FormNumberField
               name="highestTemp"
               label="Highest it may meet"
-              suffix={tempUnit}
-              inputMode="decimal"
+              unit={tempUnit}
+
               hint="A hot van or shelf."
             />
           </View>
@@ -196,7 +184,7 @@ const styles = StyleSheet.create({
   column: { gap: space.lg },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-start' },
   cell: { flexGrow: 1, flexBasis: 150 },
-  sugar: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: '#EDE8DE' },
+  sugar: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },
   remove: { marginTop: 26 },
   left: { alignSelf: 'flex-start' },
 });

@@ -1,20 +1,30 @@
-import { Formik, useFormikContext } from 'formik';
+import { Formik, setNestedObjectValues, useFormikContext } from 'formik';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
-import { SummaryStrip } from '@/components/calculations/SummaryStrip';
-import { sugarOptions } from '@/components/quick-check/QuickCheckInputs';
-import { Badge, Banner, Button, Card, FormField, Loading, Segmented, Select, Text } from '@/components/ui';
+import {
+  Badge,
+  Banner,
+  Button,
+  Card,
+  FormField,
+  FormNumberField,
+  Loading,
+  Segmented,
+  Select,
+  Text,
+} from '@/components/ui';
+import { SummaryStrip } from '@/components/ui/calculations/SummaryStrip';
 import type { BottleFormat } from '@/lib/api/bottle-formats';
 import { usePrimingQuery } from '@/lib/api/calculations';
 import { ApiError } from '@/lib/api/client';
 import { type RecipeDetail, useRecipeEvaluationQuery } from '@/lib/api/recipes';
-import { SUGARS } from '@/lib/chemistry/sugars';
+import { SUGAR_OPTIONS, SUGARS } from '@/lib/chemistry/sugars';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { type RecipeFormValues, toContent, toFormValues } from '@/lib/recipes/form';
+import { formErrors, type RecipeFormValues, toContent, toFormValues } from '@/lib/recipes/form';
 import { processStages } from '@/lib/recipes/stages';
 import { targetAdvice } from '@/lib/recipes/target';
 import { AMOUNT_UNIT_LABELS, METHOD_LABELS, METHODS } from '@/lib/schemas/recipes';
-import { breakpoints, fonts, space } from '@/lib/theme';
+import { breakpoints, colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
 import { IngredientPicker } from './IngredientPicker';
@@ -43,15 +53,22 @@ export function RecipeEditor({ recipe, formats, units, limitPercent, canEdit, on
       initialValues={toFormValues(recipe.name, recipe.flavourNotes, recipe.content, recipe.ingredientNames)}
       enableReinitialize
       validate={(values) => toContent(values).errors}
-      onSubmit={async (values) => {
+      onSubmit={async (values, helpers) => {
         const { content } = toContent(values);
-        if (content)
-          await onSave({
-            name: values.name,
-            flavourNotes: values.flavourNotes,
-            content,
-            baseVersion: recipe.currentVersion,
-          }).catch(() => undefined);
+        if (!content) return;
+        await onSave({
+          name: values.name,
+          flavourNotes: values.flavourNotes,
+          content,
+          baseVersion: recipe.currentVersion,
+        }).catch((error: unknown) => {
+          // The server's field messages land on their fields, like every other form's; the banner says the rest.
+          if (error instanceof ApiError && Object.keys(error.fields).length > 0) {
+            const errors = formErrors(error.fields);
+            helpers.setErrors(errors as never);
+            helpers.setTouched(setNestedObjectValues(errors, true) as never, false);
+          }
+        });
       }}
     >
       <Layout
@@ -188,13 +205,13 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
             <FormField name="base.name" label="Base" />
           </View>
           <View style={styles.cell}>
-            <FormField name="base.residualSugarGPerL" label="Residual sugar" suffix="g/L" inputMode="decimal" />
+            <FormNumberField name="base.residualSugarGPerL" label="Residual sugar" unit="g/L" />
           </View>
           <View style={styles.cell}>
-            <FormField name="base.abvPercent" label="Alcohol" suffix="% ABV" inputMode="decimal" />
+            <FormNumberField name="base.abvPercent" label="Alcohol" unit="% ABV" />
           </View>
           <View style={styles.cell}>
-            <FormField name="base.ph" label="pH" inputMode="decimal" hint="4.2 or below before flavouring." />
+            <FormNumberField name="base.ph" label="pH" hint="4.2 or below before flavouring." />
           </View>
         </View>
         <Segmented
@@ -207,9 +224,9 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
           ]}
         />
         {values.base.residualMode === 'volumes' ? (
-          <FormField name="base.residualCo2Volumes" label="Residual CO2" suffix="volumes" inputMode="decimal" />
+          <FormNumberField name="base.residualCo2Volumes" label="Residual CO2" unit="volumes" />
         ) : (
-          <FormField name="base.lastOpenTempC" label="Temperature when last open" suffix="°C" inputMode="decimal" />
+          <FormNumberField name="base.lastOpenTempC" label="Temperature when last open" unit="°C" />
         )}
       </Card>
       <Card title="How the flavour goes in">
@@ -222,13 +239,13 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
         {steep ? (
           <View style={styles.row}>
             <View style={styles.cell}>
-              <FormField name="steepHours" label="Steep for" suffix="h" inputMode="decimal" />
+              <FormNumberField name="steepHours" label="Steep for" unit="h" />
             </View>
             <View style={styles.cell}>
-              <FormField name="steepTempC" label="Steep at" suffix="°C" inputMode="decimal" />
+              <FormNumberField name="steepTempC" label="Steep at" unit="°C" />
             </View>
             <View style={styles.cell}>
-              <FormField name="strainLossPct" label="Liquid lost when straining" suffix="%" inputMode="decimal" />
+              <FormNumberField name="strainLossPct" label="Liquid lost when straining" unit="%" />
             </View>
           </View>
         ) : (
@@ -238,16 +255,16 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
         )}
         <View style={styles.row}>
           <View style={styles.cell}>
-            <FormField name="carbonateHours" label="Carbonate for" suffix="h" inputMode="decimal" />
+            <FormNumberField name="carbonateHours" label="Carbonate for" unit="h" />
           </View>
           <View style={styles.cell}>
-            <FormField name="carbonateTempC" label="Carbonate at" suffix="°C" inputMode="decimal" />
+            <FormNumberField name="carbonateTempC" label="Carbonate at" unit="°C" />
           </View>
           <View style={styles.cell}>
-            <FormField name="coldStoreTempC" label="Cold store at" suffix="°C" inputMode="decimal" />
+            <FormNumberField name="coldStoreTempC" label="Cold store at" unit="°C" />
           </View>
           <View style={styles.cell}>
-            <FormField name="highestTempC" label="Highest it may meet" suffix="°C" inputMode="decimal" />
+            <FormNumberField name="highestTempC" label="Highest it may meet" unit="°C" />
           </View>
         </View>
       </Card>
@@ -260,7 +277,7 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
             <Text style={styles.lineName}>{line.name}</Text>
             <View style={styles.row}>
               <View style={styles.cell}>
-                <FormField name={`lines.${index}.amount`} label={`Amount of ${line.name}`} inputMode="decimal" />
+                <FormNumberField name={`lines.${index}.amount`} label={`Amount of ${line.name}`} />
               </View>
               <View style={styles.wideCell}>
                 <Select
@@ -276,12 +293,7 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
               </View>
               {steep ? (
                 <View style={styles.cell}>
-                  <FormField
-                    name={`lines.${index}.extractionPct`}
-                    label="Sugar reaching the liquid"
-                    suffix="%"
-                    inputMode="decimal"
-                  />
+                  <FormNumberField name={`lines.${index}.extractionPct`} label="Sugar reaching the liquid" unit="%" />
                 </View>
               ) : null}
             </View>
@@ -326,20 +338,19 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
               compact
               label={`Sugar ${index + 1}`}
               value={sugar.type}
-              options={sugarOptions}
+              options={SUGAR_OPTIONS}
               onChange={(type) => setFieldValue(`sugars.${index}.type`, type)}
             />
-            <FormField
+            <FormNumberField
               name={`sugars.${index}.gPerL`}
               label={`${SUGARS[sugar.type].label} per litre`}
-              suffix="g/L"
-              inputMode="decimal"
+              unit="g/L"
             />
           </View>
         ))}
         <View style={styles.row}>
           <View style={styles.cell}>
-            <FormField name="targetVolumes" label="Target carbonation" suffix="volumes" inputMode="decimal" />
+            <FormNumberField name="targetVolumes" label="Target carbonation" unit="volumes" />
           </View>
           <View style={styles.cell}>
             <FormField name="sweetnessNote" label="Sweetness note" placeholder="e.g. off-dry" />
@@ -432,7 +443,7 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-start' },
   cell: { flexGrow: 1, flexBasis: 150 },
   wideCell: { flexGrow: 2, flexBasis: 280 },
-  line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: '#EDE8DE' },
+  line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },
   lineName: { fontFamily: fonts.semibold },
   left: { alignSelf: 'flex-start' },
   saveBar: {

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
-import { QuickCheckResults } from '@/components/quick-check/QuickCheckResults';
 import { Badge, Card, Text } from '@/components/ui';
+import { CarbonationResults } from '@/components/ui/calculations/CarbonationResults';
 import type { RecipeEvaluation } from '@/lib/api/recipes';
 import { ALLERGEN_LABELS } from '@/lib/ingredients';
 import { space } from '@/lib/theme';
@@ -54,7 +54,7 @@ export function RecipeResults({
           </Text>
         ))}
       </Card>
-      <QuickCheckResults
+      <CarbonationResults
         answer={{ ...evaluation.carbonation, bottleFormat: null }}
         chart={undefined}
         units={units}

@@ -1,8 +1,9 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { FindingList } from '@/components/calculations/FindingList';
-import { Badge, Banner, Button, Card, FormStatus, Loading, Text, TextField, type Tone } from '@/components/ui';
+import { Badge, Banner, Button, Card, FormStatus, Loading, Text, TextField } from '@/components/ui';
+import { FindingList } from '@/components/ui/calculations/FindingList';
+import { STATE_TONE } from '@/components/ui/review-tone';
 import {
   useApproveMutation,
   useRecipeDiffQuery,
@@ -16,15 +17,9 @@ import {
 } from '@/lib/api/recipes';
 import type { Session } from '@/lib/api/types';
 import { can } from '@/lib/roles';
-import { REVIEW_STATE_LABELS, type ReviewState } from '@/lib/schemas/reviews';
+import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { space } from '@/lib/theme';
 
-export const STATE_TONE: Record<ReviewState, Tone> = {
-  draft: 'neutral',
-  submitted: 'caution',
-  approved: 'success',
-  returned: 'danger',
-};
 const ACTION_LABELS: Record<string, string> = {
   submitted: 'Submitted',
   approved: 'Approved',

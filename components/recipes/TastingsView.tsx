@@ -1,7 +1,17 @@
 import { Formik, useFormikContext } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { Banner, Button, Card, FormField, FormStatus, Segmented, submitTo, Text } from '@/components/ui';
+import {
+  Banner,
+  Button,
+  Card,
+  FormField,
+  FormNumberField,
+  FormStatus,
+  Segmented,
+  submitTo,
+  Text,
+} from '@/components/ui';
 import { useAddTastingMutation, useRecipeEvaluationQuery, useTastingsQuery } from '@/lib/api/recipes';
 import { check, parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
@@ -138,10 +148,10 @@ export function TastingsView({
                 {values.addSugar === 'yes' ? (
                   <View style={styles.row}>
                     <View style={styles.cell}>
-                      <FormField name="sugarGrams" label="Grams of sucrose" suffix="g" inputMode="decimal" />
+                      <FormNumberField name="sugarGrams" label="Grams of sucrose" unit="g" />
                     </View>
                     <View style={styles.cell}>
-                      <FormField name="sugarToMl" label="Into this much liquid" suffix="mL" inputMode="decimal" />
+                      <FormNumberField name="sugarToMl" label="Into this much liquid" unit="mL" />
                     </View>
                   </View>
                 ) : null}

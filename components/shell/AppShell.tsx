@@ -159,9 +159,9 @@ const styles = StyleSheet.create({
   },
   railItemActive: { backgroundColor: colors.railActive },
   railLabel: { color: colors.railText, fontFamily: fonts.semibold },
-  railFooter: { gap: space.xxs, borderTopWidth: 1, borderTopColor: '#3B6A61', paddingTop: space.md },
+  railFooter: { gap: space.xxs, borderTopWidth: 1, borderTopColor: colors.railLine, paddingTop: space.md },
   railUser: { color: colors.railText, fontFamily: fonts.semibold, paddingHorizontal: space.md },
-  railRole: { color: '#BFD3CC', fontSize: fontSize.sm, paddingHorizontal: space.md, marginBottom: space.sm },
+  railRole: { color: colors.railTextMuted, fontSize: fontSize.sm, paddingHorizontal: space.md, marginBottom: space.sm },
   wideContent: { flex: 1 },
   phoneRoot: { flex: 1, backgroundColor: colors.background },
   phoneHeader: {

@@ -1,7 +1,7 @@
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { Banner, Button, FormField, FormStatus, Segmented, submitTo, Text } from '@/components/ui';
+import { Banner, Button, FormField, FormNumberField, FormStatus, Segmented, submitTo, Text } from '@/components/ui';
 import type { Organisation } from '@/lib/api/types';
 import { check, parseNumber } from '@/lib/forms';
 import { type OrganisationInput, organisationSchema } from '@/lib/schemas/team';
@@ -49,25 +49,25 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
           <FormStatus error={error} />
           {saved && !dirty ? <Banner tone="success">Brewery settings saved.</Banner> : null}
           <FormField name="name" label="Brewery name" />
-          <FormField
+          <FormNumberField
             name="abvLimitPercent"
             label="Alcohol limit for non-alcoholic drinks"
-            suffix="% ABV"
-            inputMode="decimal"
+            unit="% ABV"
+
             hint="0.5 % ABV in the US. Other countries draw the line elsewhere: follow your local rules."
           />
-          <FormField
+          <FormNumberField
             name="warmestTempC"
             label="Warmest the bottles may meet"
-            suffix="°C"
-            inputMode="decimal"
+            unit="°C"
+
             hint="A closed car, a shop window, a summer delivery. Every pressure check includes this temperature, whatever else is asked."
           />
-          <FormField
+          <FormNumberField
             name="ratingSharePercent"
             label="Most sugar: share of the bottle rating"
-            suffix="%"
-            inputMode="decimal"
+            unit="%"
+
             hint="The sugar helpers never offer more than keeps the worst case at this share of the bottle's rating on the warmest day. 80 % leaves a margin for bottles that are weaker than rated."
           />
           <Segmented

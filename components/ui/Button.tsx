@@ -97,7 +97,7 @@ const styles = StyleSheet.create({
 const pressedStyles = StyleSheet.create({
   primary: { backgroundColor: colors.primaryPressed },
   secondary: { backgroundColor: colors.surfaceMuted },
-  danger: { backgroundColor: '#7E1C23' },
+  danger: { backgroundColor: colors.dangerStrong },
   quiet: { backgroundColor: colors.surfaceMuted },
 });
 

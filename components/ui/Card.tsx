@@ -34,7 +34,7 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
     borderRadius: radius.lg,
     borderWidth: 1,
-    borderColor: '#E4DED2',
+    borderColor: colors.hairline,
     padding: space.lg,
     gap: space.md,
   },

@@ -21,7 +21,7 @@ export function LogoMark({ size = 36, inverse = false }: { size?: number; invers
       importantForAccessibility="no-hide-descendants"
     >
       <Path d="M19 4h10v8c6 3 9 8 9 14v14a4 4 0 0 1-4 4H14a4 4 0 0 1-4-4V26c0-6 3-11 9-14V4z" fill={body} />
-      <Rect x="10" y="27" width="28" height="7" fill="#D98E04" />
+      <Rect x="10" y="27" width="28" height="7" fill={colors.brand} />
       <Circle cx="20" cy="38" r="2.2" fill={hole} />
       <Circle cx="27" cy="31" r="1.8" fill={hole} />
       <Circle cx="22" cy="22" r="1.4" fill={hole} />

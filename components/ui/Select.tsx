@@ -92,7 +92,7 @@ const styles = StyleSheet.create({
     flexBasis: 140,
   },
   compact: { flexGrow: 0, flexBasis: 'auto', paddingHorizontal: space.md },
-  selected: { borderColor: colors.primary, backgroundColor: '#E6EFEC' },
+  selected: { borderColor: colors.primary, backgroundColor: colors.selected },
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 1 } as ViewStyle,
   disabled: { opacity: 0.55 },
   dot: { width: 18, height: 18, borderRadius: 9, borderWidth: 2, borderColor: colors.textMuted },

@@ -67,14 +67,14 @@ export function Table<Row>({ columns, rows, rowKey, label }: Props<Row>) {
 }
 
 const styles = StyleSheet.create({
-  table: { borderWidth: 1, borderColor: '#E4DED2', borderRadius: radius.md, overflow: 'hidden' },
-  row: { flexDirection: 'row', borderTopWidth: 1, borderTopColor: '#EDE8DE', alignItems: 'center' },
+  table: { borderWidth: 1, borderColor: colors.hairline, borderRadius: radius.md, overflow: 'hidden' },
+  row: { flexDirection: 'row', borderTopWidth: 1, borderTopColor: colors.divider, alignItems: 'center' },
   headRow: { backgroundColor: colors.surfaceMuted, borderTopWidth: 0 },
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, minHeight: 48, justifyContent: 'center' },
   list: { gap: space.sm },
   card: {
     borderWidth: 1,
-    borderColor: '#E4DED2',
+    borderColor: colors.hairline,
     borderRadius: radius.md,
     padding: space.md,
     gap: space.xs,

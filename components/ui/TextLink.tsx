@@ -1,7 +1,7 @@
 import { type Href, Link } from 'expo-router';
 import { StyleSheet } from 'react-native';
 
-import { colors, fonts } from '@/lib/theme';
+import { colors, fonts, fontSize } from '@/lib/theme';
 
 /** An inline link to a page of the app; a real anchor on the web. */
 export function TextLink({ href, children }: { href: Href; children: string }) {
@@ -16,7 +16,7 @@ const styles = StyleSheet.create({
   link: {
     color: colors.primary,
     fontFamily: fonts.semibold,
-    fontSize: 17,
+    fontSize: fontSize.md,
     lineHeight: 24,
     textDecorationLine: 'underline',
   },

@@ -4,6 +4,7 @@ export { Button } from './Button';
 export { Card } from './Card';
 export { EmptyState } from './EmptyState';
 export { FormField } from './FormField';
+export { FormNumberField } from './FormNumberField';
 export { submitTo } from './forms';
 export { FormStatus } from './FormStatus';
 export { Icon, type IconName } from './Icon';

@@ -1,6 +1,5 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 
-import type { CarbonationResult, PrimingResult } from '@/lib/chemistry/carbonation';
 import type { BrixRequest, CarbonationRequest, PrimingRequest } from '@/lib/schemas/calculations';
 
 import { api } from './client';

@@ -11,7 +11,7 @@ import type {
   ScaleRequest,
   TastingInput,
 } from '@/lib/schemas/recipes';
-import type { ApproveInput, ReturnInput, ReviewState, SubmitInput, WithdrawInput } from '@/lib/schemas/reviews';
+import type { ApproveInput, ReturnInput, SubmitInput, WithdrawInput } from '@/lib/schemas/reviews';
 
 import { api } from './client';
 import { staleTimes } from './query-client';

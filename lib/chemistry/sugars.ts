@@ -91,3 +91,15 @@ export const SUGARS: Record<SugarType, SugarInfo> = {
 export function co2GramsPerGram(molarMass: number, co2PerMole: number, mCo2: number): number {
   return (co2PerMole * mCo2) / molarMass;
 }
+
+/** The sugars as a picker lists them: short names, in the order of SUGAR_TYPES. */
+export const SHORT_SUGAR_LABELS: Record<SugarType, string> = {
+  sucrose: 'Sucrose',
+  glucose: 'Glucose',
+  fructose: 'Fructose',
+  honey: 'Honey',
+  'maple-syrup': 'Maple syrup',
+  'agave-syrup': 'Agave syrup',
+  lactose: 'Lactose',
+};
+export const SUGAR_OPTIONS = SUGAR_TYPES.map((type) => ({ value: type, label: SHORT_SUGAR_LABELS[type] }));

@@ -1,8 +1,9 @@
 import { setIn } from 'formik';
+import * as yup from 'yup';
 
 import type { SugarType } from '@/lib/chemistry/sugars';
 import { check, parseNumber } from '@/lib/forms';
-import { type Method, type RecipeContent, recipeContentSchema } from '@/lib/schemas/recipes';
+import { type Method, type RecipeContent, recipeContentSchema, recipeHeaderFields } from '@/lib/schemas/recipes';
 
 /** The designer's form: text as typed, one field per number of the recipe. */
 export interface RecipeFormValues {
@@ -136,10 +137,21 @@ function formPath(path: string): string {
 }
 
 /** The form as recipe content, checked with the schema the server uses; errors shaped for formik. */
+const headerSchema = yup.object(recipeHeaderFields);
+
 export function toContent(values: RecipeFormValues): { content?: RecipeContent; errors: Record<string, unknown> } {
   const { value, errors } = check(recipeContentSchema, candidate(values));
+  const header = check(headerSchema, { name: values.name, flavourNotes: values.flavourNotes });
+  return { content: value, errors: formErrors({ ...errors, ...header.errors }) };
+}
+
+/**
+ * Messages by schema path (the form's own check, or the server's 400: `content.lines[0].amount`, `name`) shaped for
+ * formik, so that each lands on the field the person typed into.
+ */
+export function formErrors(fields: Record<string, string>): Record<string, unknown> {
   let shaped: Record<string, unknown> = {};
-  for (const [path, message] of Object.entries(errors)) shaped = setIn(shaped, formPath(path), message);
-  if (values.name.trim().length < 2) shaped = setIn(shaped, 'name', 'Name the recipe (at least 2 characters).');
-  return { content: value, errors: shaped };
+  for (const [path, message] of Object.entries(fields))
+    shaped = setIn(shaped, formPath(path.replace(/^content\./, '')), message);
+  return shaped;
 }

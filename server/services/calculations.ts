@@ -2,13 +2,7 @@ import { Op } from 'sequelize';
 
 import type { CarbonationAnswer, PrimingAnswer } from '@/lib/api/types';
 import { brixToSpecificGravity, brixToSugarGPerL, READING_CAUTION, specificGravityToBrix } from '@/lib/chemistry/brix';
-import {
-  type CarbonationResult,
-  computeCarbonation,
-  computePriming,
-  type IngredientSugar,
-  type PrimingResult,
-} from '@/lib/chemistry/carbonation';
+import { computeCarbonation, computePriming, type IngredientSugar } from '@/lib/chemistry/carbonation';
 import { ingredientContribution } from '@/lib/recipes/ingredient-sugar';
 import type { BrixRequest, CarbonationRequest, PrimingRequest } from '@/lib/schemas/calculations';
 import { Ingredient } from '@/server/db';

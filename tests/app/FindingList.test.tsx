@@ -1,4 +1,4 @@
-import { FindingList } from '@/components/calculations/FindingList';
+import { FindingList } from '@/components/ui/calculations/FindingList';
 import { computeCarbonation } from '@/lib/chemistry/carbonation';
 import { render, screen } from '@/tests/test-utils';
 

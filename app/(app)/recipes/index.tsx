@@ -2,7 +2,6 @@ import { Link, useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet } from 'react-native';
 
-import { STATE_TONE } from '@/components/recipes/ReviewPanel';
 import {
   Badge,
   Banner,
@@ -17,13 +16,14 @@ import {
   Table,
   TextField,
 } from '@/components/ui';
+import { STATE_TONE } from '@/components/ui/review-tone';
 import { type RecipeSummary, useRecipesQuery } from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { can } from '@/lib/roles';
 import type { RecipeListFilter } from '@/lib/schemas/recipes';
 import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
-import { colors, fonts } from '@/lib/theme';
+import { colors, fonts, fontSize } from '@/lib/theme';
 
 export default function RecipesScreen() {
   const router = useRouter();
@@ -106,7 +106,7 @@ const styles = StyleSheet.create({
   link: {
     color: colors.primary,
     fontFamily: fonts.semibold,
-    fontSize: 17,
+    fontSize: fontSize.md,
     lineHeight: 24,
     textDecorationLine: 'underline',
   },

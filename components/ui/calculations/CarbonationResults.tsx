@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 
-import { Cautions } from '@/components/calculations/Cautions';
-import { FindingList } from '@/components/calculations/FindingList';
-import { PressureChart } from '@/components/calculations/PressureChart';
 import { Card, type Column, Table, Text } from '@/components/ui';
+import { Cautions } from '@/components/ui/calculations/Cautions';
+import { FindingList } from '@/components/ui/calculations/FindingList';
+import { PressureChart } from '@/components/ui/calculations/PressureChart';
 import type { CarbonationAnswer } from '@/lib/api/calculations';
 import { ratingLevel } from '@/lib/chemistry/carbonation';
 import { WARM_DAY_NAME } from '@/lib/recipes/evaluate';
@@ -31,7 +31,7 @@ type Row = {
 };
 
 /** What a Quick check answers: sugar, fizz, alcohol, pressure at each temperature, findings and cautions. */
-export function QuickCheckResults({ answer, chart, units, limitPercent, temperatureNames }: Props) {
+export function CarbonationResults({ answer, chart, units, limitPercent, temperatureNames }: Props) {
   const { sugar, cases } = answer;
   const chosen = answer;
   const rating = answer.bottleFormat?.maxWorkingPressureBar ?? answerRating(answer);

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Banner, Text } from '@/components/ui';
 import { SAFETY_CAUTIONS } from '@/lib/chemistry/cautions';
-import { space } from '@/lib/theme';
+import { colors, space } from '@/lib/theme';
 
 /** The standing cautions, shown wherever pressure numbers are. */
 export function Cautions() {
@@ -21,5 +21,5 @@ export function Cautions() {
 
 const styles = StyleSheet.create({
   list: { gap: space.xxs },
-  item: { color: '#3D3422' },
+  item: { color: colors.textOnCaution },
 });

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Badge, Text } from '@/components/ui';
 import type { CarbonationResult } from '@/lib/chemistry/carbonation';
-import { colors, radius, space } from '@/lib/theme';
+import { colors, fontSize, radius, space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
 
 /**
@@ -44,5 +44,5 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderColor: colors.border,
   },
-  text: { flex: 1, fontSize: 15, lineHeight: 20 },
+  text: { flex: 1, fontSize: fontSize.sm, lineHeight: 20 },
 });

@@ -68,7 +68,7 @@ export function PressureChart({ worst, expected, ratingBar, units }: Props) {
                 x2={MARGIN.left + plotW}
                 y1={y(v)}
                 y2={y(v)}
-                stroke="#E4DED2"
+                stroke={colors.hairline}
                 strokeWidth={1}
               />
             ))}
