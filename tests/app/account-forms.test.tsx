@@ -31,13 +31,11 @@ describe('SignUpForm', () => {
 
 describe('ForgotPasswordForm', () => {
   it('puts the server’s message on the address', async () => {
-    const onSubmit = jest
-      .fn()
-      .mockRejectedValue(
-        new ApiError(400, 'invalid_input', 'One field needs attention.', {
-          email: 'This address cannot receive mail.',
-        }),
-      );
+    const onSubmit = jest.fn().mockRejectedValue(
+      new ApiError(400, 'invalid_input', 'One field needs attention.', {
+        email: 'This address cannot receive mail.',
+      }),
+    );
     render(<ForgotPasswordForm onSubmit={onSubmit} error={null} />);
     fireEvent.changeText(screen.getByLabelText('E-mail'), 'someone@brewery.test');
     fireEvent.press(screen.getByRole('button', { name: 'Send reset link' }));
