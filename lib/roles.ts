@@ -37,6 +37,14 @@ export const CAPABILITIES = {
   'brewery.settings': ['owner'],
   /** Read the brewery's invitation and review mail in the outbox, beside one's own. */
   'outbox.brewery': ['owner'],
+  /** See the brewery's batches, production and trial, and trace supplier lots. */
+  'batches.read': ['owner', 'developer', 'brewer'],
+  /** Start and run production batches of approved versions: readings, steps, lots, deviations. */
+  'batches.run': ['owner', 'brewer'],
+  /** Start and run trial batches of any version (never releasable). */
+  'batches.trial': ['owner', 'developer'],
+  /** Release, hold or discard a batch. */
+  'batches.decide': ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Capability = keyof typeof CAPABILITIES;

@@ -16,6 +16,7 @@ import { healthRouter } from './routes/health';
 import { attachmentsRouter, ingredientsRouter } from './routes/ingredients';
 import { outboxRouter } from './routes/outbox';
 import { organisationRouter, profileRouter } from './routes/profile';
+import { batchesRouter } from './routes/batches';
 import { recipesRouter } from './routes/recipes';
 import { teamRouter } from './routes/team';
 import { webApp } from './web';
@@ -34,6 +35,7 @@ export function apiRouter(): Router {
   api.use('/ingredients', ingredientsRouter);
   api.use('/attachments', attachmentsRouter);
   api.use('/recipes', recipesRouter);
+  api.use('/batches', batchesRouter);
   if (config.benchRoutes) api.use('/bench', benchRouter);
   return api;
 }

@@ -9,6 +9,12 @@ import { config } from './config';
 import { logger } from './logger';
 import { migrations } from './migrations';
 import { Attachment } from './models/attachment';
+import { Batch } from './models/batch';
+import { BatchDecision } from './models/batch-decision';
+import { BatchDeviation } from './models/batch-deviation';
+import { BatchIngredientLot } from './models/batch-ingredient-lot';
+import { BatchReading } from './models/batch-reading';
+import { BatchStepSignoff } from './models/batch-step-signoff';
 import { BottleFormat } from './models/bottle-format';
 import { Ingredient } from './models/ingredient';
 import { IngredientChange } from './models/ingredient-change';
@@ -28,6 +34,12 @@ import { forgetCachedUser } from './services/sessions';
 
 export {
   Attachment,
+  Batch,
+  BatchDecision,
+  BatchDeviation,
+  BatchIngredientLot,
+  BatchReading,
+  BatchStepSignoff,
   BottleFormat,
   Ingredient,
   IngredientChange,
@@ -121,6 +133,12 @@ for (const model of [
   RecipeVersion,
   Tasting,
   RecipeReview,
+  Batch,
+  BatchReading,
+  BatchStepSignoff,
+  BatchIngredientLot,
+  BatchDeviation,
+  BatchDecision,
 ])
   model.initModel(sequelize);
 
@@ -147,6 +165,22 @@ Recipe.hasMany(Tasting, { foreignKey: 'recipeId', as: 'tastings' });
 Tasting.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Recipe.hasMany(RecipeReview, { foreignKey: 'recipeId', as: 'reviews' });
 RecipeReview.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Organisation.hasMany(Batch, { foreignKey: 'organisationId', as: 'batches' });
+Recipe.hasMany(Batch, { foreignKey: 'recipeId', as: 'batches' });
+Batch.belongsTo(Recipe, { foreignKey: 'recipeId', as: 'recipe' });
+Batch.belongsTo(User, { foreignKey: 'startedById', as: 'startedBy' });
+Attachment.belongsTo(BatchReading, { foreignKey: 'batchReadingId', as: 'reading' });
+BatchReading.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+BatchStepSignoff.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+BatchIngredientLot.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+BatchDeviation.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+BatchDecision.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Batch.hasMany(BatchReading, { foreignKey: 'batchId', as: 'readings' });
+Batch.hasMany(BatchStepSignoff, { foreignKey: 'batchId', as: 'signoffs' });
+Batch.hasMany(BatchIngredientLot, { foreignKey: 'batchId', as: 'ingredientLots' });
+BatchIngredientLot.belongsTo(Batch, { foreignKey: 'batchId', as: 'batch' });
+Batch.hasMany(BatchDeviation, { foreignKey: 'batchId', as: 'deviations' });
+Batch.hasMany(BatchDecision, { foreignKey: 'batchId', as: 'decisions' });
 
 // Any change to a user row (role, active, password) must reach the sign-in check at once.
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));

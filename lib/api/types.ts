@@ -229,3 +229,97 @@ export interface BrixAnswer {
   sugarGPerL: number;
   caution: string;
 }
+
+// Batches: the floor's records. One model for the screen, the record PDF and the API.
+
+export interface BatchSummary {
+  id: number;
+  lotCode: string;
+  trial: boolean;
+  state: import('@/lib/schemas/batches').BatchState;
+  recipeId: number;
+  recipeName: string;
+  version: number;
+  batch: { kind: import('@/lib/schemas/recipes').BatchKind; value: number };
+  bottles: number;
+  startedBy: string | null;
+  startedAt: string;
+}
+
+export interface BatchReadingEntry {
+  id: number;
+  kind: import('@/lib/schemas/batches').ReadingKind;
+  value: number;
+  tempC: number | null;
+  stage: import('@/lib/schemas/batches').Stage;
+  source: 'in-house' | 'lab' | null;
+  takenAt: string;
+  note: string;
+  check: { level: 'ok' | 'caution' | 'danger'; message: string; predictedGaugeBar?: number };
+  correctsId: number | null;
+  by: string | null;
+  reports: Attachment[];
+}
+
+export interface BatchStepEntry {
+  number: number;
+  text: string;
+  signedOff: { by: string | null; at: string; note: string } | null;
+}
+
+export interface BatchIngredientLotEntry {
+  id: number;
+  ingredientId: number | null;
+  ingredientName: string;
+  supplier: string;
+  supplierLot: string;
+  quantity: string;
+  quantityValue: number;
+  quantityUnit: 'g' | 'L';
+  correctsId: number | null;
+  by: string | null;
+  at: string;
+}
+
+export interface BatchDeviationEntry {
+  id: number;
+  whatHappened: string;
+  actionTaken: string;
+  closesReadingId: number | null;
+  correctsId: number | null;
+  by: string | null;
+  at: string;
+}
+
+export interface BatchDecisionEntry {
+  id: number;
+  decision: import('@/lib/schemas/batches').Decision;
+  note: string;
+  overrideReason: string | null;
+  by: string | null;
+  at: string;
+}
+
+export interface BatchDetail extends BatchSummary {
+  card: import('@/lib/recipes/card').RecipeCard;
+  facts: import('@/lib/batches/checks').BatchFacts;
+  readings: BatchReadingEntry[];
+  steps: BatchStepEntry[];
+  ingredientLots: BatchIngredientLotEntry[];
+  deviations: BatchDeviationEntry[];
+  decisions: BatchDecisionEntry[];
+  /** Danger readings nothing has answered yet: release needs an override reason while any stands. */
+  standingDangers: number[];
+}
+
+export interface BatchPage {
+  items: BatchSummary[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface TraceHit {
+  batch: BatchSummary;
+  lot: BatchIngredientLotEntry;
+}

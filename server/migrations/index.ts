@@ -12,6 +12,7 @@ import * as alcoholLicence from './0009-alcohol-licence';
 import * as tastingVersions from './0010-tasting-versions';
 import * as ratingShare from './0011-rating-share';
 import * as dropRecipeStatus from './0012-drop-recipe-status';
+import * as batches from './0013-batches';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -32,4 +33,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0010-tasting-versions', ...tastingVersions },
   { name: '0011-rating-share', ...ratingShare },
   { name: '0012-drop-recipe-status', ...dropRecipeStatus },
+  { name: '0013-batches', ...batches },
 ];

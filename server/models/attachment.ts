@@ -11,11 +11,13 @@ import {
 import type { Ingredient } from './ingredient';
 import type { Organisation } from './organisation';
 
-/** A file attached to a house ingredient: its bytes are in the uploads folder under a generated name. */
+/** A file attached to a house ingredient (or to a batch's ABV reading): its bytes are in the uploads folder under a generated name. */
 export class Attachment extends Model<InferAttributes<Attachment>, InferCreationAttributes<Attachment>> {
   declare id: CreationOptional<number>;
   declare organisationId: ForeignKey<Organisation['id']>;
-  declare ingredientId: ForeignKey<Ingredient['id']>;
+  declare ingredientId: ForeignKey<Ingredient['id'] | null>;
+  /** A lab's report on an ABV reading, when the file belongs to a batch rather than an ingredient. */
+  declare batchReadingId: CreationOptional<number | null>;
   declare uploadedById: number | null;
   declare storedName: string;
   declare originalName: string;
@@ -29,6 +31,7 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
       {
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         uploadedById: { type: DataTypes.INTEGER, allowNull: true },
+        batchReadingId: { type: DataTypes.INTEGER, allowNull: true },
         storedName: { type: DataTypes.STRING(80), allowNull: false, unique: true },
         originalName: { type: DataTypes.STRING(200), allowNull: false },
         mimeType: { type: DataTypes.STRING(40), allowNull: false },

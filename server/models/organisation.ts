@@ -19,6 +19,8 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
   declare warmestTempC: CreationOptional<number>;
   /** The share of a bottle's rating the most sugar may reach at the warm check, % (80 by default). */
   declare ratingSharePercent: CreationOptional<number>;
+  /** Printed at the start of every lot code, e.g. WCD in WCD-261202-02. */
+  declare lotPrefix: CreationOptional<string>;
   /** Declared by an owner: the brewery is licensed to make alcoholic beverages, so versions at or over the limit may be approved. */
   declare licensedForAlcohol: CreationOptional<boolean>;
   declare licenceDeclaredById: CreationOptional<number | null>;
@@ -33,6 +35,7 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
         name: { type: DataTypes.STRING(80), allowNull: false },
         abvLimitPercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
         warmestTempC: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_WARMEST_TEMP_C },
+        lotPrefix: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'LOT' },
         ratingSharePercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_RATING_SHARE * 100 },
         licensedForAlcohol: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         licenceDeclaredById: { type: DataTypes.INTEGER, allowNull: true },

@@ -1,10 +1,9 @@
 import { type RequestHandler, Router } from 'express';
-import multer from 'multer';
 
 import { idParam } from '@/lib/schemas/common';
 import { copyIngredientSchema, houseIngredientSchema, ingredientSearchSchema } from '@/lib/schemas/ingredients';
-import { config } from '@/server/config';
 import { allow, authOf } from '@/server/middleware/access';
+import { receiveFile } from '@/server/middleware/upload';
 import { validate } from '@/server/middleware/validate';
 import * as attachments from '@/server/services/attachments';
 import * as ingredients from '@/server/services/ingredients';
@@ -74,28 +73,6 @@ ingredientsRouter.post(
     res.json(await ingredients.setHouseIngredientArchived(authOf(res), params.id, false));
   }),
 );
-
-/**
- * One file in the field "file" and nothing much else: every part, field and header is bounded, so a request of
- * hundreds of large text fields is refused before it fills memory.
- */
-const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: {
-    fileSize: config.uploadMaxBytes,
-    files: 1,
-    fields: 5,
-    fieldSize: 8 * 1024,
-    fieldNameSize: 100,
-    parts: 6,
-    headerPairs: 50,
-  },
-});
-
-/** Multer's and busboy's errors (limits, a truncated body, no boundary) are the sender's: never a 500. */
-const receiveFile: RequestHandler = (req, res, next) => {
-  upload.single('file')(req, res, (error: unknown) => next(error ? attachments.uploadError(error) : undefined));
-};
 
 ingredientsRouter.get(
   '/:id/attachments',

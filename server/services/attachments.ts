@@ -24,7 +24,7 @@ export function sniffFileType(buffer: Buffer): { mime: string; ext: string } | n
 
 export type AttachmentDto = Attachment;
 
-const toDto = (a: AttachmentRow & { uploadedBy?: User | null }): AttachmentDto => ({
+export const toAttachmentDto = (a: AttachmentRow & { uploadedBy?: User | null }): AttachmentDto => ({
   id: a.id,
   name: a.originalName,
   mimeType: a.mimeType,
@@ -42,6 +42,18 @@ export async function addAttachment(
 ): Promise<AttachmentDto> {
   const ingredient = await visibleIngredient(auth, ingredientId);
   if (ingredient.organisationId === null) throw forbidden('Files can be attached to house ingredients only.');
+  return storeFile(auth, { ingredientId: ingredient.id }, file);
+}
+
+/**
+ * Keeps a file for what it belongs to (a house ingredient, or a batch's ABV reading): checked by its content, stored
+ * under a generated name, counted against the brewery's quota in the same write transaction as its row.
+ */
+export async function storeFile(
+  auth: AuthContext,
+  owner: { ingredientId?: number; batchReadingId?: number },
+  file: { buffer: Buffer; originalname: string } | undefined,
+): Promise<AttachmentDto> {
   if (!file) throw badRequest('Choose a file to attach.', { file: 'Choose a file to attach.' });
   const type = sniffFileType(file.buffer);
   if (!type)
@@ -66,7 +78,8 @@ export async function addAttachment(
       return AttachmentRow.create(
         {
           organisationId: auth.organisationId,
-          ingredientId: ingredient.id,
+          ingredientId: owner.ingredientId ?? null,
+          batchReadingId: owner.batchReadingId ?? null,
           uploadedById: auth.userId,
           storedName,
           originalName,
@@ -76,7 +89,7 @@ export async function addAttachment(
         { transaction: t },
       );
     });
-    return toDto(await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }));
+    return toAttachmentDto(await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }));
   } catch (error) {
     await fs.promises.rm(filePath, { force: true });
     throw error;
@@ -122,6 +135,9 @@ export async function deleteAttachment(auth: AuthContext, id: number): Promise<v
       transaction: t,
     });
     if (!attachment) throw notFound('No such file.');
+    if (attachment.batchReadingId !== null) {
+      throw new HttpError(409, 'record_kept', 'A lab report is part of the batch record and is kept. Record a correction instead.');
+    }
     await attachment.destroy({ transaction: t });
     return attachment.storedName;
   });
@@ -153,7 +169,7 @@ export async function listAttachments(auth: AuthContext, ingredientId: number): 
     include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }],
     order: [['id', 'DESC']],
   });
-  return rows.map(toDto);
+  return rows.map(toAttachmentDto);
 }
 
 /** The file for a member of the brewery that owns it; anyone else is told it does not exist. */

@@ -8,7 +8,7 @@ import { notFound } from '@/server/errors';
 import type { AuthContext } from './sessions';
 
 /** Kinds of message an owner reads for the whole brewery; everything else only its addressee reads. */
-const BREWERY_KINDS = ['invitation', 'review'];
+const BREWERY_KINDS = ['invitation', 'review', 'batch'];
 
 /**
  * Which stored messages a reader may see. Under `npm run dev` (outbox open) everything, as a local mail catcher
