@@ -20,6 +20,8 @@ export interface Organisation {
   warmestTempC: number;
   /** The share of a bottle's rating the most sugar may reach at the warm check, %. */
   ratingSharePercent: number;
+  /** Printed at the start of every lot code. */
+  lotPrefix: string;
   /** Declared by an owner: licensed to make alcoholic beverages (versions at or over the limit may then be approved). */
   licensedForAlcohol: boolean;
 }

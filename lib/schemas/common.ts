@@ -40,3 +40,11 @@ export const token = () =>
 export const idParam = yup.object({
   id: yup.number().integer('Not a valid id.').positive('Not a valid id.').required('An id is required.'),
 });
+
+/** The brewery's prefix for lot codes: letters and digits, as printed on labels. */
+export const lotPrefixField = () =>
+  yup
+    .string()
+    .trim()
+    .uppercase()
+    .matches(/^[A-Z0-9]{1,8}$/, 'Use 1 to 8 letters or digits for the lot prefix.');

@@ -3,7 +3,7 @@ import * as yup from 'yup';
 import { type Role, ROLES } from '@/lib/roles';
 import { UNIT_SYSTEMS, type UnitSystem } from '@/lib/units';
 
-import { email, password, personName } from './common';
+import { email, lotPrefixField, password, personName } from './common';
 import { numberField } from './numbers';
 
 const role = () =>
@@ -51,6 +51,7 @@ export const organisationSchema = yup.object({
     unit: '%',
   }).optional(),
   licensedForAlcohol: yup.boolean().strict().optional(),
+  lotPrefix: lotPrefixField().optional(),
 });
 export type OrganisationInput = yup.InferType<typeof organisationSchema>;
 

@@ -89,7 +89,9 @@ export async function storeFile(
         { transaction: t },
       );
     });
-    return toAttachmentDto(await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }));
+    return toAttachmentDto(
+      await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }),
+    );
   } catch (error) {
     await fs.promises.rm(filePath, { force: true });
     throw error;
@@ -136,7 +138,11 @@ export async function deleteAttachment(auth: AuthContext, id: number): Promise<v
     });
     if (!attachment) throw notFound('No such file.');
     if (attachment.batchReadingId !== null) {
-      throw new HttpError(409, 'record_kept', 'A lab report is part of the batch record and is kept. Record a correction instead.');
+      throw new HttpError(
+        409,
+        'record_kept',
+        'A lab report is part of the batch record and is kept. Record a correction instead.',
+      );
     }
     await attachment.destroy({ transaction: t });
     return attachment.storedName;

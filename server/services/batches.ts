@@ -37,8 +37,8 @@ import {
   User,
 } from '@/server/db';
 import { badRequest, forbidden, HttpError, notFound } from '@/server/errors';
-import { batchDangerMail, batchWaitingMail } from '@/server/mail/templates';
 import { mailer } from '@/server/mail/mailer';
+import { batchDangerMail, batchWaitingMail } from '@/server/mail/templates';
 
 import { storeFile, toAttachmentDto } from './attachments';
 import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
@@ -84,10 +84,17 @@ async function ownBatch(auth: AuthContext, id: number, t?: Transaction): Promise
 /** Who may record on a batch: production batches are the floor's (owners, brewers), trials the developers'. */
 function assertCanRun(auth: AuthContext, batch: Batch): void {
   if (!can(auth.role, batch.trial ? 'batches.trial' : 'batches.run')) {
-    throw forbidden(batch.trial ? 'Trial batches are run by owners and recipe developers.' : 'Production batches are run by owners and brewers.');
+    throw forbidden(
+      batch.trial
+        ? 'Trial batches are run by owners and recipe developers.'
+        : 'Production batches are run by owners and brewers.',
+    );
   }
   if (batch.state === 'released' || batch.state === 'discarded') {
-    throw conflict('batch_closed', `This batch is ${batch.state}: its record is closed. Record a deviation on a new batch if something comes up.`);
+    throw conflict(
+      'batch_closed',
+      `This batch is ${batch.state}: its record is closed. Record a deviation on a new batch if something comes up.`,
+    );
   }
 }
 
@@ -97,7 +104,11 @@ async function nextLotCode(organisationId: number, t: Transaction): Promise<stri
   const now = new Date();
   const day = `${String(now.getUTCFullYear()).slice(2)}${String(now.getUTCMonth() + 1).padStart(2, '0')}${String(now.getUTCDate()).padStart(2, '0')}`;
   const stem = `${organisation?.lotPrefix ?? 'LOT'}-${day}-`;
-  const today = await Batch.findAll({ where: { organisationId, lotCode: { [Op.like]: `${stem}%` } }, attributes: ['lotCode'], transaction: t });
+  const today = await Batch.findAll({
+    where: { organisationId, lotCode: { [Op.like]: `${stem}%` } },
+    attributes: ['lotCode'],
+    transaction: t,
+  });
   const highest = today.reduce((max, b) => Math.max(max, Number(b.lotCode.slice(stem.length)) || 0), 0);
   return `${stem}${String(highest + 1).padStart(2, '0')}`;
 }
@@ -108,7 +119,11 @@ async function nextLotCode(organisationId: number, t: Transaction): Promise<stri
  */
 export async function startBatch(auth: AuthContext, input: StartBatchInput): Promise<BatchDetail> {
   if (!can(auth.role, input.trial ? 'batches.trial' : 'batches.run')) {
-    throw forbidden(input.trial ? 'Trial batches are started by owners and recipe developers.' : 'Production batches are started by owners and brewers.');
+    throw forbidden(
+      input.trial
+        ? 'Trial batches are started by owners and recipe developers.'
+        : 'Production batches are started by owners and brewers.',
+    );
   }
   const recipe = await findOwnRecipe(auth, input.recipeId, { active: true });
   if (input.version < 1 || input.version > recipe.currentVersion) {
@@ -130,7 +145,8 @@ export async function startBatch(auth: AuthContext, input: StartBatchInput): Pro
     cachedAbvLimit(auth.organisationId),
     cachedWarmestTemp(auth.organisationId),
   ]);
-  if (!format) throw badRequest('The recipe’s bottle format is missing.', { recipeId: 'Its bottle format no longer exists.' });
+  if (!format)
+    throw badRequest('The recipe’s bottle format is missing.', { recipeId: 'Its bottle format no longer exists.' });
   const facts: BatchFacts = {
     liquidMl: format.liquidMl,
     headspaceMl: format.headspaceMl,
@@ -174,22 +190,34 @@ export async function getBatch(auth: AuthContext, id: number): Promise<BatchDeta
     BatchDecision.findAll({ where: { batchId: id }, include: [who], order }),
   ]);
   const reports = readings.length
-    ? await Attachment.findAll({ where: { batchReadingId: readings.map((r) => r.id), organisationId: auth.organisationId }, include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] })
+    ? await Attachment.findAll({
+        where: { batchReadingId: readings.map((r) => r.id), organisationId: auth.organisationId },
+        include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }],
+      })
     : [];
   const byStep = new Map(signoffs.map((s) => [s.stepNumber, s]));
   return {
     ...toSummary(batch, batch.recipe?.name ?? ''),
     card: batch.frozen.card,
     facts: batch.frozen.facts,
-    readings: readings.map((r) => toReadingEntry(r, reports.filter((a) => a.batchReadingId === r.id).map(toAttachmentDto))),
+    readings: readings.map((r) =>
+      toReadingEntry(r, reports.filter((a) => a.batchReadingId === r.id).map(toAttachmentDto)),
+    ),
     steps: batch.frozen.card.steps.map((text, i) => {
       const s = byStep.get(i + 1);
-      return { number: i + 1, text, signedOff: s ? { by: name(s.user), at: s.createdAt.toISOString(), note: s.note } : null };
+      return {
+        number: i + 1,
+        text,
+        signedOff: s ? { by: name(s.user), at: s.createdAt.toISOString(), note: s.note } : null,
+      };
     }),
     ingredientLots: lots.map(toLotEntry),
     deviations: deviations.map(toDeviationEntry),
     decisions: decisions.map(toDecisionEntry),
-    standingDangers: standingDangers(readings, deviations.map((d) => d.closesReadingId)),
+    standingDangers: standingDangers(
+      readings,
+      deviations.map((d) => d.closesReadingId),
+    ),
   };
 }
 
@@ -203,7 +231,11 @@ function toReadingEntry(r: BatchReading, reports: AttachmentDto[]): BatchReading
     source: r.source,
     takenAt: r.takenAt.toISOString(),
     note: r.note,
-    check: { level: r.level, message: r.message, ...(r.predictedGaugeBar !== null ? { predictedGaugeBar: r.predictedGaugeBar } : {}) },
+    check: {
+      level: r.level,
+      message: r.message,
+      ...(r.predictedGaugeBar !== null ? { predictedGaugeBar: r.predictedGaugeBar } : {}),
+    },
     correctsId: r.correctsId,
     by: name(r.user),
     reports,
@@ -260,18 +292,35 @@ export async function listBatches(auth: AuthContext, query: BatchListQuery): Pro
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   });
-  return { items: rows.map((b) => toSummary(b, b.recipe?.name ?? '')), total: count, page: query.page, pageSize: query.pageSize };
+  return {
+    items: rows.map((b) => toSummary(b, b.recipe?.name ?? '')),
+    total: count,
+    page: query.page,
+    pageSize: query.pageSize,
+  };
 }
 
 async function ownersToTell(organisationId: number, exceptUserId: number): Promise<User[]> {
   return User.findAll({
-    where: { organisationId, role: [...rolesWith('batches.decide')], active: true, notifyReviews: true, id: { [Op.ne]: exceptUserId } },
+    where: {
+      organisationId,
+      role: [...rolesWith('batches.decide')],
+      active: true,
+      notifyReviews: true,
+      id: { [Op.ne]: exceptUserId },
+    },
   });
 }
 
 async function tell(auth: AuthContext, mail: { subject: string; text: string; html: string }): Promise<void> {
   for (const owner of await ownersToTell(auth.organisationId, auth.userId)) {
-    await mailer.send({ ...mail, to: owner.email, kind: 'batch', organisationId: auth.organisationId, userId: owner.id });
+    await mailer.send({
+      ...mail,
+      to: owner.email,
+      kind: 'batch',
+      organisationId: auth.organisationId,
+      userId: owner.id,
+    });
   }
 }
 
@@ -281,7 +330,10 @@ export async function addReading(auth: AuthContext, id: number, input: ReadingIn
   assertCanRun(auth, batch);
   const check = checkReading({ kind: input.kind, value: input.value, tempC: input.tempC }, batch.frozen.facts);
   const reading = await transaction(async (t) => {
-    if (input.correctsId && !(await BatchReading.count({ where: { id: input.correctsId, batchId: id }, transaction: t }))) {
+    if (
+      input.correctsId &&
+      !(await BatchReading.count({ where: { id: input.correctsId, batchId: id }, transaction: t }))
+    ) {
       throw badRequest('No such reading on this batch.', { correctsId: 'No such reading on this batch.' });
     }
     const created = await BatchReading.create(
@@ -304,7 +356,13 @@ export async function addReading(auth: AuthContext, id: number, input: ReadingIn
     );
     if (input.kind === 'abv' && check.level === 'danger' && batch.state !== 'held') {
       await BatchDecision.create(
-        { batchId: id, decision: 'held', note: `Held when ${input.value} % ABV was recorded: at or over the alcohol limit.`, overrideReason: null, userId: auth.userId },
+        {
+          batchId: id,
+          decision: 'held',
+          note: `Held when ${input.value} % ABV was recorded: at or over the alcohol limit.`,
+          overrideReason: null,
+          userId: auth.userId,
+        },
         { transaction: t },
       );
       await Batch.update({ state: 'held' }, { where: { id }, transaction: t });
@@ -313,7 +371,16 @@ export async function addReading(auth: AuthContext, id: number, input: ReadingIn
   });
   if (check.level === 'danger') {
     const by = (await User.findByPk(auth.userId, { attributes: ['name'] }))?.name ?? 'Someone';
-    await tell(auth, batchDangerMail({ lotCode: batch.lotCode, recipeName: batch.recipe?.name ?? '', message: check.message, by, batchId: id }));
+    await tell(
+      auth,
+      batchDangerMail({
+        lotCode: batch.lotCode,
+        recipeName: batch.recipe?.name ?? '',
+        message: check.message,
+        by,
+        batchId: id,
+      }),
+    );
   }
   await reading.reload({ include: [{ model: User, as: 'user', attributes: ['name'] }] });
   return toReadingEntry(reading, []);
@@ -330,11 +397,17 @@ export async function addLabReport(
   assertCanRun(auth, batch);
   const reading = await BatchReading.findOne({ where: { id: readingId, batchId: id } });
   if (!reading) throw notFound('No such reading on this batch.');
-  if (reading.kind !== 'abv') throw badRequest('Reports go with ABV readings.', { file: 'Attach lab reports to an ABV reading.' });
+  if (reading.kind !== 'abv')
+    throw badRequest('Reports go with ABV readings.', { file: 'Attach lab reports to an ABV reading.' });
   return storeFile(auth, { batchReadingId: reading.id }, file);
 }
 
-export async function signOffStep(auth: AuthContext, id: number, stepNumber: number, note: string): Promise<BatchDetail> {
+export async function signOffStep(
+  auth: AuthContext,
+  id: number,
+  stepNumber: number,
+  note: string,
+): Promise<BatchDetail> {
   const batch = await ownBatch(auth, id);
   assertCanRun(auth, batch);
   const steps = batch.frozen.card.steps;
@@ -346,23 +419,39 @@ export async function signOffStep(auth: AuthContext, id: number, stepNumber: num
     await BatchStepSignoff.create({ batchId: id, stepNumber, note, userId: auth.userId }, { transaction: t });
     const signed = await BatchStepSignoff.count({ where: { batchId: id }, transaction: t });
     if (signed === steps.length) {
-      const [moved] = await Batch.update({ state: 'awaiting-decision' }, { where: { id, state: 'in-progress' }, transaction: t });
+      const [moved] = await Batch.update(
+        { state: 'awaiting-decision' },
+        { where: { id, state: 'in-progress' }, transaction: t },
+      );
       return moved === 1;
     }
     return false;
   });
-  if (nowWaiting && !batch.trial) await tell(auth, batchWaitingMail({ lotCode: batch.lotCode, recipeName: batch.recipe?.name ?? '', batchId: id }));
+  if (nowWaiting && !batch.trial)
+    await tell(auth, batchWaitingMail({ lotCode: batch.lotCode, recipeName: batch.recipe?.name ?? '', batchId: id }));
   return getBatch(auth, id);
 }
 
-export async function addIngredientLot(auth: AuthContext, id: number, input: IngredientLotInput): Promise<BatchIngredientLotEntry> {
+export async function addIngredientLot(
+  auth: AuthContext,
+  id: number,
+  input: IngredientLotInput,
+): Promise<BatchIngredientLotEntry> {
   const batch = await ownBatch(auth, id);
   assertCanRun(auth, batch);
   const quantity = parseQuantity(input.quantity);
-  if (!quantity) throw badRequest('One field needs attention.', { quantity: 'Write a quantity with its unit, e.g. "2 kg", "5 lb" or "3 gal".' });
-  const ingredientName = input.ingredientId ? (await visibleIngredient(auth, input.ingredientId)).name : input.ingredientName;
+  if (!quantity)
+    throw badRequest('One field needs attention.', {
+      quantity: 'Write a quantity with its unit, e.g. "2 kg", "5 lb" or "3 gal".',
+    });
+  const ingredientName = input.ingredientId
+    ? (await visibleIngredient(auth, input.ingredientId)).name
+    : input.ingredientName;
   const created = await transaction(async (t) => {
-    if (input.correctsId && !(await BatchIngredientLot.count({ where: { id: input.correctsId, batchId: id }, transaction: t }))) {
+    if (
+      input.correctsId &&
+      !(await BatchIngredientLot.count({ where: { id: input.correctsId, batchId: id }, transaction: t }))
+    ) {
       throw badRequest('No such lot on this batch.', { correctsId: 'No such lot on this batch.' });
     }
     return BatchIngredientLot.create(
@@ -389,14 +478,27 @@ export async function addDeviation(auth: AuthContext, id: number, input: Deviati
   const batch = await ownBatch(auth, id);
   assertCanRun(auth, batch);
   const created = await transaction(async (t) => {
-    if (input.closesReadingId && !(await BatchReading.count({ where: { id: input.closesReadingId, batchId: id }, transaction: t }))) {
+    if (
+      input.closesReadingId &&
+      !(await BatchReading.count({ where: { id: input.closesReadingId, batchId: id }, transaction: t }))
+    ) {
       throw badRequest('No such reading on this batch.', { closesReadingId: 'No such reading on this batch.' });
     }
-    if (input.correctsId && !(await BatchDeviation.count({ where: { id: input.correctsId, batchId: id }, transaction: t }))) {
+    if (
+      input.correctsId &&
+      !(await BatchDeviation.count({ where: { id: input.correctsId, batchId: id }, transaction: t }))
+    ) {
       throw badRequest('No such entry on this batch.', { correctsId: 'No such entry on this batch.' });
     }
     return BatchDeviation.create(
-      { batchId: id, whatHappened: input.whatHappened, actionTaken: input.actionTaken, closesReadingId: input.closesReadingId ?? null, correctsId: input.correctsId ?? null, userId: auth.userId },
+      {
+        batchId: id,
+        whatHappened: input.whatHappened,
+        actionTaken: input.actionTaken,
+        closesReadingId: input.closesReadingId ?? null,
+        correctsId: input.correctsId ?? null,
+        userId: auth.userId,
+      },
       { transaction: t },
     );
   });
@@ -411,14 +513,22 @@ export async function addDeviation(auth: AuthContext, id: number, input: Deviati
 export async function decide(auth: AuthContext, id: number, input: DecisionInput): Promise<BatchDetail> {
   await transaction(async (t) => {
     const batch = await ownBatch(auth, id, t);
-    if (batch.state === 'released' || batch.state === 'discarded') throw conflict('batch_closed', `This batch is already ${batch.state}.`);
+    if (batch.state === 'released' || batch.state === 'discarded')
+      throw conflict('batch_closed', `This batch is already ${batch.state}.`);
     if (input.decision === 'released') {
       if (batch.trial) throw conflict('trial_batch', 'A trial batch is never released for sale. Hold or discard it.');
       const [readings, deviations] = await Promise.all([
-        BatchReading.findAll({ where: { batchId: id }, attributes: ['id', 'kind', 'stage', 'level', 'correctsId'], transaction: t }),
+        BatchReading.findAll({
+          where: { batchId: id },
+          attributes: ['id', 'kind', 'stage', 'level', 'correctsId'],
+          transaction: t,
+        }),
         BatchDeviation.findAll({ where: { batchId: id }, attributes: ['closesReadingId'], transaction: t }),
       ]);
-      const standing = standingDangers(readings, deviations.map((d) => d.closesReadingId));
+      const standing = standingDangers(
+        readings,
+        deviations.map((d) => d.closesReadingId),
+      );
       if (standing.length > 0 && !input.overrideReason) {
         throw new HttpError(
           409,
@@ -429,7 +539,13 @@ export async function decide(auth: AuthContext, id: number, input: DecisionInput
       }
     }
     await BatchDecision.create(
-      { batchId: id, decision: input.decision, note: input.note, overrideReason: input.overrideReason || null, userId: auth.userId },
+      {
+        batchId: id,
+        decision: input.decision,
+        note: input.note,
+        overrideReason: input.overrideReason || null,
+        userId: auth.userId,
+      },
       { transaction: t },
     );
     await Batch.update({ state: input.decision }, { where: { id }, transaction: t });

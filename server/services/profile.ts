@@ -29,7 +29,11 @@ export async function updateOrganisation(
     input.licensedForAlcohol !== undefined && input.licensedForAlcohol !== organisation.licensedForAlcohol
       ? { licensedForAlcohol: input.licensedForAlcohol, licenceDeclaredById: userId, licenceDeclaredAt: new Date() }
       : {};
-  const given = { warmestTempC: input.warmestTempC, ratingSharePercent: input.ratingSharePercent };
+  const given = {
+    warmestTempC: input.warmestTempC,
+    ratingSharePercent: input.ratingSharePercent,
+    lotPrefix: input.lotPrefix,
+  };
   const settings = Object.fromEntries(Object.entries(given).filter(([, value]) => value !== undefined));
   await organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, ...settings, ...licence });
   return sessionFor(userId);

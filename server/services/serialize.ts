@@ -31,6 +31,7 @@ export function toSession(user: User, organisation: Organisation): Session {
       abvLimitPercent: organisation.abvLimitPercent,
       warmestTempC: organisation.warmestTempC,
       ratingSharePercent: organisation.ratingSharePercent,
+      lotPrefix: organisation.lotPrefix,
       licensedForAlcohol: organisation.licensedForAlcohol,
     },
   };

@@ -80,6 +80,7 @@ describe('BrewerySettingsForm', () => {
     abvLimitPercent: 0.5,
     warmestTempC: 35,
     ratingSharePercent: 80,
+    lotPrefix: 'LOT',
     licensedForAlcohol: false,
   };
 

@@ -14,17 +14,29 @@ describe('quantities as people write them', () => {
   });
 
   it('refuses what is not a quantity', () => {
-    for (const text of ['', 'two kilos', '5', '3 m', 'kg 2', '-2 kg', '0 g', '2 kg; drop table']) expect(parseQuantity(text)).toBeNull();
+    for (const text of ['', 'two kilos', '5', '3 m', 'kg 2', '-2 kg', '0 g', '2 kg; drop table'])
+      expect(parseQuantity(text)).toBeNull();
   });
 });
 
 // 500 mL with 25 mL of headspace, sealed at 20 °C, 2.5 volumes in the worst case: at 20 °C the gauge reads
 // 2.7397 bar by hand (tests/lib/chemistry/pressure.test.ts, Bunsen 0.878 from Lange's Handbook).
-const facts: BatchFacts = { liquidMl: 500, headspaceMl: 25, sealedTempC: 20, ratingBar: 6, worstTotalCo2Volumes: 2.5, abvLimitPercent: 0.5, warmDayTempC: 35 };
+const facts: BatchFacts = {
+  liquidMl: 500,
+  headspaceMl: 25,
+  sealedTempC: 20,
+  ratingBar: 6,
+  worstTotalCo2Volumes: 2.5,
+  abvLimitPercent: 0.5,
+  warmDayTempC: 35,
+};
 
 describe('readings checked as they are entered', () => {
   it('judges pH against 4.2: above is danger with what to do, from 4.0 caution', () => {
-    expect(checkReading({ kind: 'ph', value: 4.3 }, facts)).toMatchObject({ level: 'danger', message: expect.stringMatching(/Do not flavour; add starter and re-test/) });
+    expect(checkReading({ kind: 'ph', value: 4.3 }, facts)).toMatchObject({
+      level: 'danger',
+      message: expect.stringMatching(/Do not flavour; add starter and re-test/),
+    });
     expect(checkReading({ kind: 'ph', value: 4.2 }, facts).level).toBe('caution');
     expect(checkReading({ kind: 'ph', value: 4.0 }, facts).level).toBe('caution');
     expect(checkReading({ kind: 'ph', value: 3.1 }, facts).level).toBe('ok');
@@ -32,7 +44,10 @@ describe('readings checked as they are entered', () => {
 
   it('compares a test bottle with the rating (danger at it, caution from 75 %) and with the predicted worst case', () => {
     expect(Math.abs(predictedGaugeBar(facts, 20) - 2.7397) / 2.7397).toBeLessThan(0.005);
-    expect(checkReading({ kind: 'gauge-pressure', value: 6, tempC: 20 }, facts)).toMatchObject({ level: 'danger', message: expect.stringMatching(/chill every bottle now/) });
+    expect(checkReading({ kind: 'gauge-pressure', value: 6, tempC: 20 }, facts)).toMatchObject({
+      level: 'danger',
+      message: expect.stringMatching(/chill every bottle now/),
+    });
     // 75 % of 6 bar = 4.5 bar.
     expect(checkReading({ kind: 'gauge-pressure', value: 4.5, tempC: 20 }, facts).level).toBe('caution');
     const above = checkReading({ kind: 'gauge-pressure', value: 3.2, tempC: 20 }, facts);
@@ -42,7 +57,10 @@ describe('readings checked as they are entered', () => {
   });
 
   it('holds alcohol at the limit as danger (27 CFR 7.1: "0.5 percent or more")', () => {
-    expect(checkReading({ kind: 'abv', value: 0.5 }, facts)).toMatchObject({ level: 'danger', message: expect.stringMatching(/the batch is held/) });
+    expect(checkReading({ kind: 'abv', value: 0.5 }, facts)).toMatchObject({
+      level: 'danger',
+      message: expect.stringMatching(/the batch is held/),
+    });
     expect(checkReading({ kind: 'abv', value: 0.4 }, facts).level).toBe('caution');
     expect(checkReading({ kind: 'abv', value: 0.2 }, facts).level).toBe('ok');
   });
@@ -54,7 +72,13 @@ describe('readings checked as they are entered', () => {
 });
 
 describe('danger readings that stand', () => {
-  const r = (id: number, kind: string, stage: string, level: 'ok' | 'caution' | 'danger', correctsId: number | null = null) => ({ id, kind, stage, level, correctsId });
+  const r = (
+    id: number,
+    kind: string,
+    stage: string,
+    level: 'ok' | 'caution' | 'danger',
+    correctsId: number | null = null,
+  ) => ({ id, kind, stage, level, correctsId });
 
   it('stand until a later ok reading of the same kind and stage, a correction or a deviation answers them', () => {
     expect(standingDangers([r(1, 'ph', 'base', 'danger')], [])).toEqual([1]);

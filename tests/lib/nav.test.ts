@@ -10,6 +10,7 @@ const session = (role: Role): Session => ({
     abvLimitPercent: 0.5,
     warmestTempC: 35,
     ratingSharePercent: 80,
+    lotPrefix: 'LOT',
     licensedForAlcohol: false,
   },
 });

@@ -49,6 +49,7 @@ describe('POST /api/auth/sign-up', () => {
         abvLimitPercent: 0.5,
         warmestTempC: 35,
         ratingSharePercent: 80,
+        lotPrefix: 'LOT',
         licensedForAlcohol: false,
       },
     });
