@@ -17,6 +17,16 @@ export function standingDangers(readings: Reading[], closedByDeviation: (number 
   const ordered = [...readings].sort((a, b) => a.id - b.id);
   return ordered
     .filter((r) => r.level === 'danger' && !corrected.has(r.id) && !closed.has(r.id))
-    .filter((r) => !ordered.some((later) => later.id > r.id && later.kind === r.kind && later.stage === r.stage && later.level === 'ok' && !corrected.has(later.id)))
+    .filter(
+      (r) =>
+        !ordered.some(
+          (later) =>
+            later.id > r.id &&
+            later.kind === r.kind &&
+            later.stage === r.stage &&
+            later.level === 'ok' &&
+            !corrected.has(later.id),
+        ),
+    )
     .map((r) => r.id);
 }

@@ -141,7 +141,13 @@ export function reviewDecisionMail(input: {
   );
 }
 
-export function batchDangerMail(input: { lotCode: string; recipeName: string; message: string; by: string; batchId: number }): Rendered {
+export function batchDangerMail(input: {
+  lotCode: string;
+  recipeName: string;
+  message: string;
+  by: string;
+  batchId: number;
+}): Rendered {
   return render(
     `Danger reading: ${input.lotCode} (${input.recipeName})`,
     [`${input.by} recorded a danger reading on batch ${input.lotCode} of ${input.recipeName}.`, input.message],
@@ -153,7 +159,9 @@ export function batchDangerMail(input: { lotCode: string; recipeName: string; me
 export function batchWaitingMail(input: { lotCode: string; recipeName: string; batchId: number }): Rendered {
   return render(
     `Batch waits for your decision: ${input.lotCode}`,
-    [`Every step of batch ${input.lotCode} (${input.recipeName}) is signed off. It waits for an owner to release, hold or discard it.`],
+    [
+      `Every step of batch ${input.lotCode} (${input.recipeName}) is signed off. It waits for an owner to release, hold or discard it.`,
+    ],
     { url: `${config.appUrl}/batches/${input.batchId}`, label: 'Decide on the batch' },
     'You receive this because you decide on the brewery’s batches. Turn these e-mails off in Profile.',
   );

@@ -25,4 +25,3 @@ const upload = multer({
 export const receiveFile: RequestHandler = (req, res, next) => {
   upload.single('file')(req, res, (error: unknown) => next(error ? attachments.uploadError(error) : undefined));
 };
-

@@ -1,7 +1,10 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
 
 const id = { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true };
-const stamps = { created_at: { type: DataTypes.DATE, allowNull: false }, updated_at: { type: DataTypes.DATE, allowNull: false } };
+const stamps = {
+  created_at: { type: DataTypes.DATE, allowNull: false },
+  updated_at: { type: DataTypes.DATE, allowNull: false },
+};
 const ref = (model: string, allowNull = false, onDelete = 'CASCADE') => ({
   type: DataTypes.INTEGER,
   allowNull,
@@ -16,7 +19,11 @@ const person = () => ref('users', true, 'SET NULL');
  * report) instead of an ingredient; the table is rebuilt to make `ingredient_id` optional, which nothing references.
  */
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
-  await qi.addColumn('organisations', 'lot_prefix', { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'LOT' });
+  await qi.addColumn('organisations', 'lot_prefix', {
+    type: DataTypes.STRING(8),
+    allowNull: false,
+    defaultValue: 'LOT',
+  });
   await qi.createTable('batches', {
     id,
     organisation_id: ref('organisations'),
@@ -124,7 +131,14 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.sequelize.query('DELETE FROM attachments WHERE ingredient_id IS NULL');
   await qi.removeColumn('attachments', 'batch_reading_id');
-  for (const table of ['batch_decisions', 'batch_deviations', 'batch_ingredient_lots', 'batch_step_signoffs', 'batch_readings', 'batches']) {
+  for (const table of [
+    'batch_decisions',
+    'batch_deviations',
+    'batch_ingredient_lots',
+    'batch_step_signoffs',
+    'batch_readings',
+    'batches',
+  ]) {
     await qi.dropTable(table);
   }
   await qi.removeColumn('organisations', 'lot_prefix');

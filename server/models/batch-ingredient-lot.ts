@@ -13,7 +13,10 @@ import type { Batch } from './batch';
 import type { User } from './user';
 
 /** A supplier's lot used in a batch, with the quantity as written and as grams or litres. */
-export class BatchIngredientLot extends Model<InferAttributes<BatchIngredientLot>, InferCreationAttributes<BatchIngredientLot>> {
+export class BatchIngredientLot extends Model<
+  InferAttributes<BatchIngredientLot>,
+  InferCreationAttributes<BatchIngredientLot>
+> {
   declare id: CreationOptional<number>;
   declare batchId: ForeignKey<Batch['id']>;
   declare ingredientId: number | null;

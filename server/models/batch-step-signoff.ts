@@ -13,7 +13,10 @@ import type { Batch } from './batch';
 import type { User } from './user';
 
 /** A step of a batch signed off: by whom and when. Each step once. */
-export class BatchStepSignoff extends Model<InferAttributes<BatchStepSignoff>, InferCreationAttributes<BatchStepSignoff>> {
+export class BatchStepSignoff extends Model<
+  InferAttributes<BatchStepSignoff>,
+  InferCreationAttributes<BatchStepSignoff>
+> {
   declare id: CreationOptional<number>;
   declare batchId: ForeignKey<Batch['id']>;
   declare stepNumber: number;

@@ -11,8 +11,8 @@ import {
 
 import type { BatchFacts } from '@/lib/batches/checks';
 import type { RecipeCard } from '@/lib/recipes/card';
-import type { BatchKind } from '@/lib/schemas/recipes';
 import type { BatchState } from '@/lib/schemas/batches';
+import type { BatchKind } from '@/lib/schemas/recipes';
 
 import { jsonColumn } from './json-column';
 import type { Organisation } from './organisation';

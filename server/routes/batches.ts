@@ -17,8 +17,8 @@ import { idParam } from '@/lib/schemas/common';
 import { allow, authOf } from '@/server/middleware/access';
 import { receiveFile } from '@/server/middleware/upload';
 import { validate } from '@/server/middleware/validate';
-import * as batches from '@/server/services/batches';
 import { batchRecordPdf } from '@/server/services/batch-record';
+import * as batches from '@/server/services/batches';
 
 export const batchesRouter = Router();
 
