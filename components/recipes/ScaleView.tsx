@@ -12,6 +12,7 @@ import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
 import { SafetyNotice } from './SafetyNotice';
+import { StartBatch } from './StartBatch';
 
 type Kind = 'litres' | 'us-gallons' | 'bottles';
 type Row = Rounded & { name: string };
@@ -112,6 +113,7 @@ export function ScaleView({
           title={`Batch: ${scaled.data.bottles} bottles of ${scaled.data.bottleName}`}
           aside={<Text variant="small">version {scaled.data.version}</Text>}
         >
+          <StartBatch recipe={recipe} batch={valid ? { kind, value: value! } : null} />
           <Button
             label="Print card"
             variant="secondary"

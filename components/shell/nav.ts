@@ -3,7 +3,17 @@ import type { ServerInfo, Session } from '@/lib/api/types';
 import { can } from '@/lib/roles';
 
 export interface NavItem {
-  href: '/' | '/recipes' | '/quick-check' | '/ingredients' | '/bottles' | '/team' | '/outbox' | '/profile' | '/more';
+  href:
+    | '/'
+    | '/recipes'
+    | '/batches'
+    | '/quick-check'
+    | '/ingredients'
+    | '/bottles'
+    | '/team'
+    | '/outbox'
+    | '/profile'
+    | '/more';
   label: string;
   /** The word under the icon in the phone tab bar, where six labels share 390 px. */
   shortLabel: string;
@@ -16,6 +26,9 @@ export function navItemsFor(session: Session, serverInfo: ServerInfo | undefined
   const items: NavItem[] = [
     { href: '/', label: 'Home', shortLabel: 'Home', icon: 'home' },
     { href: '/recipes', label: 'Recipes', shortLabel: 'Recipes', icon: 'flask' },
+    ...(can(role, 'batches.read')
+      ? [{ href: '/batches' as const, label: 'Batches', shortLabel: 'Batches', icon: 'batch' as const }]
+      : []),
     { href: '/quick-check', label: 'Quick check', shortLabel: 'Check', icon: 'gauge' },
     { href: '/ingredients', label: 'Ingredients', shortLabel: 'Ingredients', icon: 'leaf' },
     { href: '/bottles', label: 'Bottles', shortLabel: 'Bottles', icon: 'bottle' },

@@ -1,6 +1,7 @@
 import Svg, { Circle, Path } from 'react-native-svg';
 
-export type IconName = 'home' | 'team' | 'mail' | 'person' | 'signOut' | 'gauge' | 'bottle' | 'leaf' | 'more' | 'flask';
+export type IconName =
+  'home' | 'team' | 'mail' | 'person' | 'signOut' | 'gauge' | 'bottle' | 'leaf' | 'more' | 'flask' | 'batch';
 
 /** Line icons drawn for Fizzwright on a 24-unit grid; decorative, so hidden from screen readers. */
 const paths: Record<IconName, { d: string[]; circles?: [number, number, number][] }> = {
@@ -25,6 +26,7 @@ const paths: Record<IconName, { d: string[]; circles?: [number, number, number][
       [19, 12, 1.6],
     ],
   },
+  batch: { d: ['M4 4h16v16H4z', 'M8 9h8', 'M8 13h8', 'M8 17h5'] },
   bottle: { d: ['M10 3h4v4c2 1 3 3 3 5v8a1 1 0 0 1-1 1H8a1 1 0 0 1-1-1v-8c0-2 1-4 3-5V3z', 'M7 13h10'] },
   gauge: {
     d: ['M4.5 17a8.5 8.5 0 1 1 15 0', 'M12 15l4-5', 'M7 12.5h1', 'M12 7.5v1', 'M16.5 12.5h1'],

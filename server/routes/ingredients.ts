@@ -1,4 +1,4 @@
-import { type RequestHandler, Router } from 'express';
+import { Router } from 'express';
 
 import { idParam } from '@/lib/schemas/common';
 import { copyIngredientSchema, houseIngredientSchema, ingredientSearchSchema } from '@/lib/schemas/ingredients';

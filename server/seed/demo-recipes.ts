@@ -5,6 +5,7 @@ import { logger } from '@/server/logger';
 import { addTasting, createRecipe, saveRecipe } from '@/server/services/recipes';
 
 import { DEMO_BREWERY } from './demo';
+import { seedDemoBatches } from './demo-batches';
 
 /** USDA SR25 record of each ingredient the demo recipes use (all in the starter library). */
 const RECORDS = {
@@ -201,6 +202,7 @@ export async function seedDemoRecipesIfEmpty(): Promise<boolean> {
     }
     for (const tasting of demo.tastings) await addTasting(auth, created.id, tasting);
   }
-  logger.info('demo recipes seeded');
+  await seedDemoBatches();
+  logger.info('demo recipes and batches seeded');
   return true;
 }

@@ -19,7 +19,7 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
   if ((await Organisation.count()) > 0) return false;
   const hashes = await Promise.all(DEMO_ACCOUNTS.map((account) => hashPassword(account.password)));
   await transaction(async (transaction) => {
-    const brewery = await Organisation.create({ name: DEMO_BREWERY }, { transaction });
+    const brewery = await Organisation.create({ name: DEMO_BREWERY, lotPrefix: 'WCD' }, { transaction });
     await seedStarterFormats(brewery.id, transaction);
     for (const [i, account] of DEMO_ACCOUNTS.entries()) {
       await User.create(

@@ -23,10 +23,11 @@ const info = (outbox: boolean, outboxOpen: boolean): ServerInfo => ({
 });
 
 describe('navItemsFor', () => {
-  it('shows Team only to owners', () => {
+  it('shows Team only to owners, and Batches to every role', () => {
     expect(navItemsFor(session('owner'), info(false, false)).map((i) => i.label)).toEqual([
       'Home',
       'Recipes',
+      'Batches',
       'Quick check',
       'Ingredients',
       'Bottles',
@@ -36,6 +37,7 @@ describe('navItemsFor', () => {
     expect(navItemsFor(session('brewer'), info(false, false)).map((i) => i.label)).toEqual([
       'Home',
       'Recipes',
+      'Batches',
       'Quick check',
       'Ingredients',
       'Bottles',
@@ -44,6 +46,7 @@ describe('navItemsFor', () => {
     expect(navItemsFor(session('developer'), info(false, false)).map((i) => i.label)).toEqual([
       'Home',
       'Recipes',
+      'Batches',
       'Quick check',
       'Ingredients',
       'Bottles',
@@ -60,7 +63,7 @@ describe('navItemsFor', () => {
 
 describe('isActive', () => {
   it('matches Home only on its own path and other items on their subpaths', () => {
-    const [home, , , , , team] = navItemsFor(session('owner'), undefined);
+    const [home, , , , , , team] = navItemsFor(session('owner'), undefined);
     expect(isActive(home, '/')).toBe(true);
     expect(isActive(home, '/team')).toBe(false);
     expect(isActive(team, '/team')).toBe(true);

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Svg, { Line, Path, Text as SvgText } from 'react-native-svg';
+import Svg, { Circle, Line, Path, Text as SvgText } from 'react-native-svg';
 
 import { Text } from '@/components/ui';
 import { colors, fonts, space } from '@/lib/theme';
@@ -16,6 +16,8 @@ interface Props {
   expected: Point[];
   ratingBar: number | null;
   units: UnitSystem;
+  /** Measured points (a batch's test bottles), drawn as dots in their check's colour. */
+  marks?: (Point & { level: 'ok' | 'caution' | 'danger' })[];
 }
 
 const HEIGHT = 230;
@@ -30,13 +32,13 @@ function niceStep(max: number, count: number): number {
 }
 
 /** Gauge pressure against temperature, worst and expected cases, with the bottle's rating drawn across. */
-export function PressureChart({ worst, expected, ratingBar, units }: Props) {
+export function PressureChart({ worst, expected, ratingBar, units, marks = [] }: Props) {
   const [width, setWidth] = useState(0);
   const toP = (bar: number) => (units === 'us' ? barToPsi(bar) : bar);
   const pUnit = units === 'us' ? 'psi' : 'bar';
   const tUnit = units === 'us' ? '°F' : '°C';
-  const all = [...worst, ...expected];
-  if (all.length === 0) return null;
+  const all = [...worst, ...expected, ...marks];
+  if (worst.length === 0) return null;
   const minT = Math.min(...all.map((p) => p.tempC));
   const maxT = Math.max(...all.map((p) => p.tempC));
   const maxP = Math.max(0.5, ...all.map((p) => toP(p.gaugeBar)), ratingBar ? toP(ratingBar) * 1.15 : 0);
@@ -135,6 +137,17 @@ export function PressureChart({ worst, expected, ratingBar, units }: Props) {
             ) : null}
             <Path d={path(expected)} stroke={colors.info} strokeWidth={2} strokeDasharray="3 3" fill="none" />
             <Path d={path(worst)} stroke={colors.primary} strokeWidth={3} fill="none" />
+            {marks.map((m, i) => (
+              <Circle
+                key={`m${i}`}
+                cx={x(m.tempC)}
+                cy={y(toP(m.gaugeBar))}
+                r={6}
+                fill={m.level === 'danger' ? colors.danger : m.level === 'caution' ? colors.caution : colors.success}
+                stroke={colors.surface}
+                strokeWidth={2}
+              />
+            ))}
           </Svg>
         ) : null}
       </View>
