@@ -174,7 +174,6 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
                   name="fermentableSharePct"
                   label="Share of sugars yeast can ferment"
                   unit="%"
-
                   hint="100 % for fruit sugars and sucrose; 0 % for lactose."
                 />
               </View>
@@ -186,12 +185,7 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
                 />
               </View>
               <View style={styles.cell}>
-                <FormNumberField
-                  name="costPerKg"
-                  label="Cost per kg"
-
-                  hint="Optional, in your currency."
-                />
+                <FormNumberField name="costPerKg" label="Cost per kg" hint="Optional, in your currency." />
               </View>
             </View>
             <View style={styles.field}>

@@ -26,7 +26,6 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
             name="targetVolumes"
             label="Target carbonation"
             unit="volumes"
-
             hint="Kombucha often has 2.5 to 3 volumes: more fizz needs a bottle rated for it."
           />
         </View>

@@ -52,13 +52,7 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
             <FormNumberField name="liquid" label="Liquid per bottle" unit={volumeUnit} />
           </View>
           <View style={styles.cell}>
-            <FormNumberField
-              name="headspace"
-              label="Headspace"
-              unit={volumeUnit}
-
-              hint="Gas space under the cap."
-            />
+            <FormNumberField name="headspace" label="Headspace" unit={volumeUnit} hint="Gas space under the cap." />
           </View>
         </View>
         {chosen ? null : (
@@ -66,7 +60,6 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
             name="maxPressure"
             label="Maximum working pressure"
             unit={unitLabels[u.pressure]}
-
             hint="From the bottle supplier's sheet. Leave empty if you do not know it."
           />
         )}
@@ -134,7 +127,6 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
             name="lastOpenTemp"
             label="Temperature when it was last open"
             unit={tempUnit}
-
             hint="Estimated as saturated with CO2 at that temperature."
           />
         )}
@@ -161,7 +153,6 @@ export function QuickCheckInputs({ formats, units }: { formats: BottleFormat[]; 
               name="highestTemp"
               label="Highest it may meet"
               unit={tempUnit}
-
               hint="A hot van or shelf."
             />
           </View>

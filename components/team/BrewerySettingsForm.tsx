@@ -19,6 +19,7 @@ type Values = {
   abvLimitPercent: string;
   warmestTempC: string;
   ratingSharePercent: string;
+  lotPrefix: string;
   licensed: 'no' | 'yes';
 };
 const toInput = (v: Values) => ({
@@ -26,6 +27,7 @@ const toInput = (v: Values) => ({
   abvLimitPercent: parseNumber(v.abvLimitPercent),
   warmestTempC: parseNumber(v.warmestTempC),
   ratingSharePercent: parseNumber(v.ratingSharePercent),
+  lotPrefix: v.lotPrefix,
   licensedForAlcohol: v.licensed === 'yes',
 });
 
@@ -38,6 +40,7 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
         abvLimitPercent: String(organisation.abvLimitPercent),
         warmestTempC: String(organisation.warmestTempC),
         ratingSharePercent: String(organisation.ratingSharePercent),
+        lotPrefix: organisation.lotPrefix,
         licensed: organisation.licensedForAlcohol ? 'yes' : 'no',
       }}
       enableReinitialize
@@ -53,22 +56,25 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
             name="abvLimitPercent"
             label="Alcohol limit for non-alcoholic drinks"
             unit="% ABV"
-
             hint="0.5 % ABV in the US. Other countries draw the line elsewhere: follow your local rules."
           />
           <FormNumberField
             name="warmestTempC"
             label="Warmest the bottles may meet"
             unit="°C"
-
             hint="A closed car, a shop window, a summer delivery. Every pressure check includes this temperature, whatever else is asked."
           />
           <FormNumberField
             name="ratingSharePercent"
             label="Most sugar: share of the bottle rating"
             unit="%"
-
             hint="The sugar helpers never offer more than keeps the worst case at this share of the bottle's rating on the warmest day. 80 % leaves a margin for bottles that are weaker than rated."
+          />
+          <FormField
+            name="lotPrefix"
+            label="Lot code prefix"
+            autoCapitalize="characters"
+            hint="Starts every lot code, e.g. WCD in WCD-261202-02: 1 to 8 letters or digits."
           />
           <Segmented
             label="Licensed to make alcoholic beverages"

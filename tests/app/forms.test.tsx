@@ -100,6 +100,7 @@ describe('BrewerySettingsForm', () => {
         abvLimitPercent: 0.5,
         warmestTempC: 38,
         ratingSharePercent: 70,
+        lotPrefix: 'LOT',
         licensedForAlcohol: false,
       }),
     );

@@ -147,6 +147,86 @@ async function searchLatency(url: string, cookie: string): Promise<void> {
   console.log(`${p(0.95) < 20 ? 'meets' : 'MISSES'}  search p95 = ${p(0.95).toFixed(1)} ms  (goal < 20 ms)`);
 }
 
+const BATCH_COUNT = Number(process.env.BENCH_BATCHES ?? 1000);
+
+/** Latencies of `count` GETs one at a time, after 10 to warm up: p50 and p95, ms. */
+async function getLatency(
+  url: string,
+  cookie: string,
+  paths: () => string,
+  count = 200,
+): Promise<{ p50: number; p95: number }> {
+  for (let i = 0; i < 10; i++) await (await fetch(`${url}${paths()}`, { headers: { cookie } })).arrayBuffer();
+  const times: number[] = [];
+  for (let i = 0; i < count; i++) {
+    const started = performance.now();
+    const res = await fetch(`${url}${paths()}`, { headers: { cookie } });
+    await res.arrayBuffer();
+    if (!res.ok) throw new Error(`${paths()} answered ${res.status}`);
+    times.push(performance.now() - started);
+  }
+  return { p50: percentile(times, 0.5), p95: percentile(times, 0.95) };
+}
+
+/** Batch detail with 200 readings, and the batch list over BENCH_BATCHES batches: each p95 under 50 ms. */
+async function batchFigures(url: string, cookie: string): Promise<void> {
+  const json = { 'content-type': 'application/json', cookie };
+  const approved = (await (await fetch(`${url}/api/recipes?status=approved`, { headers: { cookie } })).json()) as {
+    id: number;
+    approvedVersion: number;
+  }[];
+  const recipe = approved[0];
+  const post = (path: string, body: unknown) =>
+    fetch(`${url}${path}`, { method: 'POST', headers: json, body: JSON.stringify(body) });
+  const started = performance.now();
+  let made = 0;
+  const ids: number[] = [];
+  while (made < BATCH_COUNT) {
+    const wave = Math.min(10, BATCH_COUNT - made);
+    const answers = await Promise.all(
+      Array.from({ length: wave }, () =>
+        post('/api/batches', {
+          recipeId: recipe.id,
+          version: recipe.approvedVersion,
+          batch: { kind: 'bottles', value: 24 },
+        }),
+      ),
+    );
+    for (const a of answers) {
+      if (a.status !== 201) throw new Error(`starting a batch answered ${a.status}`);
+      ids.push(((await a.json()) as { id: number }).id);
+    }
+    made += wave;
+  }
+  const heavy = ids[0];
+  const kinds = [
+    { kind: 'ph', value: 3.2, stage: 'base' },
+    { kind: 'gauge-pressure', value: 1.4, tempC: 20, stage: 'conditioning' },
+    { kind: 'temperature', value: 21, stage: 'conditioning' },
+    { kind: 'abv', value: 0.2, stage: 'finished' },
+  ];
+  for (let i = 0; i < 200; i++) {
+    const res = await post(`/api/batches/${heavy}/readings`, kinds[i % kinds.length]);
+    if (res.status !== 201) throw new Error(`a reading answered ${res.status}`);
+  }
+  const setupS = (performance.now() - started) / 1000;
+  const detail = await getLatency(url, cookie, () => `/api/batches/${heavy}`);
+  let page = 0;
+  const states = ['all', 'in-progress', 'all', 'released'];
+  const list = await getLatency(
+    url,
+    cookie,
+    () => `/api/batches?state=${states[page % 4]}&page=${(page++ % 40) + 1}&pageSize=25`,
+  );
+  console.log(`\nBatches: ${BATCH_COUNT} started and 200 readings on one in ${setupS.toFixed(1)} s`);
+  console.log(
+    `${detail.p95 < 50 ? 'meets' : 'MISSES'}  batch detail with 200 readings: p50 ${detail.p50.toFixed(1)} ms · p95 ${detail.p95.toFixed(1)} ms  (goal p95 < 50 ms)`,
+  );
+  console.log(
+    `${list.p95 < 50 ? 'meets' : 'MISSES'}  batch list over ${BATCH_COUNT} batches (25 a page): p50 ${list.p50.toFixed(1)} ms · p95 ${list.p95.toFixed(1)} ms  (goal p95 < 50 ms)`,
+  );
+}
+
 const WRITER_SECONDS = Number(process.env.BENCH_WRITER_SECONDS ?? 30);
 
 interface WriterRun {
@@ -356,6 +436,7 @@ async function main(): Promise<void> {
     console.log('');
     for (const [text, ok, goal] of checks) console.log(`${ok ? 'meets' : 'MISSES'}  ${text}  (${goal})`);
     await searchLatency(url, cookie);
+    await batchFigures(url, cookie);
     await writerFigures(url, cookie);
     if (results.some((r) => r.errors + r.non2xx > 0))
       console.log('\nSome requests failed: the figures above are not valid.');
