@@ -42,7 +42,7 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
       at: r.takenAt,
       key: `r${r.id}`,
       level: r.check.level,
-      text: `#${r.id} ${READING_KIND_LABELS[r.kind]} ${r.value}${READING_UNITS[r.kind] ? ` ${READING_UNITS[r.kind]}` : ''}${r.tempC !== null ? ` at ${r.tempC} °C` : ''} · ${STAGE_LABELS[r.stage]} · ${r.by ?? 'someone'}${r.reports.length ? ' · lab report kept' : ''}`,
+      text: `#${r.id} ${READING_KIND_LABELS[r.kind]} ${r.value}${READING_UNITS[r.kind] ? ` ${READING_UNITS[r.kind]}` : ''}${r.tempC !== null ? ` at ${r.tempC} °C` : ''} · ${STAGE_LABELS[r.stage]} · ${r.by ?? 'someone'}${r.reports.length ? ' · lab report kept' : ''}${r.correctsId ? ` · corrects #${r.correctsId}` : ''}`,
       detail: r.check.message,
     })),
     ...batch.steps
@@ -134,7 +134,9 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
         ))}
       </Card>
 
-      {runs ? <ReadingForm batchId={batch.id} stage={stageFromNextStep(batch.steps)} /> : null}
+      {runs ? (
+        <ReadingForm batchId={batch.id} stage={stageFromNextStep(batch.steps)} readings={batch.readings} />
+      ) : null}
 
       <Card title="Readings against their limits">
         {batch.readings.some((r) => r.kind === 'ph') ? (

@@ -35,6 +35,7 @@ type Values = {
   stage: Stage;
   source: 'in-house' | 'lab';
   note: string;
+  correctsId: string;
 };
 
 const toInput = (v: Values) => ({
@@ -44,6 +45,7 @@ const toInput = (v: Values) => ({
   stage: v.stage,
   source: v.kind === 'abv' ? v.source : null,
   note: v.note,
+  correctsId: v.correctsId ? Number(v.correctsId) : null,
 });
 
 const TONE = { ok: 'success', caution: 'caution', danger: 'danger' } as const;
@@ -52,7 +54,15 @@ const TONE = { ok: 'success', caution: 'caution', danger: 'danger' } as const;
  * The "Record a reading" sheet of the floor screen: what was measured, the value on a numeric keypad, the stage
  * (pre-chosen from the next step), and the check at once in plain words. An ABV from a lab takes its report.
  */
-export function ReadingForm({ batchId, stage }: { batchId: number; stage: Stage }) {
+export function ReadingForm({
+  batchId,
+  stage,
+  readings,
+}: {
+  batchId: number;
+  stage: Stage;
+  readings: BatchReadingEntry[];
+}) {
   const add = useAddReadingMutation(batchId);
   const report = useLabReportMutation(batchId);
   const [last, setLast] = useState<BatchReadingEntry | null>(null);
@@ -70,7 +80,7 @@ export function ReadingForm({ batchId, stage }: { batchId: number; stage: Stage 
   return (
     <Card title="Record a reading">
       <Formik<Values>
-        initialValues={{ kind: 'ph', value: '', tempC: '', stage, source: 'in-house', note: '' }}
+        initialValues={{ kind: 'ph', value: '', tempC: '', stage, source: 'in-house', note: '', correctsId: '' }}
         enableReinitialize
         validate={(v) => check(readingSchema, toInput(v)).errors}
         onSubmit={submitTo(
@@ -129,7 +139,25 @@ export function ReadingForm({ batchId, stage }: { batchId: number; stage: Stage 
               options={STAGES.map((s) => ({ value: s, label: STAGE_LABELS[s] }))}
               onChange={(s) => setFieldValue('stage', s)}
             />
-            <FormField name="note" label="Note" />
+            {readings.some((r) => r.kind === values.kind) ? (
+              <Select
+                compact
+                label="It corrects an earlier reading"
+                value={values.correctsId}
+                options={[
+                  { value: '', label: 'No, a new reading' },
+                  ...readings
+                    .filter((r) => r.kind === values.kind)
+                    .slice(-4)
+                    .map((r) => ({
+                      value: String(r.id),
+                      label: `#${r.id}: ${r.value}${READING_UNITS[r.kind] ? ` ${READING_UNITS[r.kind]}` : ''}`,
+                    })),
+                ]}
+                onChange={(id) => setFieldValue('correctsId', id)}
+              />
+            ) : null}
+            <FormField name="note" label={values.correctsId ? 'Why it is corrected' : 'Note'} />
             <Button label="Record reading" busy={isSubmitting} onPress={() => handleSubmit()} style={styles.left} />
           </View>
         )}

@@ -11,6 +11,7 @@ import { batchSteps, formatRounded, resolutionDigits } from '@/lib/recipes/stage
 import { colors, fonts, space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 
+import { RecipeBatches } from './RecipeBatches';
 import { SafetyNotice } from './SafetyNotice';
 import { StartBatch } from './StartBatch';
 
@@ -150,6 +151,7 @@ export function ScaleView({
           ) : null}
         </Card>
       ) : null}
+      <RecipeBatches recipeId={recipeId} />
     </View>
   );
 }
