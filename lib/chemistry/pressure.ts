@@ -54,12 +54,11 @@ const liquidKg = (container: Container) =>
  * the liquid (Bunsen coefficient, Weiss 1970) and the headspace (ideal gas) at every temperature, so the pressure does
  * not vanish as the headspace goes to zero.
  */
-export function airPartialAtm(container: Container, tempC: number): number {
+export function airPartialAtm(container: Container, tempC: number, now = volumesAt(container, tempC)): number {
   const sealedK = container.sealedTempC + ZERO_C_K;
   const dryAirAtm = 1 - waterVapourPressureAtm(container.sealedTempC);
   const sealedLiquidL = container.liquidMl / 1000;
   const sealedGasL = container.headspaceMl / 1000;
-  const now = volumesAt(container, tempC);
   const liquidL = now.liquidMl / 1000;
   const gasL = now.headspaceMl / 1000;
   const k = tempC + ZERO_C_K;
@@ -75,8 +74,8 @@ export function airPartialAtm(container: Container, tempC: number): number {
 }
 
 /** mol of CO2 the container holds per atm of CO2 partial pressure at `tempC`: dissolved (Henry, Weiss 1974) plus headspace (ideal gas). */
-function co2CapacityMolPerAtm(container: Container, tempC: number): number {
-  const gasL = volumesAt(container, tempC).headspaceMl / 1000;
+function co2CapacityMolPerAtm(container: Container, tempC: number, now = volumesAt(container, tempC)): number {
+  const gasL = now.headspaceMl / 1000;
   return co2SolubilityMolPerKgAtm(tempC) * liquidKg(container) + gasL / (R_L_ATM * (tempC + ZERO_C_K));
 }
 
@@ -86,10 +85,11 @@ function co2CapacityMolPerAtm(container: Container, tempC: number): number {
  * the total pressure is CO2 + sealed-in air + water vapour, and the gauge reading is that less 1 atm.
  */
 export function equilibriumAt(container: Container, totalCo2Mol: number, tempC: number): Equilibrium {
-  const co2PartialAtm = totalCo2Mol / co2CapacityMolPerAtm(container, tempC);
-  const totalAtm = co2PartialAtm + airPartialAtm(container, tempC) + waterVapourPressureAtm(tempC);
-  const gaugeBar = (totalAtm - 1) * ATM_BAR;
+  // The liquid's volume at this temperature, worked out once for the CO2, the air and the answer.
   const now = volumesAt(container, tempC);
+  const co2PartialAtm = totalCo2Mol / co2CapacityMolPerAtm(container, tempC, now);
+  const totalAtm = co2PartialAtm + airPartialAtm(container, tempC, now) + waterVapourPressureAtm(tempC);
+  const gaugeBar = (totalAtm - 1) * ATM_BAR;
   return {
     tempC,
     co2PartialAtm,
@@ -108,9 +108,10 @@ export function equilibriumAt(container: Container, totalCo2Mol: number, tempC: 
  * when the warmed liquid fills the bottle there.
  */
 export function maxCo2MolForGauge(container: Container, gaugeBar: number, tempC: number): number {
-  if (volumesAt(container, tempC).liquidFills) return 0;
-  const allowedCo2Atm = gaugeBar / ATM_BAR + 1 - airPartialAtm(container, tempC) - waterVapourPressureAtm(tempC);
-  return Math.max(0, allowedCo2Atm * co2CapacityMolPerAtm(container, tempC));
+  const now = volumesAt(container, tempC);
+  if (now.liquidFills) return 0;
+  const allowedCo2Atm = gaugeBar / ATM_BAR + 1 - airPartialAtm(container, tempC, now) - waterVapourPressureAtm(tempC);
+  return Math.max(0, allowedCo2Atm * co2CapacityMolPerAtm(container, tempC, now));
 }
 
 /**
