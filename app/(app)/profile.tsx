@@ -10,7 +10,7 @@ import {
   useUpdatePreferencesMutation,
   useUpdateProfileMutation,
 } from '@/lib/api/session';
-import { ROLE_LABELS } from '@/lib/roles';
+import { can, ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
 export default function ProfileScreen() {
@@ -38,17 +38,23 @@ export default function ProfileScreen() {
           onSubmit={(values) => changePassword.mutateAsync(values)}
         />
       </Card>
-      <Card title="E-mail">
-        <Segmented
-          label="Review e-mails (a recipe submitted for review; your submission approved or returned)"
-          value={session.user.notifyReviews ? 'on' : 'off'}
-          onChange={(value) => preferences.mutate({ notifyReviews: value === 'on' })}
-          options={[
-            { value: 'on', label: 'Send them' },
-            { value: 'off', label: 'Do not send' },
-          ]}
-        />
-      </Card>
+      {can(session.user.role, 'recipes.submit') || can(session.user.role, 'batches.decide') ? (
+        <Card title="E-mail">
+          <Segmented
+            label={
+              can(session.user.role, 'batches.decide')
+                ? 'Review and batch e-mails (a recipe submitted for review; a danger reading on a batch; a batch waiting for your decision)'
+                : 'Review e-mails (your submission approved or returned)'
+            }
+            value={session.user.notifyReviews ? 'on' : 'off'}
+            onChange={(value) => preferences.mutate({ notifyReviews: value === 'on' })}
+            options={[
+              { value: 'on', label: 'Send them' },
+              { value: 'off', label: 'Do not send' },
+            ]}
+          />
+        </Card>
+      ) : null}
       <Card title="Session">
         <View style={styles.row}>
           <Text variant="muted">Signed in to {session.organisation.name}.</Text>
