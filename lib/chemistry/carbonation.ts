@@ -476,7 +476,12 @@ const ASSUMPTIONS: CarbonationResult['assumptions'] = [
     value: 'hexose → 2 ethanol + 2 CO2; sucrose + water → 4 + 4; mixed sugars at sucrose’s yield per gram',
     source: 'Gay-Lussac',
   },
-  { name: 'Expected yield', value: `${EXPECTED_YIELD * 100} % of theoretical`, source: 'Pasteur (from memory)' },
+  // Pasteur's figure, from memory.
+  {
+    name: 'Expected yield',
+    value: `${EXPECTED_YIELD * 100} % of theoretical`,
+    source: 'Pasteur; a typical figure, not measured here',
+  },
   {
     name: 'Volume of CO2',
     value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`,
@@ -498,7 +503,8 @@ const ASSUMPTIONS: CarbonationResult['assumptions'] = [
     name: 'Starch',
     value:
       'not counted when sugars are measured: kombucha cultures ferment little starch (their yeasts, such as Brettanomyces and Zygosaccharomyces, have little amylase). When sugars are not measured, all available carbohydrate counts',
-    source: 'microbiology of kombucha cultures (from memory)',
+    // From memory.
+    source: 'the microbiology of kombucha cultures',
   },
 ];
 

@@ -83,7 +83,8 @@ export const SUGARS: Record<SugarType, SugarInfo> = {
     fermentableShare: 0,
     molarMass: M_SUCROSE,
     co2PerMole: 4,
-    source: 'Saccharomyces and the usual kombucha yeasts do not ferment lactose (from memory)',
+    // From memory.
+    source: 'Saccharomyces and the usual kombucha yeasts do not ferment lactose',
   },
 };
 

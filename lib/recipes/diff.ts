@@ -1,4 +1,5 @@
-import type { RecipeContent } from '@/lib/schemas/recipes';
+import { SHORT_SUGAR_LABELS } from '@/lib/chemistry/sugars';
+import { AMOUNT_UNIT_LABELS, METHOD_LABELS, type RecipeContent } from '@/lib/schemas/recipes';
 
 export interface Change {
   area: 'ingredients' | 'sugar' | 'process' | 'bottle' | 'base' | 'targets' | 'name';
@@ -7,16 +8,31 @@ export interface Change {
   after: string | number | null;
 }
 
-const PROCESS_FIELDS = [
-  'method',
-  'steepHours',
-  'steepTempC',
-  'strainLossPct',
-  'carbonateHours',
-  'carbonateTempC',
-  'coldStoreTempC',
-] as const;
-const BASE_FIELDS = ['name', 'residualSugarGPerL', 'ph', 'abvPercent', 'residualCo2Volumes', 'lastOpenTempC'] as const;
+/** The designer's own labels (with the unit), so a change reads as the form reads. */
+const PROCESS_FIELDS = {
+  method: 'How the flavour goes in',
+  steepHours: 'Steep for (h)',
+  steepTempC: 'Steep at (°C)',
+  strainLossPct: 'Liquid lost when straining (%)',
+  carbonateHours: 'Carbonate for (h)',
+  carbonateTempC: 'Carbonate at (°C)',
+  coldStoreTempC: 'Cold store at (°C)',
+} as const;
+const BASE_FIELDS = {
+  name: 'Base',
+  residualSugarGPerL: 'Residual sugar (g/L)',
+  ph: 'pH',
+  abvPercent: 'Alcohol of the base (% ABV)',
+  residualCo2Volumes: 'Residual CO2 (volumes)',
+  lastOpenTempC: 'Temperature when last open (°C)',
+} as const;
+const TARGET_FIELDS = {
+  targetVolumes: 'Target carbonation (volumes)',
+  highestTempC: 'Highest it may meet (°C)',
+  sweetnessNote: 'Sweetness note',
+} as const;
+const amount = (line: { amount: number; unit: keyof typeof AMOUNT_UNIT_LABELS }) =>
+  `${line.amount} ${AMOUNT_UNIT_LABELS[line.unit]}`;
 
 /**
  * What changed between two versions of a recipe: ingredient lines (matched by ingredient), sugars (by type), the
@@ -38,20 +54,20 @@ export function diffRecipes(
       changes.push({
         area: 'ingredients',
         what: `${label(id)} removed`,
-        before: `${before.amount} ${before.unit}`,
+        before: amount(before),
         after: null,
       });
     else if (before.amount !== after.amount || before.unit !== after.unit)
       changes.push({
         area: 'ingredients',
         what: label(id),
-        before: `${before.amount} ${before.unit}`,
-        after: `${after.amount} ${after.unit}`,
+        before: amount(before),
+        after: amount(after),
       });
     else if (before.extractionPct !== after.extractionPct)
       changes.push({
         area: 'ingredients',
-        what: `${label(id)} extraction`,
+        what: `${label(id)}: share reaching the liquid (%)`,
         before: before.extractionPct,
         after: after.extractionPct,
       });
@@ -62,7 +78,7 @@ export function diffRecipes(
         area: 'ingredients',
         what: `${label(id)} added`,
         before: null,
-        after: `${after.amount} ${after.unit}`,
+        after: amount(after),
       });
   }
   const sugarsA = new Map(a.content.sugars.map((s) => [s.type, s.gPerL]));
@@ -71,25 +87,27 @@ export function diffRecipes(
     if (sugarsA.get(type) !== sugarsB.get(type))
       changes.push({
         area: 'sugar',
-        what: `${type} (g/L)`,
+        what: `${SHORT_SUGAR_LABELS[type]} (g/L)`,
         before: sugarsA.get(type) ?? null,
         after: sugarsB.get(type) ?? null,
       });
   }
-  for (const field of PROCESS_FIELDS) {
+  const shown = (field: string, value: string | number | null | undefined) =>
+    field === 'method' && value ? METHOD_LABELS[value as keyof typeof METHOD_LABELS] : (value ?? null);
+  for (const [field, what] of Object.entries(PROCESS_FIELDS) as [keyof typeof PROCESS_FIELDS, string][]) {
     if (a.content.process[field] !== b.content.process[field])
       changes.push({
         area: 'process',
-        what: field,
-        before: a.content.process[field] ?? null,
-        after: b.content.process[field] ?? null,
+        what,
+        before: shown(field, a.content.process[field]),
+        after: shown(field, b.content.process[field]),
       });
   }
-  for (const field of BASE_FIELDS) {
+  for (const [field, what] of Object.entries(BASE_FIELDS) as [keyof typeof BASE_FIELDS, string][]) {
     if (a.content.baseBrew[field] !== b.content.baseBrew[field])
       changes.push({
         area: 'base',
-        what: field,
+        what,
         before: a.content.baseBrew[field] ?? null,
         after: b.content.baseBrew[field] ?? null,
       });
@@ -101,9 +119,9 @@ export function diffRecipes(
       before: a.content.bottleFormatId,
       after: b.content.bottleFormatId,
     });
-  for (const field of ['targetVolumes', 'highestTempC', 'sweetnessNote'] as const) {
+  for (const [field, what] of Object.entries(TARGET_FIELDS) as [keyof typeof TARGET_FIELDS, string][]) {
     if (a.content[field] !== b.content[field])
-      changes.push({ area: 'targets', what: field, before: a.content[field], after: b.content[field] });
+      changes.push({ area: 'targets', what, before: a.content[field], after: b.content[field] });
   }
   return changes;
 }

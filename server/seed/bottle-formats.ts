@@ -1,6 +1,7 @@
 import type { BottleFormatInput } from '@/lib/schemas/bottle-formats';
 
-const TYPICAL = 'Typical value for this kind of bottle (from memory): confirm with your supplier';
+// Typical ratings from memory, as the note says: the supplier's sheet replaces them.
+const TYPICAL = 'Typical value for this kind of bottle: confirm with your supplier';
 
 /**
  * The starter formats every new brewery gets. Volumes are the usual nominal fills; headspace is a typical fill

@@ -128,10 +128,34 @@ describe('diffRecipes', () => {
     );
     expect(changes).toEqual(
       expect.arrayContaining([
-        { area: 'ingredients', what: 'Strawberries', before: '40 g-per-l', after: '45 g-per-l' },
-        { area: 'ingredients', what: 'Shortbread added', before: null, after: '3 g-per-bottle' },
-        { area: 'sugar', what: 'sucrose (g/L)', before: 4, after: 5 },
+        { area: 'ingredients', what: 'Strawberries', before: '40 g per litre', after: '45 g per litre' },
+        { area: 'ingredients', what: 'Shortbread added', before: null, after: '3 g per bottle' },
+        { area: 'sugar', what: 'Sucrose (g/L)', before: 4, after: 5 },
         { area: 'bottle', what: 'Bottle format', before: 9, after: 10 },
+      ]),
+    );
+    // In the designer's own words, never its field names.
+    const process = diffRecipes(
+      a,
+      {
+        ...a,
+        content: content({
+          targetVolumes: 3,
+          process: { ...content().process, method: 'steep-strain', steepHours: 24 },
+        }),
+      },
+      new Map(),
+    );
+    expect(process).toEqual(
+      expect.arrayContaining([
+        { area: 'targets', what: 'Target carbonation (volumes)', before: 2.5, after: 3 },
+        {
+          area: 'process',
+          what: 'How the flavour goes in',
+          before: 'In the bottle',
+          after: 'Steep, strain, then carbonate',
+        },
+        { area: 'process', what: 'Steep for (h)', before: 0, after: 24 },
       ]),
     );
     expect(diffRecipes(a, a, new Map())).toEqual([]);

@@ -144,7 +144,7 @@ describe('PUT /api/recipes/:id (a new version per save)', () => {
     expect(versions.body.map((v: { number: number }) => v.number)).toEqual([2, 1]);
     const diff = await brewer.get(`/api/recipes/${created.id}/diff`).query({ from: 1, to: 2 }).expect(200);
     expect(diff.body).toEqual([
-      { area: 'ingredients', what: 'Strawberries, raw', before: '40 g-per-l', after: '55 g-per-l' },
+      { area: 'ingredients', what: 'Strawberries, raw', before: '40 g per litre', after: '55 g per litre' },
     ]);
     const restored = await developer.post(`/api/recipes/${created.id}/restore`).send({ version: 1 }).expect(200);
     expect(restored.body).toMatchObject({
