@@ -67,6 +67,12 @@ export const colors = {
   brand: palette.focus,
 } as const;
 
+/** The one look of a chosen option, everywhere: segments, option chips, lists of choices, toggled chips. */
+export const selection = {
+  box: { backgroundColor: colors.primary, borderColor: colors.primary },
+  text: { color: colors.textOnPrimary },
+} as const;
+
 export const fonts = {
   regular: 'SourceSans3_400Regular',
   semibold: 'SourceSans3_600SemiBold',

@@ -20,10 +20,11 @@ const VIEW: Record<
     keep: (r) => r.reviewState === 'submitted',
   },
   developer: {
-    title: 'Drafts and returned versions',
+    title: 'In development',
     empty: 'No drafts: start a recipe.',
     status: 'draft',
-    keep: (r) => r.reviewState === 'draft' || r.reviewState === 'returned',
+    // Submitted recipes stay in view (as "Waiting for review") until an owner decides.
+    keep: (r) => r.reviewState === 'draft' || r.reviewState === 'returned' || r.reviewState === 'submitted',
   },
   brewer: {
     title: 'Approved for production',
@@ -43,7 +44,14 @@ export function RecipeShortlist({ role }: { role: Role }) {
       {recipes.data && items.length === 0 ? <Text variant="muted">{view.empty}</Text> : null}
       {items.slice(0, 8).map((r) => (
         <View key={r.id} style={styles.row}>
-          <Link href={`/recipes/${r.id}`} style={styles.link}>
+          <Link
+            href={
+              r.reviewState === 'submitted' && can(role, 'recipes.approve')
+                ? `/recipes/${r.id}?tab=review`
+                : `/recipes/${r.id}`
+            }
+            style={styles.link}
+          >
             {r.name}
           </Link>
           <View style={styles.badges}>

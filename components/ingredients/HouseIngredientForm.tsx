@@ -15,7 +15,7 @@ import {
   DEFAULT_STEEP_SHARE,
 } from '@/lib/ingredients';
 import { type HouseIngredientInput, houseIngredientSchema, per100g } from '@/lib/schemas/ingredients';
-import { colors, fonts, radius, space, touchTarget } from '@/lib/theme';
+import { colors, fonts, radius, selection, space, touchTarget } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
 interface Values {
@@ -240,9 +240,9 @@ const styles = StyleSheet.create({
     borderColor: colors.border,
     backgroundColor: colors.surface,
   },
-  chipOn: { borderColor: colors.primary, backgroundColor: colors.primary },
+  chipOn: selection.box,
   chipText: { fontFamily: fonts.semibold, color: colors.text },
-  chipTextOn: { color: colors.textOnPrimary },
+  chipTextOn: selection.text,
   focus: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 1 } as ViewStyle,
   submit: { alignSelf: 'flex-start' },
 });

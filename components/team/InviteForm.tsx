@@ -1,4 +1,4 @@
-import { Formik } from 'formik';
+import { Formik, type FormikHelpers } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
 import { Button, FormField, FormStatus, Select, submitTo } from '@/components/ui';
@@ -15,12 +15,18 @@ interface Props {
 
 const initialValues: InviteInput = { email: '', role: DEFAULT_INVITE_ROLE };
 
+/** After sending, the address clears for the next person; the role stays as chosen. */
+const keepRole = (helpers: FormikHelpers<InviteInput>) => {
+  void helpers.setFieldValue('email', '', false);
+  void helpers.setTouched({}, false);
+};
+
 export function InviteForm({ onSubmit, error }: Props) {
   return (
     <Formik<InviteInput>
       initialValues={initialValues}
       validationSchema={inviteSchema}
-      onSubmit={submitTo(onSubmit, { schema: inviteSchema, afterSuccess: (helpers) => helpers.resetForm() })}
+      onSubmit={submitTo(onSubmit, { schema: inviteSchema, afterSuccess: keepRole })}
     >
       {({ handleSubmit, isSubmitting, values, setFieldValue, errors, touched }) => (
         <View style={styles.form}>

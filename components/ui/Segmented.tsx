@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
-import { colors, fonts, fontSize, radius, space, touchTarget } from '@/lib/theme';
+import { colors, fonts, fontSize, radius, selection, space, touchTarget } from '@/lib/theme';
 
 import { Text } from './Text';
 
@@ -58,8 +58,8 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
     backgroundColor: colors.surface,
   },
-  selected: { backgroundColor: colors.primary },
+  selected: selection.box,
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: -3 } as ViewStyle,
   text: { fontFamily: fonts.semibold, fontSize: fontSize.sm, color: colors.primary },
-  textSelected: { color: colors.textOnPrimary },
+  textSelected: selection.text,
 });

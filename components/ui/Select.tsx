@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
-import { colors, fonts, fontSize, radius, space, touchTarget } from '@/lib/theme';
+import { colors, fonts, fontSize, radius, selection, space, touchTarget } from '@/lib/theme';
 
 import { Text } from './Text';
 
@@ -92,17 +92,17 @@ const styles = StyleSheet.create({
     flexBasis: 140,
   },
   compact: { flexGrow: 0, flexBasis: 'auto', paddingHorizontal: space.md },
-  selected: { borderColor: colors.primary, backgroundColor: colors.selected },
+  selected: selection.box,
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 1 } as ViewStyle,
   disabled: { opacity: 0.55 },
   dot: { width: 18, height: 18, borderRadius: 9, borderWidth: 2, borderColor: colors.textMuted },
   dotSelected: {
-    borderColor: colors.primary,
-    backgroundColor: colors.primary,
-    boxShadow: `inset 0 0 0 3px ${colors.surface}`,
+    borderColor: colors.textOnPrimary,
+    backgroundColor: colors.textOnPrimary,
+    boxShadow: `inset 0 0 0 3px ${colors.primary}`,
   } as ViewStyle,
   optionText: { flexShrink: 1 },
   optionLabel: { fontFamily: fonts.semibold, fontSize: fontSize.md },
-  optionLabelSelected: { color: colors.primary },
+  optionLabelSelected: selection.text,
   error: { color: colors.danger, fontSize: fontSize.sm, fontFamily: fonts.semibold },
 });

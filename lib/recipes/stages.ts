@@ -110,8 +110,26 @@ interface ScaledParts {
   bottles: number;
   finishedLitres: { value: number; unit: string; resolution: number };
   topUpLitres: { value: number; unit: string; resolution: number; exact: number };
-  lines: { name: string; value: number; unit: string; resolution: number }[];
-  sugars: { name: string; value: number; unit: string; resolution: number }[];
+  lines: { name: string; value: number; unit: string; resolution: number; exactBase: number }[];
+  sugars: { name: string; value: number; unit: string; resolution: number; exactBase: number }[];
+}
+
+/** Grams in an avoirdupois ounce (NIST Handbook 44: 1 oz = 28.349523125 g, exact). */
+const G_PER_OZ = 28.349523125;
+
+/**
+ * What goes into each bottle when the flavour goes in the bottle: grams to 0.1 g under 100 g (a pocket scale), whole
+ * grams above; ounces to 0.01 oz when the batch is in US units.
+ */
+export function perBottleAmounts(items: { name: string; unit: string; exactBase: number }[], bottles: number): string {
+  return items
+    .map((i) => {
+      const grams = i.exactBase / bottles;
+      const us = i.unit === 'oz' || i.unit === 'lb';
+      const amount = us ? `${formatNumber(grams / G_PER_OZ, 2)} oz` : `${formatNumber(grams, grams < 100 ? 1 : 0)} g`;
+      return `${amount} ${i.name.toLowerCase()}`;
+    })
+    .join(', ');
 }
 
 /** The numbered steps of a batch, with its amounts written in: what the screen and the printed card list. */
@@ -136,8 +154,9 @@ export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleNa
       `Fill ${scaled.bottles} bottles (${bottleName}), cap and keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h.`,
     );
   } else {
+    const parts = [...scaled.lines, ...sugars];
     steps.push(
-      `Share ${list(scaled.lines)}${sugars.length ? ` and ${list(sugars)}` : ''} between ${scaled.bottles} bottles (${bottleName}).`,
+      `Into each of the ${scaled.bottles} bottles (${bottleName}): ${parts.length ? perBottleAmounts(parts, scaled.bottles) : 'nothing'}. In all: ${list(scaled.lines)}${sugars.length ? ` and ${list(sugars)}` : ''}.`,
     );
     steps.push(`Fill with ${finished} of ${content.baseBrew.name} and cap.`);
     steps.push(

@@ -70,6 +70,13 @@ describe('InviteForm', () => {
     fireEvent.changeText(screen.getByLabelText('E-mail of the person to invite'), ' Wren@Example.TEST ');
     fireEvent.press(screen.getByRole('button', { name: 'Send invitation' }));
     await waitFor(() => expect(onSubmit).toHaveBeenCalledWith({ email: 'wren@example.test', role: 'developer' }));
+    // The role stays as chosen for the next invitation; the address clears.
+    fireEvent.press(screen.getByRole('radio', { name: /Brewer/ }));
+    fireEvent.changeText(screen.getByLabelText('E-mail of the person to invite'), 'juniper@example.test');
+    fireEvent.press(screen.getByRole('button', { name: 'Send invitation' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenLastCalledWith({ email: 'juniper@example.test', role: 'brewer' }));
+    await waitFor(() => expect(screen.getByLabelText('E-mail of the person to invite')).toHaveProp('value', ''));
+    expect(screen.getByRole('radio', { name: /Brewer/ })).toBeChecked();
   });
 });
 

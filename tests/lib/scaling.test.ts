@@ -132,4 +132,43 @@ describe('batchSteps', () => {
     expect(steps[3]).toMatch(/^Fill 42 bottles/);
     expect(steps).toHaveLength(5);
   });
+
+  it('gives the amounts for each bottle when the flavour goes in the bottle, beside the batch totals', () => {
+    const content = {
+      baseBrew: {
+        name: 'black tea base',
+        residualSugarGPerL: 1,
+        ph: 3.2,
+        abvPercent: 0.1,
+        residualCo2Volumes: null,
+        lastOpenTempC: 21,
+      },
+      process: {
+        method: 'in-bottle',
+        steepHours: 0,
+        steepTempC: 4,
+        strainLossPct: 0,
+        carbonateHours: 72,
+        carbonateTempC: 22,
+        coldStoreTempC: 4,
+      },
+    };
+    // By hand, per 473 mL bottle: strawberries 40 g/L × 0.473 L = 18.92 g; ginger 0.8 × 0.473 = 0.378 g; vanilla
+    // 0.2 g per bottle as written; sucrose 6 × 0.473 = 2.838 g.
+    const metric = batchSteps(
+      content as never,
+      scaleRecipe(recipe({ kind: 'bottles', value: 150 })),
+      'Glass crown cap 473 mL',
+    );
+    expect(metric[0]).toMatch(
+      /^Into each of the 150 bottles \(Glass crown cap 473 mL\): 18\.9 g strawberries, 0\.4 g ginger root, 0\.2 g vanilla extract, 2\.8 g sucrose\. In all: /,
+    );
+    // In US units: 18.92 g ÷ 28.349523125 g per oz (NIST Handbook 44) = 0.667 oz.
+    const us = batchSteps(
+      content as never,
+      scaleRecipe(recipe({ kind: 'bottles', value: 150 }, 'us')),
+      'Glass crown cap 473 mL',
+    );
+    expect(us[0]).toMatch(/: 0\.67 oz strawberries, /);
+  });
 });

@@ -20,7 +20,7 @@ import { can } from '@/lib/roles';
 type Tab = 'design' | 'review' | 'tastings' | 'scale' | 'history';
 
 export default function RecipeScreen() {
-  const { id } = useLocalSearchParams<{ id: string }>();
+  const { id, tab: asked } = useLocalSearchParams<{ id: string; tab?: string }>();
   const recipeId = Number(id);
   const router = useRouter();
   const { data: session } = useSessionQuery();
@@ -30,7 +30,9 @@ export default function RecipeScreen() {
   const duplicate = useDuplicateRecipeMutation(recipeId);
   const archive = useArchiveRecipeMutation(recipeId);
   const brewer = !can(session?.user.role, 'recipes.develop');
-  const [tab, setTab] = useState<Tab>(brewer ? 'scale' : 'design');
+  // A link may ask for a tab (Home opens a submitted recipe on Review); brewers always start on the batch view.
+  const TABS: Tab[] = ['design', 'review', 'tastings', 'scale', 'history'];
+  const [tab, setTab] = useState<Tab>(brewer ? 'scale' : TABS.includes(asked as Tab) ? (asked as Tab) : 'design');
   if (recipe.isError)
     return (
       <Screen title="Recipe">
