@@ -1,7 +1,7 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 
 import type { Ingredient as IngredientDtoShape, IngredientChangeEntry, IngredientPage } from '@/lib/api/types';
-import type { Measure } from '@/lib/ingredients';
+import { CATEGORIES, type Measure } from '@/lib/ingredients';
 import { type HouseIngredientInput, type IngredientSearch, per100g } from '@/lib/schemas/ingredients';
 import { Ingredient, IngredientChange, sequelize, transaction, User } from '@/server/db';
 import { conflict, forbidden, notFound } from '@/server/errors';
@@ -126,6 +126,12 @@ export function ftsQuery(q: string): string | null {
  * Ingredients a brewery may use: the dataset and its own house ingredients (house first), ranked by relevance
  * (BM25 over the names) when there is a query, by name otherwise.
  */
+/**
+ * What people flavour with, shown before the rest of the dataset when nothing is searched: fruit, juices, purées,
+ * dried fruit, herbs, spices, sugars and syrups, sweet baked goods (not dairy or the rest of the food table).
+ */
+const FLAVOUR_CATEGORIES = CATEGORIES.filter((c) => c !== 'dairy' && c !== 'other');
+
 export async function searchIngredients(auth: AuthContext, search: IngredientSearch): Promise<IngredientPage> {
   const match = ftsQuery(search.q);
   const filters = [
@@ -133,8 +139,18 @@ export async function searchIngredients(auth: AuthContext, search: IngredientSea
     search.archived ? 'i.archived_at IS NOT NULL' : 'i.archived_at IS NULL',
   ];
   if (search.category) filters.push('i.category = :category');
+  // The name's first part (before its first comma) starting with the first word searched ranks first: "honey" finds
+  // "Honey" before "Ham, honey roasted", "vanilla" finds "Vanilla extract".
+  const lead = `${(
+    search.q
+      .trim()
+      .toLowerCase()
+      .match(/[\p{L}\p{N}]+/u)?.[0] ?? ''
+  ).replace(/[%_]/g, '')}%`;
   const replacements = {
     org: auth.organisationId,
+    lead,
+    flavour: FLAVOUR_CATEGORIES,
     category: search.category,
     match,
     limit: search.pageSize,
@@ -145,8 +161,8 @@ export async function searchIngredients(auth: AuthContext, search: IngredientSea
   const from = match ? 'ingredient_search s CROSS JOIN ingredients i ON i.id = s.rowid' : 'ingredients i';
   const where = `${match ? 'ingredient_search MATCH :match AND ' : ''}${filters.join(' AND ')}`;
   const order = match
-    ? '(i.organisation_id IS NULL), bm25(ingredient_search), length(i.name)'
-    : '(i.organisation_id IS NULL), i.name';
+    ? '(i.organisation_id IS NULL), (lower(i.name) NOT LIKE :lead), bm25(ingredient_search), length(i.name)'
+    : '(i.organisation_id IS NULL), (i.category NOT IN (:flavour)), i.name';
   const [ids, [{ total }]] = await Promise.all([
     sequelize.query<{ id: number }>(
       `SELECT i.id FROM ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit OFFSET :offset`,

@@ -73,6 +73,37 @@ describe('GET /api/ingredients', () => {
     expect(cherry.body.items[0].id).toBe(house.body.id);
     await brewer.get('/api/ingredients').query({ pageSize: 1000 }).expect(400);
   });
+
+  it('ranks a name whose first part starts with the word first, and opens on the flavour ingredients', async () => {
+    const stranger = await signUpOwner(app);
+    await stranger.agent
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Ham glaze with honey', category: 'other' })
+      .expect(201);
+    await stranger.agent
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Honey, wildflower', category: 'sugar-syrup' })
+      .expect(201);
+    const honey = (await stranger.agent.get('/api/ingredients').query({ q: 'honey' }).expect(200)).body.items;
+    // Both are house ingredients (they come first); of the two, the one named for honey leads.
+    expect(honey.slice(0, 2).map((i: { name: string }) => i.name)).toEqual([
+      'Honey, wildflower',
+      'Ham glaze with honey',
+    ]);
+    const first = (await stranger.agent.get('/api/ingredients').query({ pageSize: 60 }).expect(200)).body.items as {
+      scope: string;
+      category: string;
+    }[];
+    const dataset = first.filter((i) => i.scope === 'dataset');
+    const firstOther = dataset.findIndex((i) => i.category === 'dairy' || i.category === 'other');
+    // Every flavour ingredient of the page comes before the first dairy or other food.
+    expect(
+      dataset
+        .slice(firstOther === -1 ? dataset.length : firstOther)
+        .every((i) => i.category === 'dairy' || i.category === 'other'),
+    ).toBe(true);
+    expect(dataset[0].category).not.toBe('other');
+  });
 });
 
 describe('POST /api/ingredients (house ingredients)', () => {
