@@ -207,9 +207,9 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
 const styles = StyleSheet.create({
   wrap: { gap: space.lg },
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
-  amount: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: space.md, paddingVertical: space.xs },
+  amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, paddingVertical: space.xs },
   amountValue: { fontFamily: fonts.bold, fontSize: fontSize.display, minWidth: 120 },
-  amountName: { fontSize: fontSize.lg },
+  amountName: { fontSize: fontSize.lg, flex: 1, flexShrink: 1 },
   step: { gap: space.xs, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },
   stepText: { fontSize: fontSize.lg },
   entry: { gap: space.xxs, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },

@@ -112,8 +112,9 @@ const styles = StyleSheet.create({
   },
   notApproved: { fontFamily: fonts.bold, color: colors.danger, fontSize: fontSize.lg },
   section: { gap: space.xs, paddingTop: space.md },
-  amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, flexWrap: 'wrap' },
+  // The name wraps beside its own amount, never under the next one.
+  amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md },
   amountValue: { fontFamily: fonts.bold, fontSize: fontSize.display, lineHeight: 32, minWidth: 130 },
-  amountName: { fontSize: fontSize.lg, lineHeight: 26 },
+  amountName: { fontSize: fontSize.lg, lineHeight: 26, flex: 1, flexShrink: 1 },
   checkpoint: { fontSize: fontSize.lead, lineHeight: 32 },
 });

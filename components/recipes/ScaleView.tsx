@@ -139,7 +139,7 @@ export function ScaleView({
           />
           <Text variant="subheading">Steps</Text>
           {content &&
-            batchSteps(content, scaled.data, scaled.data.bottleName).map((step, i) => (
+            batchSteps(content, scaled.data, scaled.data.bottleName, system).map((step, i) => (
               <Text key={i}>
                 {i + 1}. {step}
               </Text>

@@ -1,4 +1,5 @@
 import type { FindingLevel } from '@/lib/chemistry/carbonation';
+import { CAUTION_SHARE_OF_RATING, PH_LIMIT } from '@/lib/chemistry/carbonation';
 import { SAFETY_CAUTIONS } from '@/lib/chemistry/cautions';
 import { type Allergen, ALLERGEN_LABELS } from '@/lib/ingredients';
 import type { RecipeContent } from '@/lib/schemas/recipes';
@@ -66,10 +67,15 @@ export function buildCard(input: {
   const { content, scaled, evaluation, units } = input;
   const c = evaluation.carbonation;
   const steeped = content.process.method === 'steep-strain';
+  // The test bottle's targets, from the engine and the bottle: the expected pressure at the carbonating temperature
+  // (time to chill), and the caution line at 75 % of the rating, which it must never pass.
+  const carbonating = c.pressures.findIndex((p) => p.tempC === content.process.carbonateTempC);
+  const chillAt = carbonating >= 0 ? c.cases.expected.gaugeBar[carbonating] : null;
+  const rated = c.findings.find((f) => f.values?.ratingBar !== undefined)?.values?.ratingBar;
   const checkpoints = [
-    'pH of the base before flavouring (4.2 or below): ________',
+    `pH of the base before flavouring (${PH_LIMIT} or below): ________`,
     ...(steeped ? ['Sugar reading after straining (°Bx or SG): ________'] : []),
-    'Gauge pressure of a test bottle before cold store: ________',
+    `Gauge pressure of a test bottle${chillAt !== null ? `: chill when it reads about ${formatPressure(chillAt, units)} at ${formatTemp(content.process.carbonateTempC, units)}` : ''}${rated !== undefined ? `; never above ${formatPressure(rated * CAUTION_SHARE_OF_RATING, units)}` : ''}: ________`,
     'Lot code: ________',
     'Initials: ________',
   ];
@@ -103,7 +109,7 @@ export function buildCard(input: {
       name: r.name,
       amount: formatRounded(r),
     })),
-    steps: batchSteps(content, scaled, input.bottleName),
+    steps: batchSteps(content, scaled, input.bottleName, units),
     checkpoints,
     keyNumbers: [
       {

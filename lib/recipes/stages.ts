@@ -1,5 +1,5 @@
 import type { RecipeContent } from '@/lib/schemas/recipes';
-import { formatNumber } from '@/lib/units';
+import { formatNumber, formatTemp, type UnitSystem } from '@/lib/units';
 
 export interface Stage {
   title: string;
@@ -133,7 +133,13 @@ export function perBottleAmounts(items: { name: string; unit: string; exactBase:
 }
 
 /** The numbered steps of a batch, with its amounts written in: what the screen and the printed card list. */
-export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleName: string): string[] {
+export function batchSteps(
+  content: RecipeContent,
+  scaled: ScaledParts,
+  bottleName: string,
+  units: UnitSystem = 'metric',
+): string[] {
+  const t = (tempC: number) => formatTemp(tempC, units);
   const list = (items: { name: string; value: number; unit: string; resolution: number }[]) =>
     items.length === 0 ? 'nothing' : items.map((i) => `${formatRounded(i)} ${i.name.toLowerCase()}`).join(', ');
   const p = content.process;
@@ -142,7 +148,7 @@ export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleNa
   const steps: string[] = [];
   if (p.method === 'steep-strain') {
     steps.push(
-      `Steep ${list(scaled.lines)} in ${finished} of ${content.baseBrew.name} at ${p.steepTempC} °C for ${p.steepHours} h.`,
+      `Steep ${list(scaled.lines)} in ${finished} of ${content.baseBrew.name} at ${t(p.steepTempC)} for ${p.steepHours} h.`,
     );
     steps.push(
       `Strain out the solids; about ${p.strainLossPct} % of the liquid (${formatRounded(scaled.topUpLitres)}) stays in them.`,
@@ -151,7 +157,7 @@ export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleNa
       `Top up with ${formatRounded(scaled.topUpLitres)} of fresh base to ${finished}${sugars.length ? ` and dissolve ${list(sugars)}` : ''}.`,
     );
     steps.push(
-      `Fill ${scaled.bottles} bottles (${bottleName}), cap and keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h.`,
+      `Fill ${scaled.bottles} bottles (${bottleName}), cap and keep at ${t(p.carbonateTempC)} for ${p.carbonateHours} h.`,
     );
   } else {
     const parts = [...scaled.lines, ...sugars];
@@ -160,9 +166,9 @@ export function batchSteps(content: RecipeContent, scaled: ScaledParts, bottleNa
     );
     steps.push(`Fill with ${finished} of ${content.baseBrew.name} and cap.`);
     steps.push(
-      `Keep at ${p.carbonateTempC} °C for ${p.carbonateHours} h; the solids keep feeding the yeast, so check a test bottle.`,
+      `Keep at ${t(p.carbonateTempC)} for ${p.carbonateHours} h; the solids keep feeding the yeast, so check a test bottle.`,
     );
   }
-  steps.push(`Open a test bottle; once the fizz is right, move every bottle to cold store at ${p.coldStoreTempC} °C.`);
+  steps.push(`Open a test bottle; once the fizz is right, move every bottle to cold store at ${t(p.coldStoreTempC)}.`);
   return steps;
 }

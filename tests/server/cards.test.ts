@@ -106,7 +106,17 @@ describe('GET /api/recipes/:id/card', () => {
       /^Steep 3\.00 kg strawberries, raw in 75\.0 L of green tea base at 4 °C for 24 h\.$/,
     );
     expect(card.body.checkpoints[0]).toMatch(/4\.2 or below/);
+    // The test bottle's limit: 75 % of the sparkling-wine bottle's 6 bar rating = 4.50 bar (the caution line).
+    expect(card.body.checkpoints.find((c: string) => c.startsWith('Gauge pressure'))).toMatch(
+      /^Gauge pressure of a test bottle: chill when it reads about \d\.\d\d bar \(\d+ psi\) at 20 °C; never above 4\.50 bar \(65 psi\): /,
+    );
     expect(card.body.cautions.join(' ')).toMatch(/burst/);
+    // In US units the steps read in °F: 4 °C = 39 °F (× 9/5 + 32 = 39.2).
+    const us = await brewer
+      .get(`/api/recipes/${recipeId}/card`)
+      .query({ kind: 'bottles', value: 100, units: 'us' })
+      .expect(200);
+    expect(us.body.steps[0]).toMatch(/ at 39 °F for 24 h\.$/);
   });
 
   it('refuses a batch outside sensible limits with a message', async () => {
