@@ -1,5 +1,6 @@
 import { Formik, setNestedObjectValues, useFormikContext } from 'formik';
-import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useEffect } from 'react';
+import { Platform, StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import {
   Badge,
@@ -44,6 +45,22 @@ interface Props {
   }) => Promise<unknown>;
   saveError: unknown;
   onReload: () => void;
+}
+
+/**
+ * Asks before the page is closed or reloaded with unsaved edits (the browser's own prompt; its wording is the
+ * browser's). Only on the web, where closing a tab would lose the form.
+ */
+function useLeaveWarning(active: boolean) {
+  useEffect(() => {
+    if (Platform.OS !== 'web' || !active || typeof window === 'undefined') return;
+    const warn = (event: BeforeUnloadEvent) => {
+      event.preventDefault();
+      event.returnValue = '';
+    };
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [active]);
 }
 
 /** The designer: the recipe's parts on one side, its numbers for one bottle beside them, updated as it changes. */
@@ -93,6 +110,7 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
   const evaluation = useRecipeEvaluationQuery(settled);
   const format = formats.find((f) => String(f.id) === values.bottleFormatId);
   const stale = saveError instanceof ApiError && saveError.code === 'stale_version';
+  useLeaveWarning(dirty && canEdit);
   return (
     <View style={styles.column}>
       {stale ? (
@@ -111,21 +129,23 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
       ) : saveError instanceof Error ? (
         <Banner tone="danger">{saveError.message}</Banner>
       ) : null}
-      {canEdit ? (
-        <View style={styles.saveBar}>
-          <Badge
-            label={`Version ${recipe.currentVersion}${dirty ? ' · unsaved changes' : ''}`}
-            tone={dirty ? 'caution' : 'neutral'}
-          />
-          <Button
-            label="Save as new version"
-            busy={isSubmitting}
-            disabled={!dirty || !content}
-            onPress={() => handleSubmit()}
-          />
-        </View>
-      ) : null}
-      {!wide && evaluation.data ? <SummaryStrip result={evaluation.data.carbonation} units={units} /> : null}
+      <View style={!wide && styles.stickyTop}>
+        {canEdit ? (
+          <View style={styles.saveBar}>
+            <Badge
+              label={`Version ${recipe.currentVersion}${dirty ? ' · unsaved changes' : ''}`}
+              tone={dirty ? 'caution' : 'neutral'}
+            />
+            <Button
+              label="Save as new version"
+              busy={isSubmitting}
+              disabled={!dirty || !content}
+              onPress={() => handleSubmit()}
+            />
+          </View>
+        ) : null}
+        {!wide && evaluation.data ? <SummaryStrip result={evaluation.data.carbonation} units={units} /> : null}
+      </View>
       <View style={[styles.layout, wide && styles.layoutWide]}>
         <View style={[styles.column, wide && styles.inputs]}>
           <Parts formats={formats} canEdit={canEdit} />
@@ -446,6 +466,15 @@ const styles = StyleSheet.create({
   line: { gap: space.sm, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },
   lineName: { fontFamily: fonts.semibold },
   left: { alignSelf: 'flex-start' },
+  // On phones the save bar and the key numbers stay at the top of the screen while the long form scrolls.
+  stickyTop: {
+    position: 'sticky' as never,
+    top: 0,
+    zIndex: 3,
+    gap: space.sm,
+    backgroundColor: colors.background,
+    paddingVertical: space.xs,
+  },
   saveBar: {
     flexDirection: 'row',
     flexWrap: 'wrap',
