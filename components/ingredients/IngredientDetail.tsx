@@ -16,7 +16,7 @@ interface MeasureRow {
   grams: number;
 }
 
-/** Everything known about one ingredient: per 100 g, per household measure, sugar per gram, allergens, source, changes. */
+/** Everything known about one ingredient: per 100 g, per household measure, its sugar, allergens, source, changes. */
 export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredient; canEdit: boolean }) {
   const changes = useIngredientChangesQuery(ingredient.id, ingredient.scope === 'house');
   const sugarPerG = ingredient.perGram.sugarsG;
@@ -42,11 +42,13 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
       </View>
       <View style={styles.grid}>
         <Card title="Sugar" style={styles.card}>
-          <Text variant="subheading">{value(sugarPerG, 'g per gram', 4)}</Text>
+          <Text variant="subheading">
+            {value(sugarPerG === null ? null : sugarPerG * 100, 'g of sugars per 100 g', 2)}
+          </Text>
           <Text variant="muted">
             {formatNumber(ingredient.fermentableSharePct, 0)} % of it yeast can ferment
             {ingredient.perGram.fermentableSugarsG !== null
-              ? ` (${formatNumber(ingredient.perGram.fermentableSugarsG, 4)} g per gram)`
+              ? ` (${formatNumber(ingredient.perGram.fermentableSugarsG * 100, 2)} g per 100 g)`
               : ''}
             . About {formatNumber(ingredient.steepSharePct, 0)} % reaches the liquid when steeped and strained.
           </Text>

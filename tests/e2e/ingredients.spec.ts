@@ -13,8 +13,8 @@ test('a developer searches the library, reads an ingredient and adds a house ing
   await expect(page.getByRole('link', { name: 'Raspberries, raw', exact: true })).toBeVisible();
   await shot(page, 'phone-ingredients-search');
   await page.getByRole('link', { name: 'Strawberries, raw', exact: true }).click();
-  // USDA SR25, NDB 09316: 4.89 g total sugars per 100 g, so 0.0489 g per gram.
-  await expect(page.getByText('0.0489 g per gram', { exact: true })).toBeVisible();
+  // USDA SR25, NDB 09316: 4.89 g total sugars per 100 g.
+  await expect(page.getByText('4.89 g of sugars per 100 g', { exact: true })).toBeVisible();
   await expect(page.getByText('Source: USDA SR25 record 09316')).toBeVisible();
   await shot(page, 'phone-ingredient-detail');
 
@@ -33,7 +33,8 @@ test('a developer searches the library, reads an ingredient and adds a house ing
   await shot(page, 'phone-house-ingredient-form');
   await page.getByRole('button', { name: 'Save ingredient' }).click();
   await expect(page.getByRole('heading', { name: `Orchard quince purée ${stamp}`, level: 1 })).toBeVisible();
-  await expect(page.getByText('0.1500 g per gram', { exact: true })).toBeVisible();
+  // 6 g in a 40 g serving = 15 g per 100 g.
+  await expect(page.getByText('15.00 g of sugars per 100 g', { exact: true })).toBeVisible();
   await expect(page.getByText('Tree nuts')).toBeVisible();
   await expect(page.getByText(/Rafi Castellan · created/)).toBeVisible();
 
