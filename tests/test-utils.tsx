@@ -4,7 +4,10 @@ import type { ReactElement, ReactNode } from 'react';
 
 /** Renders inside a fresh query cache that never retries, so every test starts clean. */
 export function render(ui: ReactElement, options?: RenderOptions) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  // No garbage-collection timers (gcTime: Infinity): a test's queries must not keep Jest running after it ends.
+  const client = new QueryClient({
+    defaultOptions: { queries: { retry: false, gcTime: Infinity }, mutations: { retry: false, gcTime: Infinity } },
+  });
   const Wrapper = ({ children }: { children: ReactNode }) => (
     <QueryClientProvider client={client}>{children}</QueryClientProvider>
   );

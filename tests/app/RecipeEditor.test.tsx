@@ -7,7 +7,11 @@ jest.mock('@/lib/api/client', () => {
   const actual = jest.requireActual('@/lib/api/client');
   return {
     ...actual,
-    api: { ...actual.api, post: () => new Promise(() => undefined), get: () => new Promise(() => undefined) },
+    api: {
+      ...actual.api,
+      post: () => Promise.reject(new Error('offline')),
+      get: () => Promise.reject(new Error('offline')),
+    },
   };
 });
 
