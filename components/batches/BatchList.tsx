@@ -3,18 +3,11 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Badge, Card, type Column, EmptyState, Loading, Segmented, Table, Text, TextField } from '@/components/ui';
+import { BATCH_STATE_TONE } from '@/components/ui/review-tone';
 import { type BatchSummary, useBatchesQuery, useTraceQuery } from '@/lib/api/batches';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { BATCH_STATE_LABELS, type BatchState } from '@/lib/schemas/batches';
 import { colors, fonts, fontSize, space } from '@/lib/theme';
-
-const STATE_TONE = {
-  'in-progress': 'info',
-  'awaiting-decision': 'caution',
-  released: 'success',
-  held: 'danger',
-  discarded: 'neutral',
-} as const;
 
 const columns: Column<BatchSummary>[] = [
   {
@@ -33,7 +26,7 @@ const columns: Column<BatchSummary>[] = [
     header: 'State',
     render: (b) => (
       <View style={styles.badges}>
-        <Badge label={BATCH_STATE_LABELS[b.state]} tone={STATE_TONE[b.state]} />
+        <Badge label={BATCH_STATE_LABELS[b.state]} tone={BATCH_STATE_TONE[b.state]} />
         {b.trial ? <Badge label="TRIAL" tone="caution" /> : null}
       </View>
     ),

@@ -2,6 +2,7 @@ import { Linking, StyleSheet, View } from 'react-native';
 
 import { Badge, Banner, Button, Card, FormStatus, Text } from '@/components/ui';
 import { PressureChart } from '@/components/ui/calculations/PressureChart';
+import { BATCH_STATE_TONE, LEVEL_LABEL, LEVEL_TONE } from '@/components/ui/review-tone';
 import { type BatchDetail, batchRecordUrl, useSignOffStepMutation } from '@/lib/api/batches';
 import { predictedGaugeBar } from '@/lib/batches/checks';
 import { env } from '@/lib/env';
@@ -14,14 +15,6 @@ import { ReadingForm } from './ReadingForm';
 import { DecisionForm, DeviationForm, IngredientLotForm } from './RecordForms';
 import { stageFromNextStep } from './stage';
 
-const TONE = { ok: 'success', caution: 'caution', danger: 'danger' } as const;
-const STATE_TONE = {
-  'in-progress': 'info',
-  'awaiting-decision': 'caution',
-  released: 'success',
-  held: 'danger',
-  discarded: 'neutral',
-} as const;
 const when = (iso: string) => new Date(iso).toLocaleString([], { dateStyle: 'short', timeStyle: 'short' });
 
 /** The floor screen of one batch: amounts large, the steps as a checklist, readings checked as they go in, the record. */
@@ -82,7 +75,7 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
   return (
     <View style={styles.wrap}>
       <View style={styles.badges}>
-        <Badge label={BATCH_STATE_LABELS[batch.state]} tone={STATE_TONE[batch.state]} />
+        <Badge label={BATCH_STATE_LABELS[batch.state]} tone={BATCH_STATE_TONE[batch.state]} />
         {batch.trial ? <Badge label="TRIAL: not for sale" tone="caution" /> : null}
         <Text variant="small">
           {batch.recipeName}, version {batch.version} · {batch.card.batch}
@@ -96,7 +89,7 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
             .join(' ')}
         </Banner>
       ) : null}
-      <Banner tone={TONE[batch.card.safety.level]} title={`Recipe safety: ${batch.card.safety.level}`}>
+      <Banner tone={LEVEL_TONE[batch.card.safety.level]} title={`Recipe safety: ${batch.card.safety.level}`}>
         {`${batch.card.safety.headline} ${batch.card.safety.rating}`}
       </Banner>
 
@@ -185,12 +178,7 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
         {timeline.map((e) => (
           <View key={e.key} style={styles.entry}>
             <View style={styles.badges}>
-              {e.level ? (
-                <Badge
-                  label={e.level === 'ok' ? 'OK' : e.level === 'caution' ? 'Caution' : 'Danger'}
-                  tone={TONE[e.level]}
-                />
-              ) : null}
+              {e.level ? <Badge label={LEVEL_LABEL[e.level]} tone={LEVEL_TONE[e.level]} /> : null}
               <Text>{e.text}</Text>
             </View>
             <Text variant="small">

@@ -14,6 +14,7 @@ import {
   Select,
   submitTo,
 } from '@/components/ui';
+import { LEVEL_LABEL, LEVEL_TONE } from '@/components/ui/review-tone';
 import { type BatchReadingEntry, useAddReadingMutation, useLabReportMutation } from '@/lib/api/batches';
 import { check, parseNumber } from '@/lib/forms';
 import {
@@ -47,8 +48,6 @@ const toInput = (v: Values) => ({
   note: v.note,
   correctsId: v.correctsId ? Number(v.correctsId) : null,
 });
-
-const TONE = { ok: 'success', caution: 'caution', danger: 'danger' } as const;
 
 /**
  * The "Record a reading" sheet of the floor screen: what was measured, the value on a numeric keypad, the stage
@@ -164,8 +163,8 @@ export function ReadingForm({
       </Formik>
       {last ? (
         <Banner
-          tone={TONE[last.check.level]}
-          title={`${READING_KIND_LABELS[last.kind]} recorded: ${last.check.level === 'ok' ? 'OK' : last.check.level === 'caution' ? 'Caution' : 'Danger'}`}
+          tone={LEVEL_TONE[last.check.level]}
+          title={`${READING_KIND_LABELS[last.kind]} recorded: ${LEVEL_LABEL[last.check.level]}`}
         >
           {last.check.message}
         </Banner>

@@ -175,4 +175,9 @@ export const stepParamsSchema = yup.object({
   n: yup.number().typeError('Step must be a number.').integer().min(1).max(100).required(),
 });
 
+export const readingParamsSchema = yup.object({
+  id: yup.number().typeError('Id must be a number.').integer().positive().required(),
+  readingId: yup.number().typeError('Reading must be a number.').integer().positive().required(),
+});
+
 export const lotParamsSchema = yup.object({ lotCode: yup.string().trim().min(3).max(40).required() });

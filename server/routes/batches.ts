@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import * as yup from 'yup';
 
 import {
   batchListQuerySchema,
@@ -7,6 +6,7 @@ import {
   deviationSchema,
   ingredientLotSchema,
   lotParamsSchema,
+  readingParamsSchema,
   readingSchema,
   startBatchSchema,
   stepParamsSchema,
@@ -21,11 +21,6 @@ import { batchRecordPdf } from '@/server/services/batch-record';
 import * as batches from '@/server/services/batches';
 
 export const batchesRouter = Router();
-
-const readingParams = yup.object({
-  id: yup.number().typeError('Id must be a number.').integer().positive().required(),
-  readingId: yup.number().typeError('Reading must be a number.').integer().positive().required(),
-});
 
 // Who starts and runs which batch (production: owners and brewers; trials: owners and developers) is checked in the
 // service against the batch itself; the route lets every member through that may read batches.
@@ -81,7 +76,7 @@ batchesRouter.post(
   '/:id/readings/:readingId/report',
   allow('batches.read', { accepts: 'multipart' }),
   receiveFile,
-  validate({ params: readingParams }, async ({ params }, res, req) => {
+  validate({ params: readingParamsSchema }, async ({ params }, res, req) => {
     res.status(201).json(await batches.addLabReport(authOf(res), params.id, params.readingId, req.file));
   }),
 );

@@ -1,11 +1,11 @@
 import { StyleSheet, View } from 'react-native';
 
-import { Badge, Text, type Tone } from '@/components/ui';
+import { Badge, Text } from '@/components/ui';
 import type { Finding } from '@/lib/chemistry/carbonation';
 import { space } from '@/lib/theme';
 
-const TONE: Record<Finding['level'], Tone> = { ok: 'success', caution: 'caution', danger: 'danger' };
-const LABEL: Record<Finding['level'], string> = { ok: 'OK', caution: 'Caution', danger: 'Danger' };
+import { LEVEL_LABEL, LEVEL_TONE } from '../review-tone';
+
 const ORDER: Record<Finding['level'], number> = { danger: 0, caution: 1, ok: 2 };
 
 /** The engine's findings, most serious first, each with its level in words as well as colour. */
@@ -18,9 +18,9 @@ export function FindingList({ findings }: { findings: Finding[] }) {
           role="listitem"
           key={finding.code}
           style={styles.item}
-          aria-label={`${LABEL[finding.level]}: ${finding.message}`}
+          aria-label={`${LEVEL_LABEL[finding.level]}: ${finding.message}`}
         >
-          <Badge label={LABEL[finding.level]} tone={TONE[finding.level]} />
+          <Badge label={LEVEL_LABEL[finding.level]} tone={LEVEL_TONE[finding.level]} />
           <Text style={styles.message}>{finding.message}</Text>
         </View>
       ))}
