@@ -144,6 +144,19 @@ describe('readings', () => {
     expect(bottle.body.check.predictedGaugeBar).toBeGreaterThan(1.2);
   });
 
+  it('takes 20 readings sent at once, every one stored', async () => {
+    const before = (await brewer.get(`/api/batches/${id}`).expect(200)).body.readings.length;
+    const answers = await Promise.all(
+      Array.from({ length: 20 }, (_, i) =>
+        brewer
+          .post(`/api/batches/${id}/readings`)
+          .send({ kind: 'temperature', value: 20 + i / 10, stage: 'conditioning' }),
+      ),
+    );
+    expect(answers.map((r) => r.status)).toEqual(Array(20).fill(201));
+    expect((await brewer.get(`/api/batches/${id}`).expect(200)).body.readings.length).toBe(before + 20);
+  });
+
   it('refuses values out of range, strings and a pressure without its temperature, changing nothing', async () => {
     const count = async () => (await brewer.get(`/api/batches/${id}`).expect(200)).body.readings.length;
     const n = await count();
