@@ -94,3 +94,46 @@ export interface Measure {
   label: string;
   grams: number;
 }
+
+/** Parts of a dataset description that say how it was sold or prepared, not what it is (dropped from short names). */
+const PREPARATION =
+  /^(raw|fresh|uncooked|plain|common|ground|frozen|cooked|canned|bottled|canned or bottled|unsweetened|sweetened|commercially prepared|prepared|enriched flour|all .*|with(out)? .*|includes .*|\d.*)$/i;
+/** Leading words that name a class, with the thing itself in the next part ("Spices, cardamom"). */
+const CLASS_WORDS: Record<string, string | null> = {
+  spices: null,
+  spice: null,
+  sweetener: null,
+  sweeteners: null,
+  sugars: 'sugar',
+  syrups: 'syrup',
+};
+
+/**
+ * A short name a person reads, made from a dataset's long description: "Cookies, shortbread, commercially prepared,
+ * plain" → "Shortbread cookies", "Spices, cinnamon, ground" → "Cinnamon", "Syrups, maple" → "Maple syrup". The head
+ * noun keeps one describing word at most; preparation notes and bracketed synonyms are dropped. A brewery can replace
+ * it; the full description stays on the ingredient.
+ */
+export function shortIngredientName(description: string): string {
+  let parts = description
+    .split(',')
+    .map((p) => p.replace(/\([^)]*\)?/g, '').trim())
+    .filter(Boolean);
+  let head = parts[0] ?? description.trim();
+  const klass = CLASS_WORDS[head.toLowerCase()];
+  if (klass !== undefined && parts.length > 1) {
+    parts = parts.slice(1);
+    head = klass === null ? parts[0] : `${parts[0]} ${klass}`;
+    return withDescriber(head, parts.slice(1));
+  }
+  return withDescriber(head, parts.slice(1));
+}
+
+function withDescriber(head: string, rest: string[]): string {
+  const describer = rest.find((p) => !PREPARATION.test(p));
+  // A describer that names the thing itself ("Cookies, graham crackers") stands alone.
+  const itself = describer !== undefined && /\s/.test(describer) && /s$/i.test(describer);
+  const name = describer ? (itself ? describer : `${describer} ${head.toLowerCase()}`) : head;
+  const short = name.charAt(0).toUpperCase() + name.slice(1);
+  return short.length > 80 ? `${short.slice(0, 79)}…` : short;
+}

@@ -18,6 +18,7 @@ import { BatchStepSignoff } from './models/batch-step-signoff';
 import { BottleFormat } from './models/bottle-format';
 import { Ingredient } from './models/ingredient';
 import { IngredientChange } from './models/ingredient-change';
+import { IngredientDisplayName } from './models/ingredient-display-name';
 import { Invitation } from './models/invitation';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
@@ -43,6 +44,7 @@ export {
   BottleFormat,
   Ingredient,
   IngredientChange,
+  IngredientDisplayName,
   Invitation,
   Organisation,
   OutboxMessage,
@@ -128,6 +130,7 @@ for (const model of [
   BottleFormat,
   Ingredient,
   IngredientChange,
+  IngredientDisplayName,
   Attachment,
   Recipe,
   RecipeVersion,
@@ -153,6 +156,8 @@ Organisation.hasMany(OutboxMessage, { foreignKey: 'organisationId', as: 'outboxM
 OutboxMessage.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Organisation.hasMany(BottleFormat, { foreignKey: 'organisationId', as: 'bottleFormats' });
 Organisation.hasMany(Ingredient, { foreignKey: 'organisationId', as: 'ingredients' });
+Ingredient.hasMany(IngredientDisplayName, { foreignKey: 'ingredientId', as: 'displayNames' });
+Organisation.hasMany(IngredientDisplayName, { foreignKey: 'organisationId', as: 'ingredientDisplayNames' });
 Ingredient.hasMany(IngredientChange, { foreignKey: 'ingredientId', as: 'changeLog' });
 IngredientChange.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Ingredient.hasMany(Attachment, { foreignKey: 'ingredientId', as: 'attachments' });

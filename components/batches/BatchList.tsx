@@ -5,6 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import { Badge, Card, type Column, EmptyState, Loading, Segmented, Table, Text, TextField } from '@/components/ui';
 import { BATCH_STATE_TONE } from '@/components/ui/review-tone';
 import { type BatchSummary, useBatchesQuery, useTraceQuery } from '@/lib/api/batches';
+import { formatDate } from '@/lib/format';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { BATCH_STATE_LABELS, type BatchState } from '@/lib/schemas/batches';
 import { colors, fonts, fontSize, space } from '@/lib/theme';
@@ -32,7 +33,7 @@ const columns: Column<BatchSummary>[] = [
     ),
   },
   { key: 'size', header: 'Bottles', render: (b) => String(b.bottles) },
-  { key: 'started', header: 'Started', render: (b) => `${b.startedAt.slice(0, 10)} · ${b.startedBy ?? 'someone'}` },
+  { key: 'started', header: 'Started', render: (b) => `${formatDate(b.startedAt)} · ${b.startedBy ?? 'someone'}` },
 ];
 
 /** The brewery's batches by state and lot code, and a trace search by a supplier's lot. */

@@ -6,6 +6,7 @@ import { BATCH_STATE_TONE, LEVEL_LABEL, LEVEL_TONE } from '@/components/ui/revie
 import { type BatchDetail, batchRecordUrl, useSignOffStepMutation } from '@/lib/api/batches';
 import { predictedGaugeBar } from '@/lib/batches/checks';
 import { env } from '@/lib/env';
+import { formatDateTime } from '@/lib/format';
 import { can, type Role } from '@/lib/roles';
 import { BATCH_STATE_LABELS, READING_KIND_LABELS, READING_UNITS, STAGE_LABELS } from '@/lib/schemas/batches';
 import { colors, fonts, fontSize, space } from '@/lib/theme';
@@ -15,7 +16,7 @@ import { ReadingForm } from './ReadingForm';
 import { DecisionForm, DeviationForm, IngredientLotForm } from './RecordForms';
 import { stageFromNextStep } from './stage';
 
-const when = (iso: string) => new Date(iso).toLocaleString([], { dateStyle: 'short', timeStyle: 'short' });
+const when = formatDateTime;
 
 /** The floor screen of one batch: amounts large, the steps as a checklist, readings checked as they go in, the record. */
 export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Banner, Button, Card, FormField, FormStatus, Segmented, submitTo, Text } from '@/components/ui';
 import { type BatchDetail, useAddDeviationMutation, useAddLotMutation, useDecideMutation } from '@/lib/api/batches';
+import { formatDate } from '@/lib/format';
 import { check } from '@/lib/forms';
 import { type Decision, decisionSchema, deviationSchema, ingredientLotSchema } from '@/lib/schemas/batches';
 import { space } from '@/lib/theme';
@@ -118,7 +119,7 @@ export function DecisionForm({ batch }: { batch: BatchDetail }) {
       {batch.card.approval ? (
         <Text variant="small">
           Recipe version {batch.version} approved by {batch.card.approval.by ?? 'an owner'} on{' '}
-          {batch.card.approval.at.slice(0, 10)}
+          {formatDate(batch.card.approval.at)}
           {batch.card.approval.overrideReason ? `, over a danger finding: ${batch.card.approval.overrideReason}` : ''}.
         </Text>
       ) : (

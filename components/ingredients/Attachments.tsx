@@ -5,6 +5,7 @@ import { Linking, StyleSheet, View } from 'react-native';
 import { Button, Card, FormStatus, Text } from '@/components/ui';
 import { useAttachmentsQuery, useDeleteAttachmentMutation, useUploadAttachmentMutation } from '@/lib/api/ingredients';
 import { env } from '@/lib/env';
+import { formatDate } from '@/lib/format';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
@@ -42,8 +43,7 @@ export function Attachments({ ingredientId, canUpload }: { ingredientId: number;
             onPress={() => Linking.openURL(`${env.apiUrl}${a.url}`)}
           />
           <Text variant="small">
-            {formatNumber(a.sizeBytes / 1024, 0)} KB · {a.uploadedBy ?? 'someone'} ·{' '}
-            {new Date(a.createdAt).toLocaleDateString()}
+            {formatNumber(a.sizeBytes / 1024, 0)} KB · {a.uploadedBy ?? 'someone'} · {formatDate(a.createdAt)}
           </Text>
           {canUpload && confirming !== a.id ? (
             <Button

@@ -2,11 +2,14 @@ import { StyleSheet, View } from 'react-native';
 
 import { Badge, Card, type Column, Table, Text } from '@/components/ui';
 import { type Ingredient, useIngredientChangesQuery } from '@/lib/api/ingredients';
+import { useBreweryCurrency } from '@/lib/api/session';
+import { formatDateTime, formatMoney } from '@/lib/format';
 import { ALLERGEN_LABELS, CATEGORY_LABELS } from '@/lib/ingredients';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
 import { Attachments } from './Attachments';
+import { DisplayNameForm } from './DisplayNameForm';
 
 const value = (v: number | null, unit: string, digits = 1) =>
   v === null ? 'not measured' : `${formatNumber(v, digits)} ${unit}`;
@@ -19,6 +22,7 @@ interface MeasureRow {
 /** Everything known about one ingredient: per 100 g, per household measure, its sugar, allergens, source, changes. */
 export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredient; canEdit: boolean }) {
   const changes = useIngredientChangesQuery(ingredient.id, ingredient.scope === 'house');
+  const currency = useBreweryCurrency();
   const sugarPerG = ingredient.perGram.sugarsG;
   const measureColumns: Column<MeasureRow>[] = [
     { key: 'measure', header: 'Measure', flex: 2, render: (m) => m.label },
@@ -40,6 +44,7 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
         />
         {ingredient.archived ? <Badge label="Archived" tone="caution" /> : null}
       </View>
+      {ingredient.scope === 'dataset' ? <DisplayNameForm ingredient={ingredient} canEdit={canEdit} /> : null}
       <View style={styles.grid}>
         <Card title="Sugar" style={styles.card}>
           <Text variant="subheading">
@@ -73,7 +78,7 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
           )}
           <Text variant="small">Source: {ingredient.source}</Text>
           {ingredient.costPerKg !== null ? (
-            <Text variant="small">Cost: {formatNumber(ingredient.costPerKg, 2)} per kg</Text>
+            <Text variant="small">Cost: {formatMoney(ingredient.costPerKg, currency)} per kg</Text>
           ) : null}
           {ingredient.notes ? <Text variant="small">{ingredient.notes}</Text> : null}
         </Card>
@@ -93,8 +98,7 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
         <Card title="Changes">
           {changes.data?.map((c) => (
             <Text key={c.id} variant="small">
-              {new Date(c.at).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })} ·{' '}
-              {c.by ?? 'someone'} · {c.action}
+              {formatDateTime(c.at)} ·{c.by ?? 'someone'} · {c.action}
               {c.action === 'updated' ? `: ${Object.keys(c.changes).join(', ')}` : ''}
             </Text>
           ))}

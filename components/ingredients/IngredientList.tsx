@@ -39,7 +39,7 @@ export function IngredientList({ showArchived }: { showArchived: boolean }) {
       flex: 2.4,
       render: (i) => (
         <Link href={`/ingredients/${i.id}`} style={styles.link}>
-          {i.name}
+          {i.displayName}
         </Link>
       ),
     },

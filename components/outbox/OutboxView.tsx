@@ -4,12 +4,13 @@ import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 import { Badge, Banner, Button, Card, EmptyState, Loading, Text } from '@/components/ui';
 import { useOutboxQuery } from '@/lib/api/outbox';
 import type { OutboxMessage } from '@/lib/api/types';
+import { formatDateTime } from '@/lib/format';
 import { colors, fonts, radius, space } from '@/lib/theme';
 
 import { MessageText } from './MessageText';
 
 const KIND_LABELS: Record<string, string> = { invitation: 'Invitation', 'password-reset': 'Password reset' };
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = formatDateTime;
 
 /** The local outbox: the e-mails this server would have sent, newest first, each readable with its links. */
 export function OutboxView() {

@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { Text } from '@/components/ui';
+import { formatDate } from '@/lib/format';
 import type { RecipeCard } from '@/lib/recipes/card';
 import { colors, fonts, fontSize, space } from '@/lib/theme';
 
@@ -16,7 +17,7 @@ export function RecipeCardView({ card }: { card: RecipeCard }) {
       </Text>
       {card.approval ? (
         <Text>
-          Approved for production by {card.approval.by ?? 'an owner'} on {card.approval.at.slice(0, 10)}
+          Approved for production by {card.approval.by ?? 'an owner'} on {formatDate(card.approval.at)}
           {card.approval.selfApproved ? ' (the brewery’s only owner, who also submitted it)' : ''}.
         </Text>
       ) : (

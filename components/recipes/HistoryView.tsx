@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { Button, Card, FormStatus, Loading, Text } from '@/components/ui';
 import { useRecipeDiffQuery, useRecipeVersionsQuery, useRestoreVersionMutation } from '@/lib/api/recipes';
+import { formatDateTime } from '@/lib/format';
 import { space } from '@/lib/theme';
 
 /** Every saved version; compare any with the newest, and bring an old one back as a new version. */
@@ -24,7 +25,7 @@ export function HistoryView({ recipeId, current, canEdit }: { recipeId: number; 
                 {v.number === current ? ' (current)' : ''} · {v.note || 'no note'}
               </Text>
               <Text variant="small">
-                {v.savedBy ?? 'someone'} · {new Date(v.savedAt).toLocaleString()}
+                {v.savedBy ?? 'someone'} · {formatDateTime(v.savedAt)}
               </Text>
             </View>
             {v.number !== current ? (

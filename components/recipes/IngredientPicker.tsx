@@ -27,18 +27,19 @@ export function IngredientPicker({ onPick, exclude }: { onPick: (ingredient: Ing
       {items.map((ingredient) => (
         <View key={ingredient.id} style={styles.row}>
           <View style={styles.text}>
-            <Text>{ingredient.name}</Text>
+            <Text>{ingredient.displayName}</Text>
             <Text variant="small">
               {CATEGORY_LABELS[ingredient.category]} ·{' '}
               {ingredient.per100g.sugarsG === null
                 ? 'sugars not measured'
                 : `${formatNumber(ingredient.per100g.sugarsG, 1)} g sugars per 100 g`}
               {ingredient.scope === 'house' ? ' · house' : ''}
+              {ingredient.displayName !== ingredient.name ? ` · ${ingredient.name}` : ''}
             </Text>
           </View>
           <Button
             label="Add"
-            accessibleName={`Add ${ingredient.name}`}
+            accessibleName={`Add ${ingredient.displayName}`}
             variant="secondary"
             onPress={() => {
               onPick(ingredient);

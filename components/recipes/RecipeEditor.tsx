@@ -20,6 +20,7 @@ import { usePrimingQuery } from '@/lib/api/calculations';
 import { ApiError } from '@/lib/api/client';
 import { type RecipeDetail, useRecipeEvaluationQuery } from '@/lib/api/recipes';
 import { SUGAR_OPTIONS, SUGARS } from '@/lib/chemistry/sugars';
+import { formatDateTime } from '@/lib/format';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { formErrors, type RecipeFormValues, toContent, toFormValues } from '@/lib/recipes/form';
 import { processStages } from '@/lib/recipes/stages';
@@ -197,7 +198,7 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
         </View>
       </View>
       <Text variant="small">
-        Last saved by {recipe.savedBy ?? 'someone'} on {new Date(recipe.savedAt).toLocaleString()}.
+        Last saved by {recipe.savedBy ?? 'someone'} on {formatDateTime(recipe.savedAt)}.
       </Text>
     </View>
   );
@@ -341,7 +342,7 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
                 ...values.lines,
                 {
                   ingredientId: ingredient.id,
-                  name: ingredient.name,
+                  name: ingredient.displayName,
                   amount: '',
                   unit: 'g-per-l',
                   extractionPct: String(ingredient.steepSharePct),

@@ -3,6 +3,8 @@ import { StyleSheet, View } from 'react-native';
 import { Badge, Card, Text } from '@/components/ui';
 import { CarbonationResults } from '@/components/ui/calculations/CarbonationResults';
 import type { RecipeEvaluation } from '@/lib/api/recipes';
+import { useBreweryCurrency } from '@/lib/api/session';
+import { formatMoney } from '@/lib/format';
 import { ALLERGEN_LABELS } from '@/lib/ingredients';
 import { space } from '@/lib/theme';
 import { formatNumber, type UnitSystem } from '@/lib/units';
@@ -19,6 +21,7 @@ export function RecipeResults({
   limitPercent: number;
   bottleName: string;
 }) {
+  const currency = useBreweryCurrency();
   return (
     <View style={styles.wrap}>
       <Card title="Sugar in each bottle" aside={<Text variant="small">{bottleName}</Text>}>
@@ -45,7 +48,7 @@ export function RecipeResults({
         <Text>
           {evaluation.cost.perBottle === null
             ? `Cost unknown: no cost per kg for ${evaluation.cost.missing.join(', ')}.`
-            : `Ingredients cost ${formatNumber(evaluation.cost.perBottle, 3)} per bottle, ${formatNumber(evaluation.cost.perLitre ?? 0, 2)} per litre.`}
+            : `Ingredients cost ${formatMoney(evaluation.cost.perBottle, currency, 3)} per bottle, ${formatMoney(evaluation.cost.perLitre ?? 0, currency)} per litre.`}
         </Text>
         {evaluation.lines.map((line) => (
           <Text key={line.ingredientId} variant="small">

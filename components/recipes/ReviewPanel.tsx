@@ -15,10 +15,15 @@ import {
   useTastingsQuery,
   useWithdrawMutation,
 } from '@/lib/api/recipes';
+import { useBreweryCurrency } from '@/lib/api/session';
 import type { Session } from '@/lib/api/types';
+import { SUGARS } from '@/lib/chemistry/sugars';
+import { formatDate, formatDateTime, formatMoney } from '@/lib/format';
 import { can } from '@/lib/roles';
+import { AMOUNT_UNIT_LABELS } from '@/lib/schemas/recipes';
 import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { space } from '@/lib/theme';
+import { formatNumber } from '@/lib/units';
 
 const ACTION_LABELS: Record<string, string> = {
   submitted: 'Submitted',
@@ -63,8 +68,7 @@ export function ReviewPanel({ recipeId, session }: { recipeId: number; session: 
         {events.map((e) => (
           <View key={e.id} style={styles.event}>
             <Text>
-              {ACTION_LABELS[e.action] ?? e.action} · version {e.version} · {e.by ?? 'someone'} ·{' '}
-              {new Date(e.at).toLocaleString()}
+              {ACTION_LABELS[e.action] ?? e.action} · version {e.version} · {e.by ?? 'someone'} · {formatDateTime(e.at)}
               {e.selfApproved ? ' · approved by the submitter, the brewery’s only owner' : ''}
             </Text>
             {e.comment ? <Text variant="muted">“{e.comment}”</Text> : null}
@@ -124,6 +128,10 @@ function Decision({
   const detail = useRecipeQuery(recipeId, version);
   const evaluation = useRecipeEvaluationQuery(detail.data?.content);
   const tastings = useTastingsQuery(recipeId);
+  const currency = useBreweryCurrency();
+  const content = detail.data?.content;
+  const names = detail.data?.ingredientNames ?? {};
+  const tasted = tastings.data?.filter((t) => t.versionNumber <= version) ?? [];
   const diff = useRecipeDiffQuery(recipeId, approvedVersion, version);
   const approve = useApproveMutation(recipeId);
   const giveBack = useReturnMutation(recipeId);
@@ -142,19 +150,67 @@ function Decision({
   return (
     <View style={styles.form}>
       <Text variant="subheading">Version {version}, before you decide</Text>
-      {evaluation.data ? (
-        <>
-          <FindingList findings={evaluation.data.carbonation.findings} />
-          <Text variant="small">
-            Allergens: {evaluation.data.allergens.length ? evaluation.data.allergens.join(', ') : 'none recorded'} ·
-            cost per bottle:{' '}
-            {evaluation.data.cost.perBottle === null ? 'unknown' : evaluation.data.cost.perBottle.toFixed(3)} ·
-            tastings: {tastings.data?.length ?? 0}
-          </Text>
-        </>
-      ) : (
-        <Loading label="Working out its numbers…" />
-      )}
+      <View style={styles.columns}>
+        <Card title="Findings" style={styles.column}>
+          {evaluation.data ? (
+            <>
+              <FindingList findings={evaluation.data.carbonation.findings} />
+              <Text variant="small">
+                Allergens: {evaluation.data.allergens.length ? evaluation.data.allergens.join(', ') : 'none recorded'} ·
+                cost per bottle:{' '}
+                {evaluation.data.cost.perBottle === null
+                  ? 'unknown'
+                  : formatMoney(evaluation.data.cost.perBottle, currency, 3)}
+              </Text>
+            </>
+          ) : (
+            <Loading label="Working out its numbers…" />
+          )}
+        </Card>
+        <Card title="What goes in" style={styles.column}>
+          {content ? (
+            <>
+              {content.lines.map((l) => (
+                <Text key={l.ingredientId}>
+                  {names[l.ingredientId] ?? `Ingredient ${l.ingredientId}`}: {formatNumber(l.amount, 1)}{' '}
+                  {AMOUNT_UNIT_LABELS[l.unit]}
+                  {content.process.method === 'steep-strain'
+                    ? `, ${formatNumber(l.extractionPct, 0)} % reaches the liquid`
+                    : ''}
+                </Text>
+              ))}
+              {content.sugars
+                .filter((s) => s.gPerL > 0)
+                .map((s) => (
+                  <Text key={s.type}>
+                    {SUGARS[s.type].label}: {formatNumber(s.gPerL, 1)} g per litre
+                  </Text>
+                ))}
+              <Text variant="small">
+                Base: {content.baseBrew.name}, pH {content.baseBrew.ph ?? 'not given'} ·{' '}
+                {content.process.method === 'steep-strain' ? 'steeped and strained' : 'flavoured in the bottle'}
+              </Text>
+            </>
+          ) : (
+            <Loading label="Loading the version…" />
+          )}
+        </Card>
+        <Card title={`Tastings (${tasted.length})`} style={styles.column}>
+          {tasted.length === 0 ? <Text variant="small">Nobody has tasted this recipe yet.</Text> : null}
+          {tasted.map((t) => (
+            <View key={t.id} style={styles.event}>
+              <Text variant="label">
+                {formatDate(t.tastedOn)} · version {t.versionNumber} · {t.by ?? 'someone'}
+              </Text>
+              <Text variant="small">
+                Sweetness {t.scores.sweetness}, sourness {t.scores.sourness}, fizz {t.scores.fizz}, flavour{' '}
+                {t.scores.flavour} (of 5)
+              </Text>
+              {t.notes ? <Text>{t.notes}</Text> : null}
+            </View>
+          ))}
+        </Card>
+      </View>
       {approvedVersion !== null && diff.data ? (
         <View>
           <Text variant="label">Changed since approved version {approvedVersion}</Text>
@@ -226,5 +282,8 @@ const styles = StyleSheet.create({
   form: { gap: space.md, paddingTop: space.sm },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   event: { gap: space.xxs, paddingBottom: space.sm },
+  // Side by side on a wide screen, one under another on a phone.
+  columns: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-start' },
+  column: { flexGrow: 1, flexBasis: 300 },
   left: { alignSelf: 'flex-start' },
 });

@@ -17,6 +17,7 @@ import { check, parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { withSugarAddition } from '@/lib/recipes/tasting';
 import { type RecipeContent, tastingSchema } from '@/lib/schemas/recipes';
+import { formatDate } from '@/lib/format';
 import { space } from '@/lib/theme';
 
 const SCALES = [
@@ -167,7 +168,7 @@ export function TastingsView({
         {tastings.data?.map((t) => (
           <View key={t.id} style={styles.entry}>
             <Text>
-              {t.tastedOn} · {t.by ?? 'someone'} · tasted version {t.versionNumber}
+              {formatDate(t.tastedOn)} · {t.by ?? 'someone'} · tasted version {t.versionNumber}
             </Text>
             {t.createdVersion ? (
               <Button

@@ -1,8 +1,19 @@
 import { Formik } from 'formik';
 import { StyleSheet, View } from 'react-native';
 
-import { Banner, Button, FormField, FormNumberField, FormStatus, Segmented, submitTo, Text } from '@/components/ui';
+import {
+  Banner,
+  Button,
+  FormField,
+  FormNumberField,
+  FormStatus,
+  Segmented,
+  Select,
+  submitTo,
+  Text,
+} from '@/components/ui';
 import type { Organisation } from '@/lib/api/types';
+import { CURRENCIES } from '@/lib/format';
 import { check, parseNumber } from '@/lib/forms';
 import { type OrganisationInput, organisationSchema } from '@/lib/schemas/team';
 import { space } from '@/lib/theme';
@@ -20,6 +31,7 @@ type Values = {
   warmestTempC: string;
   ratingSharePercent: string;
   lotPrefix: string;
+  currency: string;
   licensed: 'no' | 'yes';
 };
 const toInput = (v: Values) => ({
@@ -28,6 +40,7 @@ const toInput = (v: Values) => ({
   warmestTempC: parseNumber(v.warmestTempC),
   ratingSharePercent: parseNumber(v.ratingSharePercent),
   lotPrefix: v.lotPrefix,
+  currency: v.currency,
   licensedForAlcohol: v.licensed === 'yes',
 });
 
@@ -41,6 +54,7 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
         warmestTempC: String(organisation.warmestTempC),
         ratingSharePercent: String(organisation.ratingSharePercent),
         lotPrefix: organisation.lotPrefix,
+        currency: organisation.currency,
         licensed: organisation.licensedForAlcohol ? 'yes' : 'no',
       }}
       enableReinitialize
@@ -75,6 +89,13 @@ export function BrewerySettingsForm({ organisation, onSubmit, error, saved }: Pr
             label="Lot code prefix"
             autoCapitalize="characters"
             hint="Starts every lot code, e.g. WCD in WCD-261202-02: 1 to 8 letters or digits."
+          />
+          <Select
+            compact
+            label="Currency of ingredient costs"
+            value={values.currency}
+            onChange={(v) => setFieldValue('currency', v)}
+            options={CURRENCIES.map((c) => ({ value: c, label: c }))}
           />
           <Segmented
             label="Licensed to make alcoholic beverages"

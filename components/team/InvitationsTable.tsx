@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { Badge, Button, type Column, EmptyState, FormStatus, Table, Text, type Tone } from '@/components/ui';
 import { useResendInvitationMutation, useRevokeInvitationMutation } from '@/lib/api/team';
 import type { Invitation, InvitationStatus } from '@/lib/api/types';
+import { formatDate } from '@/lib/format';
 import { ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
@@ -12,9 +13,6 @@ const STATUS: Record<InvitationStatus, { label: string; tone: Tone }> = {
   accepted: { label: 'Joined', tone: 'success' },
   revoked: { label: 'Withdrawn', tone: 'neutral' },
 };
-
-const formatDate = (iso: string) =>
-  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** Open invitations: resend a fresh link (7 more days) or withdraw one. */
 export function InvitationsTable({ invitations }: { invitations: Invitation[] }) {

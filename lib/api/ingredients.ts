@@ -1,7 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
 import type { Category } from '@/lib/ingredients';
-import type { HouseIngredientInput } from '@/lib/schemas/ingredients';
+import type { DisplayNameInput, HouseIngredientInput } from '@/lib/schemas/ingredients';
 
 import { api } from './client';
 import { staleTimes } from './query-client';
@@ -102,5 +102,15 @@ export function useDeleteAttachmentMutation(ingredientId: number) {
   return useMutation({
     mutationFn: (attachmentId: number) => api.delete<void>(`/attachments/${attachmentId}`),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['ingredients', 'attachments', ingredientId] }),
+  });
+}
+
+/** Sets the brewery's short name for a dataset ingredient; recipes, cards and batches read it at once. */
+export function useDisplayNameMutation(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: DisplayNameInput) => api.put<Ingredient>(`/ingredients/${id}/display-name`, input),
+    // Names appear in recipes, cards and batches as well as the library.
+    onSuccess: () => queryClient.invalidateQueries(),
   });
 }

@@ -152,3 +152,8 @@ export function useUpdateOrganisationMutation() {
 export function useChangePasswordMutation() {
   return useMutation({ mutationFn: (input: ChangePasswordInput) => api.post<Session>('/profile/password', input) });
 }
+
+/** The currency the brewery keeps its costs in (US dollars until an owner chooses another). */
+export function useBreweryCurrency(): string {
+  return useSessionQuery().data?.organisation.currency ?? 'USD';
+}

@@ -22,6 +22,8 @@ export interface Organisation {
   ratingSharePercent: number;
   /** Printed at the start of every lot code. */
   lotPrefix: string;
+  /** ISO 4217 code of the currency ingredient costs are kept in. */
+  currency: string;
   /** Declared by an owner: licensed to make alcoholic beverages (versions at or over the limit may then be approved). */
   licensedForAlcohol: boolean;
 }
@@ -102,7 +104,10 @@ export interface BottleFormat extends BottleFormatInput {
 export interface Ingredient {
   id: number;
   scope: 'dataset' | 'house';
+  /** The full name: the dataset's description, or the house ingredient's name. */
   name: string;
+  /** The name people read in lists, recipes and cards: the brewery's short name, or one made from the description. */
+  displayName: string;
   category: Category;
   per100g: {
     energyKcal: number | null;

@@ -64,21 +64,22 @@ function describe(exactBase: number, exact: number, unit: Rounded['unit'], resol
 }
 
 /**
- * A mass in grams rounded to a sensible resolution for its size (common practice, no source: what kitchen and
- * platform scales read): metric 0.1 g below 10 g, 1 g below 100 g, 5 g below 1 kg, then kg to 0.01 kg (0.05 kg from
- * 20 kg); US 0.05 oz below 1 oz, 0.1 oz below 1 lb, then lb to 0.01 lb (0.05 lb from 50 lb).
+ * A mass in grams rounded to a scale step chosen from its size: the step is at most 1 % of the amount, so rounding
+ * moves it by half a percent at most (common practice, no source: the readings of pocket, kitchen and platform
+ * scales). Metric 0.1 g below 100 g, 1 g below 1 kg, then kg to 0.01 kg (0.05 kg from 20 kg): a 187.5 g sugar dose
+ * reads 188 g, not 190 g. US 0.01 oz below 10 oz, 0.1 oz below 1 lb, then lb to 0.01 lb (0.05 lb from 50 lb). Only
+ * the smallest amounts (a few grams, a fraction of an ounce) can then round more than 1 % off, and say so.
  */
 export function roundMass(grams: number, units: UnitSystem): Rounded {
   if (units === 'us') {
     const oz = convertUnit(grams, 'g', 'oz');
-    if (oz < 1) return describe(grams, oz, 'oz', 0.05);
+    if (oz < 10) return describe(grams, oz, 'oz', 0.01);
     if (oz < 16) return describe(grams, oz, 'oz', 0.1);
     const lb = convertUnit(grams, 'g', 'lb');
     return describe(grams, lb, 'lb', lb < 50 ? 0.01 : 0.05);
   }
-  if (grams < 10) return describe(grams, grams, 'g', 0.1);
-  if (grams < 100) return describe(grams, grams, 'g', 1);
-  if (grams < 1000) return describe(grams, grams, 'g', 5);
+  if (grams < 100) return describe(grams, grams, 'g', 0.1);
+  if (grams < 1000) return describe(grams, grams, 'g', 1);
   const kg = grams / 1000;
   return describe(grams, kg, 'kg', kg < 20 ? 0.01 : 0.05);
 }

@@ -97,3 +97,14 @@ export function per100g(value: number | null | undefined, servingGrams: number):
 
 /** A dataset food copied into the house library under a name of the brewery's own. */
 export const copyIngredientSchema = yup.object({ name: ingredientName() });
+
+/** A brewery's short name for a dataset ingredient; empty goes back to the one made from the description. */
+export const displayNameSchema = yup.object({
+  displayName: yup
+    .string()
+    .trim()
+    .max(80, 'Keep the display name under 80 characters.')
+    .defined('Enter a display name, or leave it empty for the default.')
+    .default(''),
+});
+export type DisplayNameInput = yup.InferType<typeof displayNameSchema>;

@@ -1,5 +1,6 @@
 import * as yup from 'yup';
 
+import { CURRENCIES } from '@/lib/format';
 import { type Role, ROLES } from '@/lib/roles';
 import { UNIT_SYSTEMS, type UnitSystem } from '@/lib/units';
 
@@ -52,6 +53,7 @@ export const organisationSchema = yup.object({
   }).optional(),
   licensedForAlcohol: yup.boolean().strict().optional(),
   lotPrefix: lotPrefixField().optional(),
+  currency: yup.string().oneOf(CURRENCIES, 'Choose a currency from the list.').optional(),
 });
 export type OrganisationInput = yup.InferType<typeof organisationSchema>;
 

@@ -13,6 +13,7 @@ import * as tastingVersions from './0010-tasting-versions';
 import * as ratingShare from './0011-rating-share';
 import * as dropRecipeStatus from './0012-drop-recipe-status';
 import * as batches from './0013-batches';
+import * as displayNames from './0014-display-names-and-currency';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -34,4 +35,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0011-rating-share', ...ratingShare },
   { name: '0012-drop-recipe-status', ...dropRecipeStatus },
   { name: '0013-batches', ...batches },
+  { name: '0014-display-names-and-currency', ...displayNames },
 ];

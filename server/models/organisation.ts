@@ -21,6 +21,8 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
   declare ratingSharePercent: CreationOptional<number>;
   /** Printed at the start of every lot code, e.g. WCD in WCD-261202-02. */
   declare lotPrefix: CreationOptional<string>;
+  /** ISO 4217 code of the currency ingredient costs are kept in. */
+  declare currency: CreationOptional<string>;
   /** Declared by an owner: the brewery is licensed to make alcoholic beverages, so versions at or over the limit may be approved. */
   declare licensedForAlcohol: CreationOptional<boolean>;
   declare licenceDeclaredById: CreationOptional<number | null>;
@@ -36,6 +38,7 @@ export class Organisation extends Model<InferAttributes<Organisation>, InferCrea
         abvLimitPercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: 0.5 },
         warmestTempC: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_WARMEST_TEMP_C },
         lotPrefix: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'LOT' },
+        currency: { type: DataTypes.STRING(3), allowNull: false, defaultValue: 'USD' },
         ratingSharePercent: { type: DataTypes.FLOAT, allowNull: false, defaultValue: DEFAULT_RATING_SHARE * 100 },
         licensedForAlcohol: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         licenceDeclaredById: { type: DataTypes.INTEGER, allowNull: true },

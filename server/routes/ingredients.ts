@@ -1,7 +1,12 @@
 import { Router } from 'express';
 
 import { idParam } from '@/lib/schemas/common';
-import { copyIngredientSchema, houseIngredientSchema, ingredientSearchSchema } from '@/lib/schemas/ingredients';
+import {
+  copyIngredientSchema,
+  displayNameSchema,
+  houseIngredientSchema,
+  ingredientSearchSchema,
+} from '@/lib/schemas/ingredients';
 import { allow, authOf } from '@/server/middleware/access';
 import { receiveFile } from '@/server/middleware/upload';
 import { validate } from '@/server/middleware/validate';
@@ -22,7 +27,7 @@ ingredientsRouter.get(
   '/:id',
   allow('signed-in'),
   validate({ params: idParam }, async ({ params }, res) => {
-    res.json(ingredients.toIngredientDto(await ingredients.visibleIngredient(authOf(res), params.id)));
+    res.json(await ingredients.ingredientFor(authOf(res), params.id));
   }),
 );
 
@@ -47,6 +52,14 @@ ingredientsRouter.put(
   allow('ingredients.edit'),
   validate({ params: idParam, body: houseIngredientSchema }, async ({ params, body }, res) => {
     res.json(await ingredients.updateHouseIngredient(authOf(res), params.id, body));
+  }),
+);
+
+ingredientsRouter.put(
+  '/:id/display-name',
+  allow('ingredients.edit'),
+  validate({ params: idParam, body: displayNameSchema }, async ({ params, body }, res) => {
+    res.json(await ingredients.setDisplayName(authOf(res), params.id, body.displayName));
   }),
 );
 

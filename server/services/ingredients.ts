@@ -1,9 +1,9 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 
 import type { Ingredient as IngredientDtoShape, IngredientChangeEntry, IngredientPage } from '@/lib/api/types';
-import { CATEGORIES, type Measure } from '@/lib/ingredients';
+import { CATEGORIES, type Measure, shortIngredientName } from '@/lib/ingredients';
 import { type HouseIngredientInput, type IngredientSearch, per100g } from '@/lib/schemas/ingredients';
-import { Ingredient, IngredientChange, sequelize, transaction, User } from '@/server/db';
+import { Ingredient, IngredientChange, IngredientDisplayName, sequelize, transaction, User } from '@/server/db';
 import { conflict, forbidden, notFound } from '@/server/errors';
 import type { DatasetIngredient } from '@/server/usda/sr-files';
 
@@ -13,11 +13,35 @@ export type IngredientDto = IngredientDtoShape;
 
 const div100 = (v: number | null) => (v === null ? null : v / 100);
 
-export function toIngredientDto(i: Ingredient): IngredientDto {
+/**
+ * The names a brewery reads for these ingredients: its own short name for a dataset row when it set one, else the
+ * short name made from the dataset's description; a house ingredient's own name.
+ */
+export async function displayNames(
+  organisationId: number,
+  rows: Pick<Ingredient, 'id' | 'name' | 'organisationId'>[],
+  transaction?: Transaction,
+): Promise<Map<number, string>> {
+  const dataset = rows.filter((r) => r.organisationId === null).map((r) => r.id);
+  const chosen = dataset.length
+    ? await IngredientDisplayName.findAll({
+        where: { organisationId, ingredientId: dataset },
+        attributes: ['ingredientId', 'name'],
+        transaction,
+      })
+    : [];
+  const own = new Map(chosen.map((c) => [c.ingredientId, c.name]));
+  return new Map(
+    rows.map((r) => [r.id, r.organisationId === null ? (own.get(r.id) ?? shortIngredientName(r.name)) : r.name]),
+  );
+}
+
+export function toIngredientDto(i: Ingredient, displayName?: string): IngredientDto {
   return {
     id: i.id,
     scope: i.organisationId === null ? 'dataset' : 'house',
     name: i.name,
+    displayName: displayName ?? (i.organisationId === null ? shortIngredientName(i.name) : i.name),
     category: i.category,
     per100g: {
       energyKcal: i.energyKcal,
@@ -175,8 +199,9 @@ export async function searchIngredients(auth: AuthContext, search: IngredientSea
   ]);
   const rows = await Ingredient.findAll({ where: { id: ids.map((r) => r.id) } });
   const byId = new Map(rows.map((r) => [r.id, r]));
+  const names = await displayNames(auth.organisationId, rows);
   return {
-    items: ids.map((r) => toIngredientDto(byId.get(r.id)!)),
+    items: ids.map((r) => toIngredientDto(byId.get(r.id)!, names.get(r.id))),
     total,
     page: search.page,
     pageSize: search.pageSize,
@@ -203,6 +228,32 @@ async function ownHouseIngredient(auth: AuthContext, id: number, transaction?: T
   if (found.organisationId === null)
     throw forbidden('Dataset ingredients are read-only. Copy it to a house ingredient to change it.');
   return found;
+}
+
+/** One ingredient as this brewery reads it, with its display name. */
+export async function ingredientFor(auth: AuthContext, id: number): Promise<IngredientDto> {
+  const found = await visibleIngredient(auth, id);
+  return toIngredientDto(found, (await displayNames(auth.organisationId, [found])).get(found.id));
+}
+
+/**
+ * Sets the brewery's short name for a dataset ingredient; an empty name goes back to the one made from the dataset's
+ * description. House ingredients are renamed on their own form.
+ */
+export async function setDisplayName(auth: AuthContext, id: number, name: string): Promise<IngredientDto> {
+  const found = await visibleIngredient(auth, id);
+  if (found.organisationId !== null)
+    throw conflict('A house ingredient’s name is its display name: change it on its form.', {
+      displayName: 'Change a house ingredient’s name on its form.',
+    });
+  await transaction(async (t) => {
+    const where = { organisationId: auth.organisationId, ingredientId: id };
+    const existing = await IngredientDisplayName.findOne({ where, transaction: t });
+    if (!name) await existing?.destroy({ transaction: t });
+    else if (existing) await existing.update({ name }, { transaction: t });
+    else await IngredientDisplayName.create({ ...where, name }, { transaction: t });
+  });
+  return ingredientFor(auth, id);
 }
 
 export async function ingredientChanges(auth: AuthContext, id: number): Promise<IngredientChangeEntry[]> {

@@ -33,6 +33,7 @@ export async function updateOrganisation(
     warmestTempC: input.warmestTempC,
     ratingSharePercent: input.ratingSharePercent,
     lotPrefix: input.lotPrefix,
+    currency: input.currency,
   };
   const settings = Object.fromEntries(Object.entries(given).filter(([, value]) => value !== undefined));
   await organisation.update({ name: input.name, abvLimitPercent: input.abvLimitPercent, ...settings, ...licence });

@@ -18,6 +18,7 @@ import { Ingredient, Recipe, RecipeReview, RecipeVersion, Tasting, transaction, 
 import { badRequest, HttpError, notFound } from '@/server/errors';
 
 import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
+import { displayNames } from './ingredients';
 import { findOwnRecipe } from './own-recipe';
 import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
@@ -49,12 +50,13 @@ async function ingredientFacts(
       : await Ingredient.findAll({
           where: { id: ids, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
         });
+  const names = await displayNames(auth.organisationId, rows);
   const facts = new Map(
     rows.map((r) => [
       r.id,
       {
         id: r.id,
-        name: r.name,
+        name: names.get(r.id) ?? r.name,
         sugarsG: r.sugarsG,
         carbohydrateG: r.carbohydrateG,
         fibreG: r.fibreG,
@@ -160,7 +162,10 @@ async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<R
   });
   if (!version) throw notFound('No such version of this recipe.');
   const ids = version.content.lines.map((l) => l.ingredientId);
-  const names = ids.length ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
+  const rows = ids.length
+    ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name', 'organisationId'] })
+    : [];
+  const names = await displayNames(recipe.organisationId, rows);
   const { reviewState: _state, ...head } = summary(recipe);
   return {
     ...head,
@@ -171,7 +176,7 @@ async function detail(recipe: Recipe, number = recipe.currentVersion): Promise<R
     versionNote: version.note,
     savedBy: version.createdBy?.name ?? null,
     savedAt: version.createdAt.toISOString(),
-    ingredientNames: Object.fromEntries(names.map((n) => [n.id, n.name])),
+    ingredientNames: Object.fromEntries(names),
   };
 }
 
@@ -270,8 +275,10 @@ export async function diffVersions(auth: AuthContext, id: number, from: number, 
   ]);
   if (!a || !b) throw notFound('No such version of this recipe.');
   const ids = [...a.content.lines, ...b.content.lines].map((l) => l.ingredientId);
-  const rows = ids.length ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
-  return diffRecipes(a, b, new Map(rows.map((r) => [r.id, r.name])));
+  const rows = ids.length
+    ? await Ingredient.findAll({ where: { id: ids }, attributes: ['id', 'name', 'organisationId'] })
+    : [];
+  return diffRecipes(a, b, await displayNames(auth.organisationId, rows));
 }
 
 /** Any version becomes the newest version again, as a new version: history is never rewritten. */

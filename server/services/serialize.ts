@@ -32,6 +32,7 @@ export function toSession(user: User, organisation: Organisation): Session {
       warmestTempC: organisation.warmestTempC,
       ratingSharePercent: organisation.ratingSharePercent,
       lotPrefix: organisation.lotPrefix,
+      currency: organisation.currency,
       licensedForAlcohol: organisation.licensedForAlcohol,
     },
   };

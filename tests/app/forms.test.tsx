@@ -88,6 +88,7 @@ describe('BrewerySettingsForm', () => {
     warmestTempC: 35,
     ratingSharePercent: 80,
     lotPrefix: 'LOT',
+    currency: 'USD',
     licensedForAlcohol: false,
   };
 
@@ -108,6 +109,7 @@ describe('BrewerySettingsForm', () => {
         warmestTempC: 38,
         ratingSharePercent: 70,
         lotPrefix: 'LOT',
+        currency: 'USD',
         licensedForAlcohol: false,
       }),
     );

@@ -11,6 +11,7 @@ const session = (role: Role): Session => ({
     warmestTempC: 35,
     ratingSharePercent: 80,
     lotPrefix: 'LOT',
+    currency: 'USD',
     licensedForAlcohol: false,
   },
 });

@@ -40,9 +40,15 @@ describe('batch sizes', () => {
 });
 
 describe('rounding to what a scale reads', () => {
-  it('uses grams below 1 kg and kilograms above, showing the resolution', () => {
+  it('chooses the scale step from the amount, so rounding moves it by half a percent at most', () => {
     expect(roundMass(5.28, 'metric')).toMatchObject({ value: 5.3, unit: 'g', resolution: 0.1, warn: false });
-    expect(roundMass(340.56, 'metric')).toMatchObject({ value: 340, unit: 'g', resolution: 5 });
+    // 187.5 g of sugar reads 188 g on a 1 g kitchen scale (0.27 % off), not 190 g (1.3 % off).
+    expect(roundMass(187.5, 'metric')).toMatchObject({ value: 188, unit: 'g', resolution: 1, warn: false });
+    expect(roundMass(99.96, 'metric')).toMatchObject({ value: 100, unit: 'g', resolution: 0.1 });
+    // Worst spots of each step, by hand: 100.5 g at 1 g is 0.5 % off; 1005 g at 0.01 kg is 0.5 % off.
+    expect(roundMass(100.5, 'metric').offPct).toBeLessThanOrEqual(0.5);
+    expect(roundMass(1005, 'metric').offPct).toBeLessThanOrEqual(0.5);
+    expect(roundMass(340.56, 'metric')).toMatchObject({ value: 341, unit: 'g', resolution: 1 });
     expect(roundMass(2270.4, 'metric')).toMatchObject({ value: 2.27, unit: 'kg', resolution: 0.01 });
     expect(roundMass(8000, 'metric')).toMatchObject({ value: 8, unit: 'kg' });
   });
@@ -56,6 +62,8 @@ describe('rounding to what a scale reads', () => {
   it('uses ounces below 1 lb and pounds above in US units', () => {
     // 340.56 g ÷ 28.349523 = 12.013 oz → 12.0 oz; 2270.4 g ÷ 453.59237 = 5.0054 lb → 5.01 lb.
     expect(roundMass(340.56, 'us')).toMatchObject({ value: 12, unit: 'oz', resolution: 0.1 });
+    // 45.41 g ÷ 28.349523 = 1.6018 oz → 1.60 oz on a 0.01 oz pocket scale.
+    expect(roundMass(45.41, 'us')).toMatchObject({ value: 1.6, unit: 'oz', resolution: 0.01 });
     expect(roundMass(2270.4, 'us')).toMatchObject({ value: 5.01, unit: 'lb', resolution: 0.01 });
     expect(roundVolume(56.76, 'us')).toMatchObject({ value: 14.99, unit: 'US gal' });
   });
@@ -66,13 +74,13 @@ describe('scaleRecipe', () => {
     const scaled = scaleRecipe(recipe({ kind: 'bottles', value: 120 }));
     expect(scaled.bottles).toBe(120);
     expect(scaled.finishedLitres).toMatchObject({ value: 56.8, unit: 'L' });
-    // 40 g/L × 56.76 L = 2270.4 g → 2.27 kg; 0.8 × 56.76 = 45.41 g → 45 g; 0.2 g × 120 = 24 g; 6 × 56.76 = 340.56 g → 340 g.
+    // 40 g/L × 56.76 L = 2270.4 g → 2.27 kg; 0.8 × 56.76 = 45.41 g → 45.4 g; 0.2 g × 120 = 24 g; 6 × 56.76 = 340.56 g → 341 g.
     expect(scaled.lines.map((l) => [l.name, l.value, l.unit])).toEqual([
       ['Strawberries', 2.27, 'kg'],
-      ['Ginger root', 45, 'g'],
+      ['Ginger root', 45.4, 'g'],
       ['Vanilla extract', 24, 'g'],
     ]);
-    expect(scaled.sugars[0]).toMatchObject({ value: 340, unit: 'g' });
+    expect(scaled.sugars[0]).toMatchObject({ value: 341, unit: 'g' });
     expect(scaled.topUpLitres.exact).toBe(0);
   });
 
@@ -126,7 +134,7 @@ describe('batchSteps', () => {
     );
     const steps = batchSteps(content as never, scaled, 'Glass crown cap 473 mL');
     expect(steps[0]).toBe(
-      'Steep 800 g strawberries, 16 g ginger root, 8.5 g vanilla extract in 20.0 L of black tea base at 4 °C for 48 h.',
+      'Steep 800 g strawberries, 16.0 g ginger root, 8.5 g vanilla extract in 20.0 L of black tea base at 4 °C for 48 h.',
     );
     expect(steps[2]).toBe('Top up with 2.40 L of fresh base to 20.0 L and dissolve 120 g sucrose.');
     expect(steps[3]).toMatch(/^Fill 42 bottles/);

@@ -33,7 +33,7 @@ export default function IngredientScreen() {
         busy={copy.isPending}
         onPress={() =>
           copy.mutate(
-            { id: item.id, name: `${item.name} (house copy)`.slice(0, 200) },
+            { id: item.id, name: `${item.displayName} (house copy)`.slice(0, 200) },
             { onSuccess: (created) => router.push(`/ingredients/edit/${created.id}`) },
           )
         }
@@ -49,7 +49,7 @@ export default function IngredientScreen() {
     </>
   ) : null;
   return (
-    <Screen title={item.name} actions={actions}>
+    <Screen title={item.displayName} actions={actions}>
       <FormStatus error={copy.error ?? archive.error} />
       <IngredientDetail ingredient={item} canEdit={canEdit} />
     </Screen>

@@ -19,6 +19,7 @@ import {
 import { STATE_TONE } from '@/components/ui/review-tone';
 import { type RecipeSummary, useRecipesQuery } from '@/lib/api/recipes';
 import { useSessionQuery } from '@/lib/api/session';
+import { formatDate } from '@/lib/format';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { can } from '@/lib/roles';
 import type { RecipeListFilter } from '@/lib/schemas/recipes';
@@ -60,7 +61,7 @@ export default function RecipesScreen() {
         ),
     },
     { key: 'safety', header: 'Safety', render: (r) => <SafetyBadge level={r.safetyLevel} /> },
-    { key: 'updated', header: 'Changed', render: (r) => new Date(r.updatedAt).toLocaleDateString() },
+    { key: 'updated', header: 'Changed', render: (r) => formatDate(r.updatedAt) },
   ];
   return (
     <Screen
