@@ -13,11 +13,11 @@ import {
   Text,
 } from '@/components/ui';
 import { useAddTastingMutation, useRecipeEvaluationQuery, useTastingsQuery } from '@/lib/api/recipes';
+import { formatDate } from '@/lib/format';
 import { check, parseNumber } from '@/lib/forms';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { withSugarAddition } from '@/lib/recipes/tasting';
 import { type RecipeContent, tastingSchema } from '@/lib/schemas/recipes';
-import { formatDate } from '@/lib/format';
 import { space } from '@/lib/theme';
 
 const SCALES = [
