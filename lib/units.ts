@@ -71,3 +71,26 @@ export function formatPressure(bar: number, units: UnitSystem): string {
 export function formatSmallVolume(ml: number, units: UnitSystem): string {
   return units === 'us' ? `${formatNumber(mlToFlOz(ml), 1)} US fl oz` : `${formatNumber(ml, 0)} mL`;
 }
+
+const NUMBER = String.raw`(-?\d+(?:[.,]\d+)?)`;
+
+/**
+ * A message the engine wrote in °C, bar and mL, in the person's units: "35 °C" becomes "95 °F", "3 bar" becomes
+ * "44 psi (3.00 bar)", "2 mL" becomes "0.07 US fl oz (2 mL)". Ranges ("0–40 °C") convert both ends. Metric is
+ * returned as written.
+ */
+export function inUnits(message: string, units: UnitSystem): string {
+  if (units === 'metric') return message;
+  const num = (s: string) => Number(s.replace(',', ''));
+  return message
+    .replace(
+      new RegExp(`${NUMBER}\\s?[–-]\\s?${NUMBER} °C`, 'g'),
+      (_, a: string, b: string) => `${formatNumber(cToF(num(a)), 0)}–${formatNumber(cToF(num(b)), 0)} °F`,
+    )
+    .replace(new RegExp(`${NUMBER} °C`, 'g'), (_, t: string) => formatTemp(num(t), 'us'))
+    .replace(new RegExp(`${NUMBER} bar\\b`, 'g'), (_, p: string) => formatPressure(num(p), 'us'))
+    .replace(
+      new RegExp(`${NUMBER} mL\\b`, 'g'),
+      (_, v: string) => `${formatNumber(mlToFlOz(num(v)), 2)} US fl oz (${v} mL)`,
+    );
+}

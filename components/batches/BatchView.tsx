@@ -98,7 +98,11 @@ export function BatchView({ batch, role }: { batch: BatchDetail; role: Role }) {
         {batch.card.amounts.map((a) => (
           <View key={a.name} style={styles.amount}>
             <Text style={styles.amountValue}>{a.amount}</Text>
-            <Text style={styles.amountName}>{a.name}</Text>
+            <View style={styles.amountText}>
+              <Text style={styles.amountName}>{a.name}</Text>
+              {a.perBottle ? <Text variant="small">{a.perBottle} into each bottle</Text> : null}
+              {a.roundingNote ? <Text variant="small">{a.roundingNote}</Text> : null}
+            </View>
           </View>
         ))}
       </Card>
@@ -198,7 +202,8 @@ const styles = StyleSheet.create({
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
   amount: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, paddingVertical: space.xs },
   amountValue: { fontFamily: fonts.bold, fontSize: fontSize.display, minWidth: 120 },
-  amountName: { fontSize: fontSize.lg, flex: 1, flexShrink: 1 },
+  amountText: { flex: 1, flexShrink: 1 },
+  amountName: { fontSize: fontSize.lg },
   step: { gap: space.xs, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },
   stepText: { fontSize: fontSize.lg },
   entry: { gap: space.xxs, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.divider },

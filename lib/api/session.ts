@@ -9,6 +9,7 @@ import type {
   SignUpInput,
 } from '@/lib/schemas/auth';
 import type { ChangePasswordInput, OrganisationInput, PreferencesInput, ProfileInput } from '@/lib/schemas/team';
+import type { UnitSystem } from '@/lib/units';
 
 import { api, ApiError } from './client';
 import { staleTimes } from './query-client';
@@ -156,4 +157,9 @@ export function useChangePasswordMutation() {
 /** The currency the brewery keeps its costs in (US dollars until an owner chooses another). */
 export function useBreweryCurrency(): string {
   return useSessionQuery().data?.organisation.currency ?? 'USD';
+}
+
+/** The signed-in person's units (metric until they choose US). */
+export function useUnitSystem(): UnitSystem {
+  return useSessionQuery().data?.user.unitSystem ?? 'metric';
 }

@@ -3,11 +3,28 @@ import { CAUTION_SHARE_OF_RATING, PH_LIMIT } from '@/lib/chemistry/carbonation';
 import { SAFETY_CAUTIONS } from '@/lib/chemistry/cautions';
 import { type Allergen, ALLERGEN_LABELS } from '@/lib/ingredients';
 import type { RecipeContent } from '@/lib/schemas/recipes';
-import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
+import { formatNumber, formatPressure, formatTemp, inUnits, type UnitSystem } from '@/lib/units';
 
 import type { RecipeEvaluation } from './evaluate';
-import type { BatchSize, ScaledRecipe } from './scaling';
-import { batchSteps, formatRounded } from './stages';
+import type { BatchSize, Rounded, ScaledRecipe } from './scaling';
+import { batchSteps, formatRounded, perBottleAmount, resolutionDigits } from './stages';
+
+/** One amount to weigh: the batch total, what each bottle takes (flavoured in the bottle), and a rounding note. */
+export interface CardAmount {
+  name: string;
+  amount: string;
+  /** What one bottle takes, when the flavour goes in the bottle; null when steeped. */
+  perBottle: string | null;
+  /** Said when rounding to the scale step moved the amount more than 1 %. */
+  roundingNote: string | null;
+}
+
+/** A reading the floor writes in by hand, with the target or limit it is checked against. */
+export interface CardCheckpoint {
+  label: string;
+  /** The target or limit beside the box; empty when there is none (a lot code, initials). */
+  target: string;
+}
 
 /** Everything a printed recipe card or batch sheet shows, in the order it shows it; the web page and the PDF both render this. */
 export interface RecipeCard {
@@ -27,9 +44,9 @@ export interface RecipeCard {
   batch: string;
   bottles: number;
   base: string;
-  amounts: { name: string; amount: string }[];
+  amounts: CardAmount[];
   steps: string[];
-  checkpoints: string[];
+  checkpoints: CardCheckpoint[];
   keyNumbers: { label: string; value: string }[];
   allergens: string[];
   cautions: string[];
@@ -59,6 +76,8 @@ export function buildCard(input: {
   content: RecipeContent;
   scaled: ScaledRecipe;
   bottleName: string;
+  /** Liquid in one bottle, mL: turns the per-bottle sugar into g/L for the reading after straining. */
+  bottleLiquidMl: number;
   evaluation: RecipeEvaluation;
   approval: RecipeCard['approval'];
   batch: BatchSize;
@@ -72,12 +91,22 @@ export function buildCard(input: {
   const carbonating = c.pressures.findIndex((p) => p.tempC === content.process.carbonateTempC);
   const chillAt = carbonating >= 0 ? c.cases.expected.gaugeBar[carbonating] : null;
   const rated = c.findings.find((f) => f.values?.ratingBar !== undefined)?.values?.ratingBar;
-  const checkpoints = [
-    `pH of the base before flavouring (${PH_LIMIT} or below): ________`,
-    ...(steeped ? ['Sugar reading after straining (°Bx or SG): ________'] : []),
-    `Gauge pressure of a test bottle${chillAt !== null ? `: chill when it reads about ${formatPressure(chillAt, units)} at ${formatTemp(content.process.carbonateTempC, units)}` : ''}${rated !== undefined ? `; never above ${formatPressure(rated * CAUTION_SHARE_OF_RATING, units)}` : ''}: ________`,
-    'Lot code: ________',
-    'Initials: ________',
+  const testBottle = [
+    chillAt !== null
+      ? `chill when it reads about ${formatPressure(chillAt, units)} at ${formatTemp(content.process.carbonateTempC, units)}`
+      : '',
+    rated !== undefined ? `never above ${formatPressure(rated * CAUTION_SHARE_OF_RATING, units)}` : '',
+  ].filter(Boolean);
+  const checkpoints: CardCheckpoint[] = [
+    { label: 'pH of the base before flavouring', target: `${PH_LIMIT} or below; never flavour above it` },
+    ...(steeped ? [{ label: 'Sugar after straining', target: strainedSugarTarget(content, input) }] : []),
+    {
+      label: 'Gauge pressure of a test bottle',
+      target: testBottle.length ? `${testBottle.join('; ')}` : 'no bottle rating given: choose a bottle format',
+    },
+    { label: 'Bottles filled', target: `${scaled.bottles} planned` },
+    { label: 'Lot code', target: '' },
+    { label: 'Initials and date', target: '' },
   ];
   const rank: Record<FindingLevel, number> = { ok: 0, caution: 1, danger: 2 };
   const worstFinding = c.findings.reduce(
@@ -101,13 +130,15 @@ export function buildCard(input: {
     recipeName: input.recipeName,
     version: input.version,
     approval: input.approval,
-    safety: { level: worstFinding.level, headline: worstFinding.message, rating },
+    safety: { level: worstFinding.level, headline: inUnits(worstFinding.message, units), rating },
     batch: `${formatRounded(scaled.finishedLitres)} of finished drink, ${scaled.bottles} bottles of ${input.bottleName}`,
     bottles: scaled.bottles,
     base: `${formatRounded(scaled.baseLitres)} of ${content.baseBrew.name}${scaled.topUpLitres.exact > 0 ? ` (${formatRounded(scaled.topUpLitres)} of it to top up after straining)` : ''}`,
     amounts: [...scaled.lines, ...scaled.sugars.filter((s) => s.value > 0)].map((r) => ({
       name: r.name,
       amount: formatRounded(r),
+      perBottle: steeped ? null : perBottleAmount(r, scaled.bottles),
+      roundingNote: roundingNote(r),
     })),
     steps: batchSteps(content, scaled, input.bottleName, units),
     checkpoints,
@@ -123,4 +154,23 @@ export function buildCard(input: {
     cautions: [...SAFETY_CAUTIONS],
     code: cardCode(input.recipeId, input.version, input.batch),
   };
+}
+
+/** Said beside an amount that rounding to its scale step moved more than 1 %. */
+export function roundingNote(r: Rounded): string | null {
+  if (!r.warn) return null;
+  const exact = `${formatNumber(r.exact, resolutionDigits(r.resolution) + 2)} ${r.unit}`;
+  return `Rounded from ${exact} (${formatNumber(r.offPct, 1)} % off): weigh it on a finer scale.`;
+}
+
+/**
+ * What the liquid should read after straining, before the top-up sugar: the base's residual sugar and the sugar the
+ * ingredients give up in the expected case, per litre. As °Bx, the rise over the base's own reading, taking 10 g/L
+ * as 1 °Bx (a solution this weak weighs within 1 % of water: common practice, no source).
+ */
+function strainedSugarTarget(content: RecipeContent, input: { evaluation: RecipeEvaluation; bottleLiquidMl: number }) {
+  const fromIngredients =
+    (input.evaluation.lines.reduce((sum, l) => sum + l.sugarToLiquidG, 0) * 1000) / input.bottleLiquidMl;
+  const total = content.baseBrew.residualSugarGPerL + fromIngredients;
+  return `expected about ${formatNumber(total, 1)} g/L of sugar, about ${formatNumber(fromIngredients / 10, 1)} °Bx above the base's own reading`;
 }

@@ -118,18 +118,18 @@ interface ScaledParts {
 const G_PER_OZ = 28.349523125;
 
 /**
- * What goes into each bottle when the flavour goes in the bottle: grams to 0.1 g under 100 g (a pocket scale), whole
- * grams above; ounces to 0.01 oz when the batch is in US units.
+ * What one bottle takes of an amount when the flavour goes in the bottle: grams to 0.1 g under 100 g (a pocket
+ * scale), whole grams above; ounces to 0.01 oz when the batch is in US units.
  */
+export function perBottleAmount(item: { unit: string; exactBase: number }, bottles: number): string {
+  const grams = item.exactBase / bottles;
+  const us = item.unit === 'oz' || item.unit === 'lb';
+  return us ? `${formatNumber(grams / G_PER_OZ, 2)} oz` : `${formatNumber(grams, grams < 100 ? 1 : 0)} g`;
+}
+
+/** Every amount of one bottle in a line: "18.0 g raspberries, 1.5 g sucrose". */
 export function perBottleAmounts(items: { name: string; unit: string; exactBase: number }[], bottles: number): string {
-  return items
-    .map((i) => {
-      const grams = i.exactBase / bottles;
-      const us = i.unit === 'oz' || i.unit === 'lb';
-      const amount = us ? `${formatNumber(grams / G_PER_OZ, 2)} oz` : `${formatNumber(grams, grams < 100 ? 1 : 0)} g`;
-      return `${amount} ${i.name.toLowerCase()}`;
-    })
-    .join(', ');
+  return items.map((i) => `${perBottleAmount(i, bottles)} ${i.name.toLowerCase()}`).join(', ');
 }
 
 /** The numbered steps of a batch, with its amounts written in: what the screen and the printed card list. */

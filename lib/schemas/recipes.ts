@@ -177,6 +177,11 @@ export const cardQuerySchema = yup.object({
     .max(1000000)
     .required('Give the batch size.'),
   units: unitSystem(),
+  /** Paper for the PDF; US Letter when left out and the units are US, A4 otherwise. */
+  paper: yup
+    .string()
+    .oneOf(['a4', 'letter'] as const, 'Choose A4 or Letter paper.')
+    .optional(),
 });
 export type CardQuery = yup.InferType<typeof cardQuerySchema>;
 

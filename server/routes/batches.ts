@@ -116,10 +116,10 @@ batchesRouter.post(
 batchesRouter.get(
   '/:id/record.pdf',
   allow('batches.read'),
-  validate({ params: idParam }, async ({ params }, res) => {
+  validate({ params: idParam }, async ({ params }, res, req) => {
     const detail = await batches.getBatch(authOf(res), params.id);
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Disposition', `inline; filename="batch-${detail.lotCode}.pdf"`);
-    batchRecordPdf(detail).pipe(res);
+    batchRecordPdf(detail, { locale: req.acceptsLanguages()[0] }).pipe(res);
   }),
 );

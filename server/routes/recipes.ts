@@ -193,10 +193,11 @@ recipesRouter.get(
 recipesRouter.get(
   '/:id/card.pdf',
   allow('signed-in'),
-  validate({ params: idParam, query: cardQuerySchema }, async ({ params, query }, res) => {
+  validate({ params: idParam, query: cardQuerySchema }, async ({ params, query }, res, req) => {
     const card = await cardOf(authOf(res), params.id, query);
+    const paper = query.paper ?? (query.units === 'us' ? 'letter' : 'a4');
     res.setHeader('Content-Type', 'application/pdf');
-    res.setHeader('Content-Disposition', `inline; filename="card-${card.code}.pdf"`);
-    cardPdf(card).pipe(res);
+    res.setHeader('Content-Disposition', `inline; filename="card-${card.code}-${paper}.pdf"`);
+    cardPdf(card, { paper, locale: req.acceptsLanguages()[0] }).pipe(res);
   }),
 );

@@ -1,15 +1,18 @@
 import PDFDocument from 'pdfkit';
 
 import type { BatchDetail } from '@/lib/api/types';
+import { formatDateTime } from '@/lib/format';
 import { BATCH_STATE_LABELS, READING_KIND_LABELS, READING_UNITS, STAGE_LABELS } from '@/lib/schemas/batches';
-
-const when = (iso: string) => iso.slice(0, 16).replace('T', ' ');
 
 /**
  * The batch record as a PDF, from the same model the batch screen shows: lot code, state and decision, the frozen
  * amounts, the steps with who signed them, every reading with its check, the ingredient lots and the deviations.
  */
-export function batchRecordPdf(batch: BatchDetail, options: { compress?: boolean } = {}): PDFKit.PDFDocument {
+export function batchRecordPdf(
+  batch: BatchDetail,
+  options: { compress?: boolean; locale?: string } = {},
+): PDFKit.PDFDocument {
+  const when = (iso: string) => formatDateTime(iso, options.locale);
   const doc = new PDFDocument({
     size: 'A4',
     margins: { top: 40, bottom: 40, left: 48, right: 48 },

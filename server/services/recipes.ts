@@ -331,7 +331,7 @@ export async function scale(
   auth: AuthContext,
   id: number,
   input: ScaleRequest,
-): Promise<ScaledRecipe & { version: number; bottleName: string }> {
+): Promise<ScaledRecipe & { version: number; bottleName: string; bottleLiquidMl: number }> {
   const recipe = await getRecipe(auth, id, input.version ?? undefined);
   const format = await bottleFacts(auth, recipe.content);
   const names = recipe.ingredientNames;
@@ -351,7 +351,7 @@ export async function scale(
       batch: input.batch,
       units: input.units,
     });
-    return { ...scaled, version: recipe.version, bottleName: format.name };
+    return { ...scaled, version: recipe.version, bottleName: format.name, bottleLiquidMl: format.liquidMl };
   } catch (error) {
     if (error instanceof RangeError) throw badRequest(error.message, { 'batch.value': error.message });
     throw error;

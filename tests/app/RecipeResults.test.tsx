@@ -60,7 +60,7 @@ describe('RecipeResults (the designer’s numbers for one bottle)', () => {
         /From the ingredients 0\.98 g · base and added sugar 3(\.00)? g · fermentable 3\.98 g \(8(\.0)? g\/L\)/,
       ),
     ).toBeOnTheScreen();
-    expect(screen.getByText('Ingredients cost 0.120 per bottle, 0.24 per litre.')).toBeOnTheScreen();
+    expect(screen.getByText('Ingredients cost $0.120 per bottle, $0.24 per litre.')).toBeOnTheScreen();
     expect(
       screen.getByText(/Strawberries, raw: 20(\.00)? g per bottle, 0\.98 g of sugar into the liquid/),
     ).toBeOnTheScreen();

@@ -47,6 +47,7 @@ describe('POST /api/auth/sign-up', () => {
         id: expect.any(Number),
         name: 'Larkspur Ferments',
         abvLimitPercent: 0.5,
+        currency: 'USD',
         warmestTempC: 35,
         ratingSharePercent: 80,
         lotPrefix: 'LOT',

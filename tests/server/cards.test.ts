@@ -97,19 +97,27 @@ describe('GET /api/recipes/:id/card', () => {
     await owner.post(`/api/recipes/${recipeId}/approve`).send({ version: 1 }).expect(200);
     const card = await brewer.get(`/api/recipes/${recipeId}/card`).query({ kind: 'bottles', value: 100 }).expect(200);
     expect(card.body.approval).toMatchObject({ by: 'Olwen Test', selfApproved: false });
-    // 100 × 750 mL = 75 L; strawberries 40 g/L → 3000 g → 3.00 kg; sucrose 1 g/L → 75 g.
+    // 100 × 750 mL = 75 L; strawberries 40 g/L → 3000 g → 3.00 kg; sucrose 1 g/L → 75 g, under 100 g so to 0.1 g.
+    // Steeped, so no per-bottle share; neither is more than 1 % off once rounded.
     expect(card.body.amounts).toEqual([
-      { name: 'Strawberries, raw', amount: '3.00 kg' },
-      { name: 'Sucrose (table sugar)', amount: '75 g' },
+      { name: 'Strawberries', amount: '3.00 kg', perBottle: null, roundingNote: null },
+      { name: 'Sucrose (table sugar)', amount: '75.0 g', perBottle: null, roundingNote: null },
     ]);
-    expect(card.body.steps[0]).toMatch(
-      /^Steep 3\.00 kg strawberries, raw in 75\.0 L of green tea base at 4 °C for 24 h\.$/,
-    );
-    expect(card.body.checkpoints[0]).toMatch(/4\.2 or below/);
+    expect(card.body.steps[0]).toMatch(/^Steep 3\.00 kg strawberries in 75\.0 L of green tea base at 4 °C for 24 h\.$/);
+    const checkpoint = (label: string) =>
+      card.body.checkpoints.find((c: { label: string }) => c.label === label)?.target as string;
+    expect(checkpoint('pH of the base before flavouring')).toMatch(/^4\.2 or below/);
     // The test bottle's limit: 75 % of the sparkling-wine bottle's 6 bar rating = 4.50 bar (the caution line).
-    expect(card.body.checkpoints.find((c: string) => c.startsWith('Gauge pressure'))).toMatch(
-      /^Gauge pressure of a test bottle: chill when it reads about \d\.\d\d bar \(\d+ psi\) at 20 °C; never above 4\.50 bar \(65 psi\): /,
+    expect(checkpoint('Gauge pressure of a test bottle')).toMatch(
+      /^chill when it reads about \d\.\d\d bar \(\d+ psi\) at 20 °C; never above 4\.50 bar \(65 psi\)$/,
     );
+    // After straining, by hand: 0.5 g/L residual in the base + the strawberries' sugar reaching the liquid, expected
+    // case: 40 g/L × 4.89 g/100 g (USDA SR25 NDB 09316, sugars) × 50 % extraction = 0.978 g/L; 1.478 → "1.5 g/L";
+    // 0.978 g/L ÷ 10 = "0.1 °Bx" above the base.
+    expect(checkpoint('Sugar after straining')).toBe(
+      "expected about 1.5 g/L of sugar, about 0.1 °Bx above the base's own reading",
+    );
+    expect(checkpoint('Bottles filled')).toBe('100 planned');
     expect(card.body.cautions.join(' ')).toMatch(/burst/);
     // In US units the steps read in °F: 4 °C = 39 °F (× 9/5 + 32 = 39.2).
     const us = await brewer
@@ -146,7 +154,7 @@ describe('GET /api/recipes/:id/card.pdf', () => {
     expect(text).toContain('Strawberry field, version 1');
     expect(text).toContain('Approved for production by Olwen Test');
     expect(text).toContain('3.00 kg');
-    expect(text).toContain('pH of the base before flavouring (4.2 or below)');
+    expect(text).toContain('4.2 or below; never flavour above it');
     expect(text).toContain(`Card code ${recipeId}-1-b100`);
   });
 });
@@ -210,3 +218,111 @@ describe('danger reaches the floor', () => {
     expect(text).toContain('Approval comment: Chilled runs only');
   });
 });
+
+describe('one page', () => {
+  const pdfPages = (pdf: Buffer) => pdf.toString('latin1').match(/\/Type \/Page\b(?!s)/g)?.length ?? 0;
+  // PDF user space is 1/72 in: A4 is 595.28 × 841.89 pt (ISO 216, 210 × 297 mm), US Letter 612 × 792 pt (8.5 × 11 in).
+  const mediaBox = (pdf: Buffer) =>
+    /\/MediaBox \[0 0 ([\d.]+) ([\d.]+)\]/.exec(pdf.toString('latin1'))!.slice(1).map(Number);
+  const download = (agent: Agent, id: number, query: Record<string, string | number>) =>
+    agent
+      .get(`/api/recipes/${id}/card.pdf`)
+      .query(query)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+
+  it('fits a recipe of 8 ingredient lines and 2 sugars on one A4 page and on one US Letter page, with write-in boxes', async () => {
+    const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
+    const names = [
+      'Raspberries, raw',
+      'Blackberries, raw',
+      'Cherries, sour, red, raw',
+      'Rhubarb, raw',
+      'Ginger root, raw',
+      'Spices, cardamom',
+      'Cookies, shortbread, commercially prepared, plain',
+      'Lemon juice, raw',
+    ];
+    const ids: number[] = [];
+    for (const name of names) {
+      const found = (
+        await owner
+          .get('/api/ingredients')
+          .query({ q: name.split(',')[0], pageSize: 50 })
+          .expect(200)
+      ).body.items as { id: number; name: string }[];
+      ids.push(found.find((i) => i.name === name)!.id);
+    }
+    const content = {
+      baseBrew: {
+        name: 'black tea base',
+        residualSugarGPerL: 1,
+        ph: 3.1,
+        abvPercent: 0.05,
+        residualCo2Volumes: null,
+        lastOpenTempC: 21,
+      },
+      lines: ids.map((ingredientId) => ({ ingredientId, amount: 3, unit: 'g-per-l', extractionPct: 60 })),
+      sugars: [
+        { type: 'sucrose', gPerL: 2 },
+        { type: 'honey', gPerL: 1 },
+      ],
+      process: {
+        method: 'in-bottle',
+        steepHours: 0,
+        steepTempC: 4,
+        strainLossPct: 0,
+        carbonateHours: 48,
+        carbonateTempC: 20,
+        coldStoreTempC: 4,
+      },
+      bottleFormatId: formats.find((f) => f.name === 'Glass crown cap 473 mL')!.id,
+      targetVolumes: 2.5,
+      sweetnessNote: '',
+      highestTempC: 30,
+    };
+    const id = (await developer.post('/api/recipes').send({ name: 'Eight-line medley', content }).expect(201)).body.id;
+    const card = (await brewer.get(`/api/recipes/${id}/card`).query({ kind: 'bottles', value: 150 }).expect(200)).body;
+    expect(card.amounts).toHaveLength(10);
+    // In the bottle: 3 g/L × 0.473 L = 1.419 g of each fruit per bottle → "1.4 g"; 2 g/L sucrose → 0.946 → "0.9 g".
+    expect(card.amounts[0]).toMatchObject({ name: 'Raspberries', perBottle: '1.4 g' });
+    expect(card.amounts.find((a: { name: string }) => a.name.startsWith('Sucrose')).perBottle).toBe('0.9 g');
+
+    const a4 = (await download(brewer, id, { kind: 'bottles', value: 150 })).body as Buffer;
+    expect(pdfPages(a4)).toBe(1);
+    expect(mediaBox(a4)).toEqual([595.28, 841.89]);
+    const letter = (await download(brewer, id, { kind: 'bottles', value: 150, units: 'us' })).body as Buffer;
+    expect(pdfPages(letter)).toBe(1);
+    expect(mediaBox(letter)).toEqual([612, 792]);
+    // Asked for A4 in US units, A4 it is.
+    expect(
+      mediaBox((await download(brewer, id, { kind: 'bottles', value: 150, units: 'us', paper: 'a4' })).body),
+    ).toEqual([595.28, 841.89]);
+    await brewer.get(`/api/recipes/${id}/card.pdf`).query({ kind: 'bottles', value: 150, paper: 'A3' }).expect(400);
+    // Every checkpoint has its box: 24 pt high (8.47 mm, at least 8 mm) and 92 pt wide, drawn as "x y w h re".
+    const drawn = [
+      ...zlibStreams(a4)
+        .join('\n')
+        .matchAll(/([\d.]+) ([\d.]+) 92 24 re/g),
+    ];
+    expect(drawn).toHaveLength(card.checkpoints.length);
+  });
+});
+
+/** Every content stream of a PDF, inflated. */
+function zlibStreams(pdf: Buffer): string[] {
+  const out: string[] = [];
+  for (const [, body] of pdf.toString('latin1').matchAll(/stream\r?\n([\s\S]*?)\r?\nendstream/g)) {
+    try {
+      out.push(zlib.inflateSync(Buffer.from(body, 'latin1')).toString('latin1'));
+    } catch {
+      // not a deflated stream
+    }
+  }
+  return out;
+}

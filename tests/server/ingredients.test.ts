@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 
-import { IngredientChange } from '@/server/db';
+import { IngredientChange, IngredientDisplayName } from '@/server/db';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
 
@@ -258,5 +258,124 @@ describe('ingredients in POST /api/calculations/carbonation', () => {
     expect(res.body.findings.map((f: { code: string }) => f.code)).toEqual(
       expect.arrayContaining(['solids-in-bottle', 'fatty-ingredients']),
     );
+  });
+});
+
+describe('PUT /api/ingredients/:id/display-name', () => {
+  const find = async (agent: Agent, name: string) =>
+    (
+      (
+        await agent
+          .get('/api/ingredients')
+          .query({ q: name.split(',')[0], pageSize: 50 })
+          .expect(200)
+      ).body.items as {
+        id: number;
+        name: string;
+        displayName: string;
+      }[]
+    ).find((i) => i.name === name)!;
+
+  it('gives dataset ingredients a short name by default, lets the brewery change it, and keeps the full name', async () => {
+    const cookies = await find(brewer, 'Cookies, shortbread, commercially prepared, plain');
+    expect(cookies.displayName).toBe('Shortbread cookies');
+    await brewer
+      .put(`/api/ingredients/${cookies.id}/display-name`)
+      .send({ displayName: 'Butter biscuits' })
+      .expect(403);
+    const renamed = await developer
+      .put(`/api/ingredients/${cookies.id}/display-name`)
+      .send({ displayName: '  Butter shortbread  ' })
+      .expect(200);
+    expect(renamed.body).toMatchObject({
+      name: 'Cookies, shortbread, commercially prepared, plain',
+      displayName: 'Butter shortbread',
+    });
+    expect((await brewer.get(`/api/ingredients/${cookies.id}`).expect(200)).body.displayName).toBe('Butter shortbread');
+    // Another brewery still reads the default.
+    const stranger = await signUpOwner(app);
+    expect((await stranger.agent.get(`/api/ingredients/${cookies.id}`).expect(200)).body.displayName).toBe(
+      'Shortbread cookies',
+    );
+    // Recipes read the brewery's name.
+    const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number }[];
+    const recipe = await developer
+      .post('/api/recipes')
+      .send({
+        name: 'Biscuit tin',
+        content: {
+          baseBrew: {
+            name: 'base',
+            residualSugarGPerL: 0,
+            ph: 3.2,
+            abvPercent: 0.05,
+            residualCo2Volumes: null,
+            lastOpenTempC: 21,
+          },
+          lines: [{ ingredientId: cookies.id, amount: 10, unit: 'g-per-l', extractionPct: 50 }],
+          sugars: [],
+          process: {
+            method: 'steep-strain',
+            steepHours: 24,
+            steepTempC: 4,
+            strainLossPct: 10,
+            carbonateHours: 48,
+            carbonateTempC: 20,
+            coldStoreTempC: 4,
+          },
+          bottleFormatId: formats[0].id,
+          targetVolumes: 2.5,
+          sweetnessNote: '',
+          highestTempC: 30,
+        },
+      })
+      .expect(201);
+    expect(recipe.body.ingredientNames[cookies.id]).toBe('Butter shortbread');
+    // Empty goes back to the default; too long is refused with a field message.
+    const reset = await developer
+      .put(`/api/ingredients/${cookies.id}/display-name`)
+      .send({ displayName: '' })
+      .expect(200);
+    expect(reset.body.displayName).toBe('Shortbread cookies');
+    const long = await developer
+      .put(`/api/ingredients/${cookies.id}/display-name`)
+      .send({ displayName: 'x'.repeat(81) })
+      .expect(400);
+    expect(long.body.error.fields.displayName).toMatch(/under 80/);
+    await developer
+      .put(`/api/ingredients/${cookies.id}/display-name`)
+      .send({ displayName: { $gt: '' } })
+      .expect(400);
+    await developer.put('/api/ingredients/999999/display-name').send({ displayName: 'Ghost' }).expect(404);
+  });
+
+  it('leaves house ingredients to their own form, and another brewery’s house ingredient is not found', async () => {
+    const house = await developer
+      .post('/api/ingredients')
+      .send({ ...label, name: 'Orchard syrup' })
+      .expect(201);
+    expect(house.body.displayName).toBe('Orchard syrup');
+    const res = await developer
+      .put(`/api/ingredients/${house.body.id}/display-name`)
+      .send({ displayName: 'Syrup' })
+      .expect(409);
+    expect(res.body.error.fields.displayName).toBeDefined();
+    const stranger = await signUpOwner(app);
+    await stranger.agent
+      .put(`/api/ingredients/${house.body.id}/display-name`)
+      .send({ displayName: 'Mine' })
+      .expect(404);
+  });
+
+  it('keeps every one of 20 renames sent at once, one row per brewery and ingredient', async () => {
+    const lemons = await find(developer, 'Lemons, raw, without peel');
+    const results = await Promise.all(
+      Array.from({ length: 20 }, (_, i) =>
+        developer.put(`/api/ingredients/${lemons.id}/display-name`).send({ displayName: `Lemon ${i}` }),
+      ),
+    );
+    expect(results.map((r) => r.status)).toEqual(Array(20).fill(200));
+    const rows = await IngredientDisplayName.count({ where: { ingredientId: lemons.id } });
+    expect(rows).toBe(1);
   });
 });

@@ -67,7 +67,8 @@ describe('POST /api/recipes', () => {
       currentVersion: 1,
       content: { sugars: [{ type: 'sucrose', gPerL: 4 }] },
     });
-    expect(res.body.ingredientNames[strawberryId]).toBe('Strawberries, raw');
+    // The dataset's "Strawberries, raw" reads as its short display name.
+    expect(res.body.ingredientNames[strawberryId]).toBe('Strawberries');
     await create(brewer).expect(403);
     await request(app).post('/api/recipes').send({}).expect(401);
   });
@@ -144,7 +145,7 @@ describe('PUT /api/recipes/:id (a new version per save)', () => {
     expect(versions.body.map((v: { number: number }) => v.number)).toEqual([2, 1]);
     const diff = await brewer.get(`/api/recipes/${created.id}/diff`).query({ from: 1, to: 2 }).expect(200);
     expect(diff.body).toEqual([
-      { area: 'ingredients', what: 'Strawberries, raw', before: '40 g per litre', after: '55 g per litre' },
+      { area: 'ingredients', what: 'Strawberries', before: '40 g per litre', after: '55 g per litre' },
     ]);
     const restored = await developer.post(`/api/recipes/${created.id}/restore`).send({ version: 1 }).expect(200);
     expect(restored.body).toMatchObject({
@@ -216,7 +217,7 @@ describe('POST /api/recipes/evaluate and /:id/scale', () => {
       topUpLitres: { value: 9.46 },
       baseLitres: { value: 104.1 },
     });
-    expect(res.body.lines[0]).toMatchObject({ name: 'Strawberries, raw', value: 3.78, unit: 'kg' });
+    expect(res.body.lines[0]).toMatchObject({ name: 'Strawberries', value: 3.78, unit: 'kg' });
     const bad = await brewer
       .post(`/api/recipes/${created.id}/scale`)
       .send({ batch: { kind: 'litres', value: 1e9 } })
