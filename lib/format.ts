@@ -54,3 +54,11 @@ export function formatMoney(amount: number, currency: string, digits = 2, locale
     maximumFractionDigits: digits,
   }).format(amount);
 }
+
+/**
+ * An e-mail address that wraps at its sensible points when a column is narrow: before the "@" and before each dot
+ * (zero-width spaces: a line break may fall there, and nowhere inside a word).
+ */
+export function breakableEmail(email: string): string {
+  return email.replace(/([@.])/g, '\u200B$1');
+}

@@ -17,6 +17,7 @@ export default function TeamScreen() {
   const invite = useInviteMutation();
   const settings = useUpdateOrganisationMutation();
   const { width } = useWindowDimensions();
+  const wide = width >= breakpoints.wide + 240;
   if (!session) return null;
   if (!owner) {
     return (
@@ -30,8 +31,8 @@ export default function TeamScreen() {
   return (
     <Screen title="Team" subtitle={`Who works at ${session.organisation.name}, and what each person may do.`}>
       {team.isError ? <Banner tone="danger">{team.error.message}</Banner> : null}
-      <View style={[styles.columns, width >= breakpoints.wide + 240 && styles.columnsWide]}>
-        <View style={styles.main}>
+      <View style={[styles.columns, wide && styles.columnsWide]}>
+        <View style={[styles.main, wide && styles.mainWide]}>
           <Card title="Members" aside={team.data ? `${team.data.members.length}` : undefined}>
             {team.data ? <MembersTable members={team.data.members} currentUserId={session.user.id} /> : <Loading />}
           </Card>
@@ -39,7 +40,7 @@ export default function TeamScreen() {
             {team.data ? <InvitationsTable invitations={team.data.invitations} /> : <Loading />}
           </Card>
         </View>
-        <View style={styles.side}>
+        <View style={[styles.side, wide && styles.sideWide]}>
           <Card title="Invite someone">
             {invite.isSuccess ? (
               <Banner tone="success">{`Invitation sent to ${invite.data.email}. The link works once and expires in 7 days.`}</Banner>
@@ -63,6 +64,9 @@ export default function TeamScreen() {
 const styles = StyleSheet.create({
   columns: { gap: space.lg },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  main: { flex: 2, gap: space.lg },
-  side: { flex: 1, minWidth: 320, gap: space.lg },
+  // Shares of the width side by side only: in one column on a phone, flex would stretch them down the page.
+  main: { gap: space.lg },
+  mainWide: { flex: 2 },
+  side: { gap: space.lg },
+  sideWide: { flex: 1, minWidth: 320 },
 });

@@ -27,10 +27,11 @@ import { processStages } from '@/lib/recipes/stages';
 import { targetAdvice } from '@/lib/recipes/target';
 import { AMOUNT_UNIT_LABELS, METHOD_LABELS, METHODS } from '@/lib/schemas/recipes';
 import { breakpoints, colors, fonts, space } from '@/lib/theme';
-import { formatNumber, type UnitSystem } from '@/lib/units';
+import { formatNumber, formatTemp, type UnitSystem } from '@/lib/units';
 
 import { IngredientPicker } from './IngredientPicker';
 import { RecipeResults } from './RecipeResults';
+import { RecipeSummary } from './RecipeSummary';
 
 interface Props {
   recipe: RecipeDetail;
@@ -149,8 +150,18 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
       </View>
       <View style={[styles.layout, wide && styles.layoutWide]}>
         <View style={[styles.column, wide && styles.inputs]}>
-          <Parts formats={formats} canEdit={canEdit} />
-          {format && content ? (
+          {canEdit ? (
+            <Parts formats={formats} canEdit={canEdit} />
+          ) : (
+            <RecipeSummary
+              title="The recipe"
+              content={recipe.content}
+              names={recipe.ingredientNames}
+              bottleName={format?.name}
+              units={units}
+            />
+          )}
+          {canEdit && format && content ? (
             <TargetHelper
               units={units}
               content={content}
@@ -172,7 +183,7 @@ function Layout({ recipe, formats, units, limitPercent, canEdit, saveError, onRe
                 <Text key={stage.title}>
                   {i + 1}. {stage.title}
                   {stage.hours ? ` · ${formatNumber(stage.hours, 0)} h` : ''}
-                  {stage.tempC !== null ? ` · ${formatNumber(stage.tempC, 0)} °C` : ''} — {stage.detail}
+                  {stage.tempC !== null ? ` · ${formatTemp(stage.tempC, units)}` : ''} — {stage.detail}
                 </Text>
               ))}
             </Card>

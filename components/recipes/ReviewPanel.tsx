@@ -17,13 +17,13 @@ import {
 } from '@/lib/api/recipes';
 import { useBreweryCurrency } from '@/lib/api/session';
 import type { Session } from '@/lib/api/types';
-import { SUGARS } from '@/lib/chemistry/sugars';
 import { formatDate, formatDateTime, formatMoney } from '@/lib/format';
 import { can } from '@/lib/roles';
-import { AMOUNT_UNIT_LABELS } from '@/lib/schemas/recipes';
 import { REVIEW_STATE_LABELS } from '@/lib/schemas/reviews';
 import { space } from '@/lib/theme';
-import { formatNumber } from '@/lib/units';
+import type { UnitSystem } from '@/lib/units';
+
+import { RecipeSummary } from './RecipeSummary';
 
 const ACTION_LABELS: Record<string, string> = {
   submitted: 'Submitted',
@@ -59,6 +59,7 @@ export function ReviewPanel({ recipeId, session }: { recipeId: number; session: 
             version={submittedVersion}
             approvedVersion={approvedVersion}
             licensed={session.organisation.licensedForAlcohol}
+            units={session.user.unitSystem}
           />
         ) : null}
         {owner && approvedVersion ? <Withdraw recipeId={recipeId} /> : null}
@@ -119,11 +120,13 @@ function Decision({
   version,
   approvedVersion,
   licensed,
+  units,
 }: {
   recipeId: number;
   version: number;
   approvedVersion: number | null;
   licensed: boolean;
+  units: UnitSystem;
 }) {
   const detail = useRecipeQuery(recipeId, version);
   const evaluation = useRecipeEvaluationQuery(detail.data?.content);
@@ -167,34 +170,13 @@ function Decision({
             <Loading label="Working out its numbers…" />
           )}
         </Card>
-        <Card title="What goes in" style={styles.column}>
+        <View style={styles.column}>
           {content ? (
-            <>
-              {content.lines.map((l) => (
-                <Text key={l.ingredientId}>
-                  {names[l.ingredientId] ?? `Ingredient ${l.ingredientId}`}: {formatNumber(l.amount, 1)}{' '}
-                  {AMOUNT_UNIT_LABELS[l.unit]}
-                  {content.process.method === 'steep-strain'
-                    ? `, ${formatNumber(l.extractionPct, 0)} % reaches the liquid`
-                    : ''}
-                </Text>
-              ))}
-              {content.sugars
-                .filter((s) => s.gPerL > 0)
-                .map((s) => (
-                  <Text key={s.type}>
-                    {SUGARS[s.type].label}: {formatNumber(s.gPerL, 1)} g per litre
-                  </Text>
-                ))}
-              <Text variant="small">
-                Base: {content.baseBrew.name}, pH {content.baseBrew.ph ?? 'not given'} ·{' '}
-                {content.process.method === 'steep-strain' ? 'steeped and strained' : 'flavoured in the bottle'}
-              </Text>
-            </>
+            <RecipeSummary content={content} names={names} units={units} />
           ) : (
             <Loading label="Loading the version…" />
           )}
-        </Card>
+        </View>
         <Card title={`Tastings (${tasted.length})`} style={styles.column}>
           {tasted.length === 0 ? <Text variant="small">Nobody has tasted this recipe yet.</Text> : null}
           {tasted.map((t) => (

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { Badge, Button, type Column, EmptyState, FormStatus, Table, Text, type Tone } from '@/components/ui';
 import { useResendInvitationMutation, useRevokeInvitationMutation } from '@/lib/api/team';
 import type { Invitation, InvitationStatus } from '@/lib/api/types';
-import { formatDate } from '@/lib/format';
+import { breakableEmail, formatDate } from '@/lib/format';
 import { ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
@@ -22,7 +22,12 @@ export function InvitationsTable({ invitations }: { invitations: Invitation[] })
     return <EmptyState title="No open invitations" message="People you invite appear here until they join." />;
   }
   const columns: Column<Invitation>[] = [
-    { key: 'email', header: 'E-mail', flex: 1.6, render: (i) => <Text>{i.email}</Text> },
+    {
+      key: 'email',
+      header: 'E-mail',
+      flex: 1.6,
+      render: (i) => <Text aria-label={i.email}>{breakableEmail(i.email)}</Text>,
+    },
     { key: 'role', header: 'Role', render: (i) => <Badge label={ROLE_LABELS[i.role]} tone="info" /> },
     {
       key: 'status',

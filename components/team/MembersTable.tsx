@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { Badge, Button, Card, type Column, FormStatus, Select, Table, Text } from '@/components/ui';
 import { useChangeRoleMutation, useSetMemberActiveMutation } from '@/lib/api/team';
 import type { Member } from '@/lib/api/types';
+import { breakableEmail } from '@/lib/format';
 import { type Role, ROLE_LABELS } from '@/lib/roles';
 import { space } from '@/lib/theme';
 
@@ -21,7 +22,9 @@ export function MembersTable({ members, currentUserId }: { members: Member[]; cu
       render: (m) => (
         <View>
           <Text>{m.id === currentUserId ? `${m.name} (you)` : m.name}</Text>
-          <Text variant="small">{m.email}</Text>
+          <Text variant="small" aria-label={m.email}>
+            {breakableEmail(m.email)}
+          </Text>
         </View>
       ),
     },

@@ -194,7 +194,7 @@ export function residualAssumption(
   return [
     {
       name: 'Residual CO2 of the base (not given)',
-      value: `${round(residualVolumes(input), 2)} volumes: saturated under 1 atm at the sealing temperature, ${input.sealedTempC} °C. Enter a measured value or the temperature the base was last open at to replace it.`,
+      value: `Taken as ${round(residualVolumes(input), 2)} volumes, the most the base holds in open air at the sealing temperature, ${input.sealedTempC} °C. Enter a measured value, or the temperature the base was last open at, to replace it.`,
       source: 'taken high on purpose, so that pressure is not underestimated',
     },
   ];
@@ -457,54 +457,63 @@ function sugarBasisFindings(ingredients: IngredientSugar[]): Finding[] {
   return findings;
 }
 
+/** How the numbers are worked out, in plain words for the floor; the references stay in `source`. */
 const ASSUMPTIONS: CarbonationResult['assumptions'] = [
-  { name: 'CO2 solubility', value: 'K0(T), fresh water', source: 'Weiss (1974), Marine Chemistry 2:203–215' },
   {
-    name: 'Headspace',
-    value:
-      'ideal gas; the air sealed in, in the headspace and dissolved in the liquid, and water vapour (Buck 1981) add to CO2; yeast’s use of oxygen ignored (errs high)',
-    source: 'ideal gas, Dalton; N2, O2 and Ar solubility from Weiss (1970), Deep-Sea Research 17:721–735',
+    name: 'CO2 in the liquid',
+    value: 'Colder liquid holds more of its CO2, so less of it presses on the cap; warm liquid lets it out.',
+    source: 'Weiss (1974), Marine Chemistry 2:203–215: CO2 solubility in water',
   },
   {
-    name: 'Liquid expansion',
+    name: 'The gas space',
     value:
-      'the liquid expands as water does, shrinking the headspace as it warms; the glass taken not to expand (errs high)',
-    source: 'water density, Tanaka et al. (2001), Metrologia 38:301–309',
+      'The space under the cap holds CO2, the air sealed in with it and water vapour, and all of them press on the cap. Oxygen the yeast uses up is still counted, so the pressure errs high.',
+    source:
+      'Weiss (1970), Deep-Sea Research 17:721–735: nitrogen, oxygen and argon solubility; Buck (1981): water vapour',
   },
   {
-    name: 'Fermentation',
-    value: 'hexose → 2 ethanol + 2 CO2; sucrose + water → 4 + 4; mixed sugars at sucrose’s yield per gram',
-    source: 'Gay-Lussac',
+    name: 'Warm liquid',
+    value:
+      'Warm liquid takes more room and squeezes the gas space. The glass is taken not to stretch, so the pressure errs high.',
+    source: 'Tanaka et al. (2001), Metrologia 38:301–309: density of water',
+  },
+  {
+    name: 'Sugar to CO2 and alcohol',
+    value: 'Yeast turns each gram of sugar into about half a gram of CO2 and half a gram of alcohol.',
+    source: 'Gay-Lussac: the equation of alcoholic fermentation',
   },
   // Pasteur's figure, from memory.
   {
-    name: 'Expected yield',
-    value: `${EXPECTED_YIELD * 100} % of theoretical`,
-    source: 'Pasteur; a typical figure, not measured here',
+    name: 'Expected and worst case',
+    value: `The expected case takes ${EXPECTED_YIELD * 100} % of that (some sugar feeds the yeast itself); the worst case, which the findings judge, takes all of it.`,
+    source: 'Pasteur: a typical yield, not measured here',
   },
   {
-    name: 'Volume of CO2',
-    value: `${round(CO2_G_PER_VOLUME, 4)} g per L of liquid (${round(MOLAR_VOLUME_STP_L, 3)} L/mol)`,
-    source: 'CODATA 2018',
+    name: 'Volumes of CO2',
+    value: `One volume is ${round(CO2_G_PER_VOLUME, 2)} g of CO2 in each litre of liquid.`,
+    source: `CODATA 2018: ${round(MOLAR_VOLUME_STP_L, 3)} L per mole of gas at 0 °C and 1 atm`,
   },
-  { name: 'Alcohol', value: 'ethanol 0.78924 g/mL at 20 °C', source: 'CRC Handbook' },
   {
-    name: 'Residual CO2 from temperature',
-    value: 'saturated under 1 atm of CO2',
+    name: 'Alcohol by volume',
+    value: 'Alcohol is weighed and turned into a share of the volume (0.789 g per mL).',
+    source: 'CRC Handbook: density of ethanol at 20 °C',
+  },
+  {
+    name: 'Base left open',
+    value: 'A base left open holds as much CO2 as it can at that temperature in open air.',
     source: 'common practice, no source',
   },
   {
     name: 'Steeped ingredients',
-    value:
-      'the expected case takes the extraction share you give; the worst case, which the findings judge, takes all of the sugar',
+    value: 'The expected case takes the share of sugar you say reaches the liquid; the worst case takes all of it.',
     source: 'taken high on purpose',
   },
   {
     name: 'Starch',
     value:
-      'not counted when sugars are measured: kombucha cultures ferment little starch (their yeasts, such as Brettanomyces and Zygosaccharomyces, have little amylase). When sugars are not measured, all available carbohydrate counts',
+      'Starch (in baked goods) is not counted when the sugars are known: kombucha yeasts break down little of it. When the sugars are not known, all the carbohydrate counts.',
     // From memory.
-    source: 'the microbiology of kombucha cultures',
+    source: 'the microbiology of kombucha cultures (Brettanomyces and Zygosaccharomyces yeasts have little amylase)',
   },
 ];
 

@@ -8,7 +8,7 @@ import type { CarbonationAnswer } from '@/lib/api/calculations';
 import { ratingLevel } from '@/lib/chemistry/carbonation';
 import { WARM_DAY_NAME } from '@/lib/recipes/evaluate';
 import { colors, fonts, space } from '@/lib/theme';
-import { formatNumber, formatPressure, formatSmallVolume, formatTemp, type UnitSystem } from '@/lib/units';
+import { formatNumber, formatPressure, formatSmallVolume, formatTemp, inUnits, type UnitSystem } from '@/lib/units';
 
 interface Props {
   answer: CarbonationAnswer;
@@ -112,8 +112,16 @@ export function CarbonationResults({ answer, chart, units, limitPercent, tempera
       </Card>
       <Card title="How these numbers are worked out">
         {answer.assumptions.map((a) => (
+          <Text key={a.name}>
+            <Text style={styles.term}>{a.name}.</Text> {inUnits(a.value, units)}
+          </Text>
+        ))}
+        <Text variant="label" level={3}>
+          Sources
+        </Text>
+        {answer.assumptions.map((a) => (
           <Text key={a.name} variant="small">
-            {a.name}: {a.value} — {a.source}
+            {a.name}: {a.source}
           </Text>
         ))}
       </Card>
@@ -142,4 +150,5 @@ const styles = StyleSheet.create({
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
   figure: { flexGrow: 1, flexBasis: 200, gap: 2 },
   over: { color: colors.danger, fontFamily: fonts.semibold },
+  term: { fontFamily: fonts.semibold },
 });
