@@ -10,8 +10,13 @@ import { type QuickCheckValues, toPrimingRequest } from '@/lib/quick-check';
 import { space } from '@/lib/theme';
 import { formatNumber, formatPressure, formatTemp, type UnitSystem } from '@/lib/units';
 
-/** "How much sugar for this fizz?": fills the sugar that reaches the target and shows the alcohol that follows. */
-export function PrimingHelper({ units }: { units: UnitSystem }) {
+import { SugarBands } from './SugarBands';
+
+/**
+ * Asks in the recipe's terms ("How much sugar for 2.5 volumes in this bottle?"), answers in grams for the bottle,
+ * and shows where that sits between the bottle's safe, caution and danger bands and the alcohol limit.
+ */
+export function PrimingHelper({ units, limitPercent }: { units: UnitSystem; limitPercent: number }) {
   const { values, setFieldValue } = useFormikContext<QuickCheckValues>();
   const { request, errors } = toPrimingRequest(values, units);
   const settled = useDebouncedValue(request);
@@ -19,24 +24,25 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
   const answer = priming.data;
   const sugarName = SUGARS[values.primingSugar].label.toLowerCase();
   return (
-    <Card title="Sugar for a target fizz">
+    <Card title={`How much sugar for ${values.targetVolumes || '…'} volumes in this bottle?`}>
       <View style={styles.row}>
         <View style={styles.cell}>
           <FormNumberField
             name="targetVolumes"
-            label="Target carbonation"
-            unit="volumes"
+            label="Fizz you want"
+            unit="volumes of CO2"
             hint="Kombucha often has 2.5 to 3 volumes: more fizz needs a bottle rated for it."
           />
         </View>
+        <View style={styles.cell}>
+          <Select
+            label="Sweetened with"
+            value={values.primingSugar}
+            options={SUGAR_OPTIONS.filter((o) => o.value !== 'lactose')}
+            onChange={(type) => setFieldValue('primingSugar', type)}
+          />
+        </View>
       </View>
-      <Select
-        compact
-        label="Sugar to use"
-        value={values.primingSugar}
-        options={SUGAR_OPTIONS.filter((o) => o.value !== 'lactose')}
-        onChange={(type) => setFieldValue('primingSugar', type)}
-      />
       {errors.targetVolumes ? null : priming.isError ? <Banner tone="danger">{priming.error.message}</Banner> : null}
       {answer && request ? (
         <View style={styles.answer} aria-live="polite">
@@ -60,6 +66,13 @@ export function PrimingHelper({ units }: { units: UnitSystem }) {
               amount above).
             </Text>
           ) : null}
+          <SugarBands
+            bands={answer.bands}
+            targetG={answer.sugarG}
+            safeG={answer.safeSugarG}
+            limitPercent={limitPercent}
+            sugarName={sugarName}
+          />
           <FindingList findings={answer.findings} />
           <Button
             label={answer.targetReachable ? 'Use this amount' : 'Use the most that is safe'}

@@ -64,7 +64,7 @@ function Layout({ units, formats, limitPercent }: Props) {
       {wide ? null : <PhoneSummary units={units} />}
       <View style={[styles.inputs, wide && styles.inputsWide]}>
         <QuickCheckInputs formats={formats} units={units} />
-        <PrimingHelper units={units} />
+        <PrimingHelper units={units} limitPercent={limitPercent} />
         <BrixCard />
       </View>
       <View style={[styles.results, wide && styles.resultsWide]}>

@@ -608,6 +608,11 @@ export interface PrimingResult {
   limitedBy: 'pressure' | 'alcohol' | null;
   /** Worst-case gauge pressure at highestTempC with sugarG. */
   worstGaugeBarAtHighest: number;
+  /**
+   * Where this sugar crosses into each band at the warm check, grams per container: caution from 75 % of the rating,
+   * danger from the rating itself (null without a rating), and the alcohol limit.
+   */
+  bands: { cautionFromG: number | null; dangerFromG: number | null; alcoholLimitG: number };
   findings: Finding[];
   /** What was taken for inputs that were not given (the residual CO2 of the base). */
   assumptions: CarbonationResult['assumptions'];
@@ -657,6 +662,18 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   );
   const alcoholCapG = Math.max(0, ((input.abvLimitPercent - input.baseAbvPercent) / abvPerGram) * 0.999);
   const maxSafeSugarG = rating === null ? null : Math.min(pressureCapG, alcoholCapG);
+  // The same sum as the cap, at the caution line and at the rating: where the bands of this bottle begin.
+  const sugarForGauge = (gaugeBar: number) =>
+    Math.max(
+      0,
+      (maxCo2MolForGauge(container, gaugeBar, input.highestTempC) - volumesToMol(residual, input.liquidMl)) *
+        gramsPerCo2Mol,
+    );
+  const bands = {
+    cautionFromG: rating === null ? null : sugarForGauge(rating * CAUTION_SHARE_OF_RATING),
+    dangerFromG: rating === null ? null : sugarForGauge(rating),
+    alcoholLimitG: Math.max(0, (input.abvLimitPercent - input.baseAbvPercent) / abvPerGram),
+  };
   const limitedBy: PrimingResult['limitedBy'] =
     sugarG <= Math.min(pressureCapG, alcoholCapG) ? null : alcoholCapG < pressureCapG ? 'alcohol' : 'pressure';
   const safeSugarG = Math.min(sugarG, pressureCapG, alcoholCapG);
@@ -728,6 +745,7 @@ export function computePriming(asked: PrimingInput): PrimingResult {
   }
   return {
     checkedTempC,
+    bands,
     ratingShare: share,
     safeSugarG,
     targetReachable: limitedBy === null,

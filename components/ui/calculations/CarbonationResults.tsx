@@ -106,6 +106,13 @@ export function CarbonationResults({ answer, chart, units, limitPercent, tempera
             ratingBar={rating}
             worst={chart.pressures.map((p, i) => ({ tempC: p.tempC, gaugeBar: chart.cases.worst.gaugeBar[i] }))}
             expected={chart.pressures.map((p, i) => ({ tempC: p.tempC, gaugeBar: chart.cases.expected.gaugeBar[i] }))}
+            moments={rows
+              .filter((r) => !r.full)
+              .map((r) => ({
+                tempC: r.tempC,
+                gaugeBar: r.worst,
+                label: r.name === WARM_DAY_NAME ? 'Warm day' : r.name,
+              }))}
           />
         ) : null}
         <Cautions />

@@ -1,8 +1,9 @@
-import { useState } from 'react';
+import { Fragment, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Svg, { Circle, Line, Path, Text as SvgText } from 'react-native-svg';
+import Svg, { Circle, Line, Path, Rect, Text as SvgText } from 'react-native-svg';
 
 import { Text } from '@/components/ui';
+import { CAUTION_SHARE_OF_RATING } from '@/lib/chemistry/carbonation';
 import { colors, fonts, space } from '@/lib/theme';
 import { barToPsi, cToF, formatNumber, type UnitSystem } from '@/lib/units';
 
@@ -18,6 +19,8 @@ interface Props {
   units: UnitSystem;
   /** Measured points (a batch's test bottles), drawn as dots in their check's colour. */
   marks?: (Point & { level: 'ok' | 'caution' | 'danger' })[];
+  /** The recipe's own moments on the worst-case curve: carbonating, cold store, the warm day. */
+  moments?: (Point & { label: string })[];
 }
 
 const HEIGHT = 230;
@@ -31,8 +34,12 @@ function niceStep(max: number, count: number): number {
   return (unit <= 1 ? 1 : unit <= 2 ? 2 : unit <= 5 ? 5 : 10) * power;
 }
 
-/** Gauge pressure against temperature, worst and expected cases, with the bottle's rating drawn across. */
-export function PressureChart({ worst, expected, ratingBar, units, marks = [] }: Props) {
+/**
+ * Gauge pressure against temperature for this bottle: its safe, caution and danger bands shaded behind (caution from
+ * 75 % of the rating, danger from the rating), the worst and expected cases across them, and the recipe's own
+ * moments (carbonating, cold store, the warm day) marked on the worst case.
+ */
+export function PressureChart({ worst, expected, ratingBar, units, marks = [], moments = [] }: Props) {
   const [width, setWidth] = useState(0);
   const toP = (bar: number) => (units === 'us' ? barToPsi(bar) : bar);
   const pUnit = units === 'us' ? 'psi' : 'bar';
@@ -63,6 +70,31 @@ export function PressureChart({ worst, expected, ratingBar, units, marks = [] }:
       <View role="img" aria-label={summary}>
         {width > 0 ? (
           <Svg width={width} height={HEIGHT}>
+            {ratingBar ? (
+              <>
+                <Rect
+                  x={MARGIN.left}
+                  width={plotW}
+                  y={MARGIN.top}
+                  height={Math.max(0, y(toP(ratingBar)) - MARGIN.top)}
+                  fill={colors.dangerTint}
+                />
+                <Rect
+                  x={MARGIN.left}
+                  width={plotW}
+                  y={y(toP(ratingBar))}
+                  height={Math.max(0, y(toP(ratingBar * CAUTION_SHARE_OF_RATING)) - y(toP(ratingBar)))}
+                  fill={colors.cautionTint}
+                />
+                <Rect
+                  x={MARGIN.left}
+                  width={plotW}
+                  y={y(toP(ratingBar * CAUTION_SHARE_OF_RATING))}
+                  height={Math.max(0, y(bottom) - y(toP(ratingBar * CAUTION_SHARE_OF_RATING)))}
+                  fill={colors.successTint}
+                />
+              </>
+            ) : null}
             {yTicks.map((v) => (
               <Line
                 key={`y${v}`}
@@ -115,28 +147,54 @@ export function PressureChart({ worst, expected, ratingBar, units, marks = [] }:
             </SvgText>
             {ratingBar ? (
               <>
-                <Line
-                  x1={MARGIN.left}
-                  x2={MARGIN.left + plotW}
-                  y1={y(toP(ratingBar))}
-                  y2={y(toP(ratingBar))}
-                  stroke={colors.danger}
-                  strokeWidth={2}
-                  strokeDasharray="6 4"
-                />
                 <SvgText
-                  x={MARGIN.left + 4}
+                  x={MARGIN.left + plotW - 4}
                   y={y(toP(ratingBar)) - 6}
-                  fontSize={12}
+                  fontSize={11}
                   fontFamily={fonts.semibold}
                   fill={colors.danger}
+                  textAnchor="end"
                 >
-                  {`Bottle rating ${formatNumber(toP(ratingBar), units === 'us' ? 0 : 1)} ${pUnit}`}
+                  {`Danger: at or over the ${formatNumber(toP(ratingBar), units === 'us' ? 0 : 1)} ${pUnit} rating`}
+                </SvgText>
+                <SvgText
+                  x={MARGIN.left + plotW - 4}
+                  y={y(toP(ratingBar * CAUTION_SHARE_OF_RATING)) - 6}
+                  fontSize={11}
+                  fontFamily={fonts.semibold}
+                  fill={colors.caution}
+                  textAnchor="end"
+                >
+                  Caution: within 25 %
                 </SvgText>
               </>
             ) : null}
             <Path d={path(expected)} stroke={colors.info} strokeWidth={2} strokeDasharray="3 3" fill="none" />
             <Path d={path(worst)} stroke={colors.primary} strokeWidth={3} fill="none" />
+            {moments.map((m, i) => (
+              <Fragment key={`n${i}`}>
+                <Rect
+                  x={x(m.tempC) - 5}
+                  y={y(toP(m.gaugeBar)) - 5}
+                  width={10}
+                  height={10}
+                  fill={colors.surface}
+                  stroke={colors.text}
+                  strokeWidth={2}
+                  transform={`rotate(45 ${x(m.tempC)} ${y(toP(m.gaugeBar))})`}
+                />
+                <SvgText
+                  x={x(m.tempC) + (x(m.tempC) > MARGIN.left + plotW / 2 ? -10 : 10)}
+                  y={y(toP(m.gaugeBar)) + (i % 2 === 0 ? 16 : -10)}
+                  fontSize={11}
+                  fontFamily={fonts.semibold}
+                  fill={colors.text}
+                  textAnchor={x(m.tempC) > MARGIN.left + plotW / 2 ? 'end' : 'start'}
+                >
+                  {m.label}
+                </SvgText>
+              </Fragment>
+            ))}
             {marks.map((m, i) => (
               <Circle
                 key={`m${i}`}
@@ -154,8 +212,24 @@ export function PressureChart({ worst, expected, ratingBar, units, marks = [] }:
       <View style={styles.legend}>
         <LegendItem color={colors.primary} label="Worst case" />
         <LegendItem color={colors.info} label="Expected" dashed />
-        {ratingBar ? <LegendItem color={colors.danger} label="Bottle rating" dashed /> : null}
+        {ratingBar ? (
+          <>
+            <BandItem color={colors.successTint} label="Safe" />
+            <BandItem color={colors.cautionTint} label="Caution" />
+            <BandItem color={colors.dangerTint} label="Danger" />
+          </>
+        ) : null}
+        {moments.length ? <Text variant="small">◆ this recipe’s moments</Text> : null}
       </View>
+    </View>
+  );
+}
+
+function BandItem({ color, label }: { color: string; label: string }) {
+  return (
+    <View style={styles.legendItem}>
+      <View style={[styles.band, { backgroundColor: color }]} />
+      <Text variant="small">{label}</Text>
     </View>
   );
 }
@@ -174,4 +248,5 @@ const styles = StyleSheet.create({
   legend: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   legendItem: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   swatch: { width: 22, height: 0, borderTopWidth: 3 },
+  band: { width: 16, height: 12, borderWidth: 1, borderColor: colors.hairline },
 });

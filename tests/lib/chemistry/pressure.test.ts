@@ -194,6 +194,8 @@ describe('computePriming', () => {
     yield: 'worst' as const,
   };
 
+  const primingAtSealing = () => computePriming({ ...input, highestTempC: 20 });
+
   it('finds the sugar for a target', () => {
     const result = computePriming(input);
     // By hand: (2.5 − 0.9) volumes × 1.9635 g = 3.1416 g/L CO2 ÷ 0.51428 = 6.1087 g/L sucrose → 3.054 g per 500 mL.
@@ -210,6 +212,22 @@ describe('computePriming', () => {
     within(result.maxSafeSugarG!, 2.4625, 0.01);
     expect(result.targetReachable).toBe(false);
     expect(result.limitedBy).toBe('pressure');
+  });
+
+  it('says where this sugar enters the caution and danger bands of the bottle, and reaches the alcohol limit', () => {
+    const { bands } = primingAtSealing();
+    // As above, at the sealing temperature the bottle holds 0.0206253 mol of CO2 per atm of gauge.
+    // Caution from 75 % of 3 bar = 2.25 bar = 2.22058 atm → 0.045801 mol − 0.020077 = 0.025724 mol ÷ 4 × 342.297 = 2.2013 g.
+    within(bands.cautionFromG!, 2.2013, 0.01);
+    // Danger from 3 bar = 2.96077 atm → 0.061067 mol − 0.020077 = 0.040990 mol ÷ 4 × 342.297 = 3.5077 g.
+    within(bands.dangerFromG!, 3.5077, 0.01);
+    // 0.5 % ABV of 500 mL = 2.5 mL of ethanol × 0.78924 g/mL (CRC Handbook) = 1.9731 g; sucrose gives 4 × 46.069 g of
+    // ethanol per 342.297 g (0.53835 g/g), so 1.9731 ÷ 0.53835 = 3.6651 g of sucrose.
+    within(bands.alcoholLimitG, 3.6651, 0.01);
+    expect(computePriming({ ...input, maxWorkingPressureBar: null }).bands).toMatchObject({
+      cautionFromG: null,
+      dangerFromG: null,
+    });
   });
 
   it('shows the alcohol the target fizz costs, and honey needs more weight than sucrose', () => {
