@@ -43,7 +43,7 @@ import { batchDangerMail, batchWaitingMail } from '@/server/mail/templates';
 import { storeFile, toAttachmentDto } from './attachments';
 import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
 import { recipeCard } from './cards';
-import { visibleIngredient } from './ingredients';
+import { displayNames, visibleIngredient } from './ingredients';
 import { findOwnRecipe } from './own-recipe';
 import { evaluate, getRecipe } from './recipes';
 import type { AuthContext } from './sessions';
@@ -444,8 +444,9 @@ export async function addIngredientLot(
     throw badRequest('One field needs attention.', {
       quantity: 'Write a quantity with its unit, e.g. "2 kg", "5 lb" or "3 gal".',
     });
-  const ingredientName = input.ingredientId
-    ? (await visibleIngredient(auth, input.ingredientId)).name
+  const known = input.ingredientId ? await visibleIngredient(auth, input.ingredientId) : null;
+  const ingredientName = known
+    ? ((await displayNames(auth.organisationId, [known])).get(known.id) ?? known.name)
     : input.ingredientName;
   const created = await transaction(async (t) => {
     if (

@@ -9,14 +9,28 @@ test('a developer searches the library, reads an ingredient and adds a house ing
   await signIn(page, 'rafi@wrenfield.example', 'wrenfield-developer');
   await openNav(page, 'Ingredients');
   await page.getByLabel('Search ingredients').fill('straw rasp');
-  await expect(page.getByRole('link', { name: 'Strawberries, raw', exact: true })).toBeVisible();
-  await expect(page.getByRole('link', { name: 'Raspberries, raw', exact: true })).toBeVisible();
+  // Dataset ingredients read by their short names; the full description stays on the detail.
+  await expect(page.getByRole('link', { name: 'Strawberries', exact: true })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Raspberries', exact: true })).toBeVisible();
   await shot(page, 'phone-ingredients-search');
-  await page.getByRole('link', { name: 'Strawberries, raw', exact: true }).click();
+  await page.getByRole('link', { name: 'Strawberries', exact: true }).click();
+  await expect(page.getByText('Full name in the dataset: Strawberries, raw')).toBeVisible();
   // USDA SR25, NDB 09316: 4.89 g total sugars per 100 g.
   await expect(page.getByText('4.89 g of sugars per 100 g', { exact: true })).toBeVisible();
   await expect(page.getByText('Source: USDA SR25 record 09316')).toBeVisible();
   await shot(page, 'phone-ingredient-detail');
+
+  // The brewery's own short name for a dataset ingredient, everywhere it is read.
+  await openNav(page, 'Ingredients');
+  await page.getByLabel('Search ingredients').fill('lemons');
+  await page.getByRole('link', { name: 'Lemons', exact: true }).click();
+  await page.getByLabel('Display name').fill('Unwaxed lemons');
+  await page.getByRole('button', { name: 'Save name' }).click();
+  await expect(page.getByText('Display name saved.')).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Unwaxed lemons', level: 1 })).toBeVisible();
+  await openNav(page, 'Ingredients');
+  await page.getByLabel('Search ingredients').fill('lemons');
+  await expect(page.getByRole('link', { name: 'Unwaxed lemons', exact: true })).toBeVisible();
 
   const stamp = Date.now();
   await openNav(page, 'Ingredients');

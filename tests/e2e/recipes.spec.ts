@@ -13,11 +13,11 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
 
   // Ingredients from the library.
   await page.getByLabel('Add an ingredient').fill('straw');
-  await page.getByRole('button', { name: 'Add Strawberries, raw' }).click();
-  await page.getByLabel('Amount of Strawberries, raw').fill('30');
+  await page.getByRole('button', { name: 'Add Strawberries', exact: true }).click();
+  await page.getByLabel('Amount of Strawberries', { exact: true }).fill('30');
   await page.getByLabel('Add an ingredient').fill('ginger root');
-  await page.getByRole('button', { name: 'Add Ginger root, raw' }).click();
-  await page.getByLabel('Amount of Ginger root, raw').fill('2');
+  await page.getByRole('button', { name: 'Add Ginger root', exact: true }).click();
+  await page.getByLabel('Amount of Ginger root', { exact: true }).fill('2');
   await page.getByLabel('Sucrose (table sugar) per litre').fill('1');
   await expect(page.getByText(/g of sugar into the liquid/).first()).toBeVisible();
   await expect(page.getByText(/Worst case .* within 25 %|stays well within/).first()).toBeVisible();
@@ -43,12 +43,12 @@ async function buildRecipe(page: Page, name: string, prefix: string) {
   await page.getByRole('radio', { name: 'Scale' }).click();
   await page.getByLabel('Number of bottles').fill('200');
   await expect(page.getByText(/Batch: 200 bottles of Glass crown cap 473 mL/)).toBeVisible();
-  // 30 g/L × 94.6 L = 2838 g → 2.84 kg; ginger and sucrose, 2 g/L each → 189.2 g → 190 g (5 g steps).
+  // 30 g/L × 94.6 L = 2838 g → 2.84 kg; ginger and sucrose, 2 g/L each → 189.2 g → 189 g (1 g steps from 100 g).
   await expect(page.getByText('2.84 kg', { exact: true })).toBeVisible();
-  await expect(page.getByText('190 g', { exact: true })).toHaveCount(2);
+  await expect(page.getByText('189 g', { exact: true })).toHaveCount(2);
   await expect(page.getByText(/to top up after straining/)).toBeVisible();
   await expect(
-    page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 190 g sucrose/),
+    page.getByText(/^3\. Top up with 9\.46 L of fresh base to 94\.6 L and dissolve 189 g sucrose/),
   ).toBeVisible();
   await shot(page, `${prefix}-recipe-scaled`);
 }
@@ -67,7 +67,9 @@ test('the same on a wide screen, then the history shows what changed', async ({ 
   await buildRecipe(page, `Garden berry ${Date.now()}`, 'wide');
   await page.getByRole('radio', { name: 'History' }).click();
   await page.getByRole('button', { name: 'Compare version 1 with the current one' }).click();
-  await expect(page.getByText(/Strawberries, raw added/)).toBeVisible();
+  // The answer opens under the version compared, in the form's words.
+  const changes = page.getByRole('region', { name: /What changed from version 1 to/ });
+  await expect(changes.getByText(/Strawberries added/)).toBeVisible();
   await shot(page, 'wide-recipe-history');
 
   // A tasting whose sugar would make the recipe a danger says so before it is saved, and is listed against the
@@ -82,4 +84,17 @@ test('the same on a wide screen, then the history shows what changed', async ({ 
   await expect(page.getByText(/tasted version 2/)).toBeVisible();
   await page.getByRole('button', { name: 'Its sugar made version 3: open History' }).click();
   await expect(page.getByText(/\+5 g sucrose to 473 mL/).first()).toBeVisible();
+});
+
+test('a brewer reads the design without fields to edit, on a phone', async ({ browser }) => {
+  const page = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await signIn(page, 'juno@wrenfield.example', 'wrenfield-brewer');
+  await openNav(page, 'Recipes');
+  await page.getByRole('link', { name: 'Hedgerow Bramble' }).click();
+  await page.getByRole('radio', { name: 'Design' }).click();
+  await expect(page.getByRole('heading', { name: 'The recipe' })).toBeVisible();
+  await expect(page.getByText(/^Blackberries:/)).toBeVisible();
+  await expect(page.getByRole('textbox')).toHaveCount(0);
+  await expect(page.getByRole('button', { name: 'Save as new version' })).toHaveCount(0);
+  await shot(page, 'phone-brewer-design-read-only');
 });

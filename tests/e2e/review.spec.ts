@@ -58,6 +58,10 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await expect(brewer.getByRole('button', { name: 'Print' })).toBeHidden();
   await expect(brewer.getByText('Checkpoints')).toBeVisible();
   await shot(brewer, 'print-card-a4');
+  // The browser's print, on A4 and on US Letter: one page each.
+  const pages = (pdf: Buffer) => pdf.toString('latin1').match(/\/Type\s*\/Page\b(?!s)/g)?.length ?? 0;
+  expect(pages(await brewer.pdf({ format: 'A4', printBackground: true }))).toBe(1);
+  expect(pages(await brewer.pdf({ format: 'Letter', printBackground: true }))).toBe(1);
   await brewer.emulateMedia({ media: 'screen' });
 
   // The short code opens the same card on another phone.
