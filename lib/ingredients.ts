@@ -97,7 +97,7 @@ export interface Measure {
 
 /** Parts of a dataset description that say how it was sold or prepared, not what it is (dropped from short names). */
 const PREPARATION =
-  /^(raw|fresh|uncooked|plain|common|ground|frozen|cooked|canned|bottled|canned or bottled|unsweetened|sweetened|commercially prepared|prepared|enriched flour|all .*|with(out)? .*|includes .*|\d.*)$/i;
+  /^(raw|fresh|uncooked|plain|common|canned|bottled|canned or bottled|commercially prepared|prepared|enriched flour|all .*|with(out)? .*|includes .*|\d.*)$/i;
 /** Leading words that name a class, with the thing itself in the next part ("Spices, cardamom"). */
 const CLASS_WORDS: Record<string, string | null> = {
   spices: null,
@@ -110,14 +110,16 @@ const CLASS_WORDS: Record<string, string | null> = {
 
 /**
  * A short name a person reads, made from a dataset's long description: "Cookies, shortbread, commercially prepared,
- * plain" → "Shortbread cookies", "Spices, cinnamon, ground" → "Cinnamon", "Syrups, maple" → "Maple syrup". The head
- * noun keeps one describing word at most; preparation notes and bracketed synonyms are dropped. A brewery can replace
- * it; the full description stays on the ingredient.
+ * plain" → "Shortbread cookies", "Spices, cinnamon, ground" → "Ground cinnamon", "Syrups, maple" → "Maple syrup". The
+ * first describing part goes before the head noun, the others that tell kinds apart after it ("Frozen strawberries,
+ * unsweetened"); how it was sold or packed ("raw", "canned", "commercially prepared") and bracketed synonyms are
+ * dropped. A brewery can replace it; the full description stays on the ingredient.
  */
 export function shortIngredientName(description: string): string {
   let parts = description
+    .replace(/\([^)]*\)?/g, '')
     .split(',')
-    .map((p) => p.replace(/\([^)]*\)?/g, '').trim())
+    .map((p) => p.trim())
     .filter(Boolean);
   let head = parts[0] ?? description.trim();
   const klass = CLASS_WORDS[head.toLowerCase()];
@@ -130,10 +132,13 @@ export function shortIngredientName(description: string): string {
 }
 
 function withDescriber(head: string, rest: string[]): string {
-  const describer = rest.find((p) => !PREPARATION.test(p));
+  const kept = rest.filter((p) => !PREPARATION.test(p));
+  const [describer, ...more] = kept;
   // A describer that names the thing itself ("Cookies, graham crackers") stands alone.
   const itself = describer !== undefined && /\s/.test(describer) && /s$/i.test(describer);
-  const name = describer ? (itself ? describer : `${describer} ${head.toLowerCase()}`) : head;
+  const named = describer ? (itself ? describer : `${describer} ${head.toLowerCase()}`) : head;
+  // What else tells two kinds apart ("reduced fat", "unsweetened") follows after a comma.
+  const name = [named, ...more].join(', ');
   const short = name.charAt(0).toUpperCase() + name.slice(1);
   return short.length > 80 ? `${short.slice(0, 79)}…` : short;
 }

@@ -12,7 +12,7 @@ async function answerTheQuestion(page: Page, prefix: string) {
 
   // How much sugar for 2.5 volumes in this bottle? More than it can safely take on a 35 °C day, so the helper says
   // so and offers the most that is safe instead.
-  await page.getByLabel('Target carbonation').fill('2.5');
+  await page.getByLabel('Fizz you want').fill('2.5');
   // By hand: (2.5 − 0.9) × 1.9635 g/L ÷ 0.51428 g CO2 per g sucrose = 6.109 g/L → 2.02 g in 330 mL.
   await expect(page.getByText(/it would take 2\.02 g/).first()).toBeVisible();
   await expect(page.getByText(/the target is out of reach/)).toBeVisible();
