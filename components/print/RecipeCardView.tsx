@@ -6,8 +6,8 @@ import type { RecipeCard } from '@/lib/recipes/card';
 import { colors, fonts, fontSize, space } from '@/lib/theme';
 
 const SAFETY_WORDS = { ok: 'OK', caution: 'CAUTION', danger: 'DANGER' } as const;
-/** A write-in box a pen fits in: 36 CSS px is 9.5 mm on paper (at least 8 mm). */
-export const WRITE_IN_HEIGHT = 36;
+/** A write-in box a pen fits in: 40 CSS px, printed at the card's 80 % (print.css) 32 px, 8.5 mm (at least 8 mm). */
+export const WRITE_IN_HEIGHT = 40;
 
 /**
  * The card on screen and on paper: large amounts with each bottle's share, numbered steps, and checkpoints with

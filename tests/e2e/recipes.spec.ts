@@ -90,10 +90,10 @@ test('a brewer reads the design without fields to edit, on a phone', async ({ br
   const page = await (await browser.newContext({ viewport: PHONE })).newPage();
   await signIn(page, 'juno@wrenfield.example', 'wrenfield-brewer');
   await openNav(page, 'Recipes');
-  await page.getByRole('link', { name: 'Hedgerow Bramble' }).click();
+  await page.getByRole('link', { name: 'Ginger Lime Snap' }).click();
   await page.getByRole('radio', { name: 'Design' }).click();
   await expect(page.getByRole('heading', { name: 'The recipe' })).toBeVisible();
-  await expect(page.getByText(/^Blackberries:/)).toBeVisible();
+  await expect(page.getByText(/^Ginger root: 8\.0 g per litre/)).toBeVisible();
   await expect(page.getByRole('textbox')).toHaveCount(0);
   await expect(page.getByRole('button', { name: 'Save as new version' })).toHaveCount(0);
   await shot(page, 'phone-brewer-design-read-only');

@@ -58,7 +58,10 @@ test('a developer submits, the owner follows the e-mail and approves, the brewer
   await expect(brewer.getByRole('button', { name: 'Print' })).toBeHidden();
   await expect(brewer.getByText('Checkpoints')).toBeVisible();
   await shot(brewer, 'print-card-a4');
-  // The browser's print, on A4 and on US Letter: one page each.
+  // The browser's print, on A4 and on US Letter: one page each, with write-in boxes at least 8 mm high on paper
+  // (1 mm = 96 / 25.4 CSS px; measured under print media, so at the card's printed scale).
+  const box = await brewer.getByTestId('write-in').first().boundingBox();
+  expect((box!.height * 25.4) / 96).toBeGreaterThanOrEqual(8);
   const pages = (pdf: Buffer) => pdf.toString('latin1').match(/\/Type\s*\/Page\b(?!s)/g)?.length ?? 0;
   expect(pages(await brewer.pdf({ format: 'A4', printBackground: true }))).toBe(1);
   expect(pages(await brewer.pdf({ format: 'Letter', printBackground: true }))).toBe(1);
