@@ -88,7 +88,8 @@ export function inUnits(message: string, units: UnitSystem): string {
       (_, a: string, b: string) => `${formatNumber(cToF(num(a)), 0)}–${formatNumber(cToF(num(b)), 0)} °F`,
     )
     .replace(new RegExp(`${NUMBER} °C`, 'g'), (_, t: string) => formatTemp(num(t), 'us'))
-    .replace(new RegExp(`${NUMBER} bar\\b`, 'g'), (_, p: string) => formatPressure(num(p), 'us'))
+    // "2.93 bar (42 psi)", as formatPressure writes it, or a bare "3 bar": either way psi first, bar after.
+    .replace(new RegExp(`${NUMBER} bar(?: \\(-?\\d+ psi\\))?`, 'g'), (_, p: string) => formatPressure(num(p), 'us'))
     .replace(
       new RegExp(`${NUMBER} mL\\b`, 'g'),
       (_, v: string) => `${formatNumber(mlToFlOz(num(v)), 2)} US fl oz (${v} mL)`,
