@@ -82,16 +82,18 @@ const NUMBER = String.raw`(-?\d+(?:[.,]\d+)?)`;
 export function inUnits(message: string, units: UnitSystem): string {
   if (units === 'metric') return message;
   const num = (s: string) => Number(s.replace(',', ''));
-  return message
-    .replace(
-      new RegExp(`${NUMBER}\\s?[–-]\\s?${NUMBER} °C`, 'g'),
-      (_, a: string, b: string) => `${formatNumber(cToF(num(a)), 0)}–${formatNumber(cToF(num(b)), 0)} °F`,
-    )
-    .replace(new RegExp(`${NUMBER} °C`, 'g'), (_, t: string) => formatTemp(num(t), 'us'))
-    // "2.93 bar (42 psi)", as formatPressure writes it, or a bare "3 bar": either way psi first, bar after.
-    .replace(new RegExp(`${NUMBER} bar(?: \\(-?\\d+ psi\\))?`, 'g'), (_, p: string) => formatPressure(num(p), 'us'))
-    .replace(
-      new RegExp(`${NUMBER} mL\\b`, 'g'),
-      (_, v: string) => `${formatNumber(mlToFlOz(num(v)), 2)} US fl oz (${v} mL)`,
-    );
+  return (
+    message
+      .replace(
+        new RegExp(`${NUMBER}\\s?[–-]\\s?${NUMBER} °C`, 'g'),
+        (_, a: string, b: string) => `${formatNumber(cToF(num(a)), 0)}–${formatNumber(cToF(num(b)), 0)} °F`,
+      )
+      .replace(new RegExp(`${NUMBER} °C`, 'g'), (_, t: string) => formatTemp(num(t), 'us'))
+      // "2.93 bar (42 psi)", as formatPressure writes it, or a bare "3 bar": either way psi first, bar after.
+      .replace(new RegExp(`${NUMBER} bar(?: \\(-?\\d+ psi\\))?`, 'g'), (_, p: string) => formatPressure(num(p), 'us'))
+      .replace(
+        new RegExp(`${NUMBER} mL\\b`, 'g'),
+        (_, v: string) => `${formatNumber(mlToFlOz(num(v)), 2)} US fl oz (${v} mL)`,
+      )
+  );
 }
