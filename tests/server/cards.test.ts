@@ -16,16 +16,8 @@ let recipeId: number;
 
 /** The text a PDF shows: every content stream inflated, the hex strings of its TJ/Tj operators decoded. */
 function pdfText(pdf: Buffer): string {
-  const raw = pdf.toString('latin1');
   const texts: string[] = [];
-  const streams = raw.matchAll(/stream\r?\n([\s\S]*?)\r?\nendstream/g);
-  for (const [, body] of streams) {
-    let content: string;
-    try {
-      content = zlib.inflateSync(Buffer.from(body, 'latin1')).toString('latin1');
-    } catch {
-      continue;
-    }
+  for (const content of zlibStreams(pdf)) {
     for (const [, ops] of content.matchAll(/\[(.*?)\]\s*TJ/g)) {
       texts.push(
         [...ops.matchAll(/<([0-9a-fA-F]+)>/g)].map(([, hex]) => Buffer.from(hex, 'hex').toString('latin1')).join(''),
@@ -34,6 +26,13 @@ function pdfText(pdf: Buffer): string {
   }
   return texts.join('\n');
 }
+
+/** Reads a response body whole, as bytes (supertest parses only text types by itself). */
+const asBuffer = (r: import('superagent').Response, cb: (err: Error | null, body: unknown) => void) => {
+  const chunks: Buffer[] = [];
+  r.on('data', (c: Buffer) => chunks.push(c));
+  r.on('end', () => cb(null, Buffer.concat(chunks)));
+};
 
 beforeAll(async () => {
   app = await startApp();
@@ -141,11 +140,7 @@ describe('GET /api/recipes/:id/card.pdf', () => {
       .get(`/api/recipes/${recipeId}/card.pdf`)
       .query({ kind: 'bottles', value: 100 })
       .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
+      .parse(asBuffer)
       .expect(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const pdf = res.body as Buffer;
@@ -206,11 +201,7 @@ describe('danger reaches the floor', () => {
       .get(`/api/recipes/${id}/card.pdf`)
       .query({ kind: 'bottles', value: 24 })
       .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
+      .parse(asBuffer)
       .expect(200);
     const text = pdfText(res.body as Buffer);
     expect(text).toContain('Safety: DANGER.');
@@ -225,16 +216,7 @@ describe('one page', () => {
   const mediaBox = (pdf: Buffer) =>
     /\/MediaBox \[0 0 ([\d.]+) ([\d.]+)\]/.exec(pdf.toString('latin1'))!.slice(1).map(Number);
   const download = (agent: Agent, id: number, query: Record<string, string | number>) =>
-    agent
-      .get(`/api/recipes/${id}/card.pdf`)
-      .query(query)
-      .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
-      .expect(200);
+    agent.get(`/api/recipes/${id}/card.pdf`).query(query).buffer(true).parse(asBuffer).expect(200);
 
   it('fits a recipe of 8 ingredient lines and 2 sugars on one A4 page and on one US Letter page, with write-in boxes', async () => {
     const formats = (await owner.get('/api/bottle-formats').expect(200)).body as { id: number; name: string }[];
