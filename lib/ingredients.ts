@@ -89,6 +89,38 @@ export const DEFAULT_STEEP_SHARE: Record<Category, number> = {
   other: 0.5,
 };
 
+/**
+ * Nutrients a Nutrition Facts panel needs beyond those the sugar and fat checks use, per 100 g of the ingredient (null:
+ * not measured, never zero). Dataset foods take them from the SR25 abbreviated file (trans fat and added sugars are not
+ * in it); house ingredients from their label. The one list the model, the migration, the importer and the form read.
+ */
+export const LABEL_NUTRIENT_FIELDS = [
+  'saturatedFatG',
+  'transFatG',
+  'cholesterolMg',
+  'sodiumMg',
+  'addedSugarsG',
+  'vitaminDMcg',
+  'calciumMg',
+  'ironMg',
+  'potassiumMg',
+] as const;
+export type LabelNutrientField = (typeof LABEL_NUTRIENT_FIELDS)[number];
+export type LabelNutrientValues = Record<LabelNutrientField, number | null>;
+
+/** What each field is called in forms and on the ingredient's page, with its unit. */
+export const LABEL_NUTRIENT_FIELD_INFO: Record<LabelNutrientField, { label: string; unit: 'g' | 'mg' | 'mcg' }> = {
+  saturatedFatG: { label: 'Saturated fat', unit: 'g' },
+  transFatG: { label: 'Trans fat', unit: 'g' },
+  cholesterolMg: { label: 'Cholesterol', unit: 'mg' },
+  sodiumMg: { label: 'Sodium', unit: 'mg' },
+  addedSugarsG: { label: 'Added sugars', unit: 'g' },
+  vitaminDMcg: { label: 'Vitamin D', unit: 'mcg' },
+  calciumMg: { label: 'Calcium', unit: 'mg' },
+  ironMg: { label: 'Iron', unit: 'mg' },
+  potassiumMg: { label: 'Potassium', unit: 'mg' },
+};
+
 /** A household measure: "1 cup" weighs `grams`. */
 export interface Measure {
   label: string;

@@ -27,6 +27,8 @@ export const CAPABILITIES = {
   'recipes.approve': ['owner'],
   /** Work on recipes in development (drafts, tastings, history); others see what is approved for production. */
   'recipes.develop': ['owner', 'developer'],
+  /** Enter a lab's nutrition values for a version: what the package will declare. */
+  'recipes.label': ['owner'],
   /** Add and change house ingredients and their files. */
   'ingredients.edit': ['owner', 'developer'],
   /** Add, change and archive bottle formats and their ratings. */

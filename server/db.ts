@@ -20,6 +20,7 @@ import { Ingredient } from './models/ingredient';
 import { IngredientChange } from './models/ingredient-change';
 import { IngredientDisplayName } from './models/ingredient-display-name';
 import { Invitation } from './models/invitation';
+import { NutritionLabValue } from './models/nutrition-lab-value';
 import { Organisation } from './models/organisation';
 import { OutboxMessage } from './models/outbox-message';
 import { PasswordReset } from './models/password-reset';
@@ -46,6 +47,7 @@ export {
   IngredientChange,
   IngredientDisplayName,
   Invitation,
+  NutritionLabValue,
   Organisation,
   OutboxMessage,
   PasswordReset,
@@ -142,6 +144,7 @@ for (const model of [
   BatchIngredientLot,
   BatchDeviation,
   BatchDecision,
+  NutritionLabValue,
 ])
   model.initModel(sequelize);
 
@@ -186,6 +189,8 @@ Batch.hasMany(BatchIngredientLot, { foreignKey: 'batchId', as: 'ingredientLots' 
 BatchIngredientLot.belongsTo(Batch, { foreignKey: 'batchId', as: 'batch' });
 Batch.hasMany(BatchDeviation, { foreignKey: 'batchId', as: 'deviations' });
 Batch.hasMany(BatchDecision, { foreignKey: 'batchId', as: 'decisions' });
+Recipe.hasMany(NutritionLabValue, { foreignKey: 'recipeId', as: 'labValues' });
+NutritionLabValue.belongsTo(User, { foreignKey: 'enteredById', as: 'enteredBy' });
 
 // Any change to a user row (role, active, password) must reach the sign-in check at once.
 User.addHook('afterSave', (user: User) => forgetCachedUser(user.id));

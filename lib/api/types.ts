@@ -1,5 +1,5 @@
 import type { CarbonationResult, PrimingResult } from '@/lib/chemistry/carbonation';
-import type { Allergen, Category, Measure } from '@/lib/ingredients';
+import type { Allergen, Category, LabelNutrientValues, Measure } from '@/lib/ingredients';
 import type { Role } from '@/lib/roles';
 import type { BottleFormatInput } from '@/lib/schemas/bottle-formats';
 import type { RecipeContent, TastingInput } from '@/lib/schemas/recipes';
@@ -117,6 +117,8 @@ export interface Ingredient {
     fatG: number | null;
     proteinG: number | null;
   };
+  /** What a nutrition panel needs besides, per 100 g (null: not measured). */
+  labelPer100g: LabelNutrientValues;
   perGram: { sugarsG: number | null; fermentableSugarsG: number | null; fatG: number | null };
   fermentableSharePct: number;
   steepSharePct: number;

@@ -141,7 +141,8 @@ const round = (value: number, digits = 2) => Math.round(value * 10 ** digits) / 
 /** Six significant figures: far beyond what the model can claim, and answers stay small (a full float is 18 characters). */
 const sig = (value: number) => (Number.isFinite(value) ? Number(value.toPrecision(6)) : value);
 
-function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients'>, which: YieldCase) {
+/** The fermentable sugar of a bottle (or a litre) as portions with their stoichiometry, with the totals by source. */
+export function fermentableSugars(input: Pick<CarbonationInput, 'sugars' | 'ingredients'>, which: YieldCase) {
   const portions: FermentableSugar[] = [];
   let addedG = 0;
   let fromIngredientsG = 0;

@@ -1,10 +1,32 @@
 import * as yup from 'yup';
 
-import { type Allergen, ALLERGENS, CATEGORIES, type Category } from '@/lib/ingredients';
+import {
+  type Allergen,
+  ALLERGENS,
+  CATEGORIES,
+  type Category,
+  LABEL_NUTRIENT_FIELD_INFO,
+  LABEL_NUTRIENT_FIELDS,
+  type LabelNutrientField,
+} from '@/lib/ingredients';
 
 import { numberField } from './numbers';
 
 const perServing = (label: string) => numberField(label, { min: 0, max: 100000, unit: 'g' }).nullable().default(null);
+
+/** The label's other nutrients per serving (optional; the nutrition panel notes what is missing). */
+const labelNutrientFields = () =>
+  Object.fromEntries(
+    LABEL_NUTRIENT_FIELDS.map((field) => {
+      const { label, unit } = LABEL_NUTRIENT_FIELD_INFO[field];
+      return [
+        field,
+        numberField(label, { min: 0, max: unit === 'g' ? 100000 : 10000000, unit })
+          .nullable()
+          .default(null),
+      ];
+    }),
+  ) as Record<LabelNutrientField, ReturnType<typeof perServing>>;
 
 const ingredientName = () =>
   yup
@@ -45,6 +67,7 @@ export const houseIngredientSchema = yup
     fibreG: perServing('Fibre'),
     fatG: perServing('Fat'),
     proteinG: perServing('Protein'),
+    ...labelNutrientFields(),
     fermentableSharePct: numberField('Share of sugars yeast can ferment', { min: 0, max: 100, unit: '%' }).required(
       'Enter the fermentable share in %.',
     ),

@@ -40,6 +40,17 @@ export const recipeContentSchema = yup.object({
       residualSugarGPerL: numberField('Residual sugar of the base', { min: 0, max: 150, unit: 'g/L' }).required(
         'Enter the base’s residual sugar in g/L.',
       ),
+      /** How much of the residual sugar was added in processing (the primary ferment's sugar); null: all of it. */
+      residualAddedSugarGPerL: numberField('Added sugar in the base’s residual sugar', {
+        min: 0,
+        max: 150,
+        unit: 'g/L',
+      })
+        .nullable()
+        .optional()
+        .test('within-residual', 'The added part cannot be more than the residual sugar.', function (value) {
+          return value === null || value === undefined || value <= (this.parent.residualSugarGPerL ?? Infinity);
+        }),
       ph: numberField('pH of the base', { min: 2, max: 7 }).nullable().default(null),
       abvPercent: numberField('Alcohol of the base', { min: 0, max: 5, unit: '% ABV' }).required(
         'Enter the base’s alcohol in % ABV.',

@@ -16,5 +16,5 @@ if (missing.length > 0) {
   process.exit(1);
 }
 const rows = STARTER_RECORDS.map((record) => ingredientFromSr(byRecord.get(record)!));
-fs.writeFileSync(STARTER_FILE, `${JSON.stringify(rows, null, 1)}\n`);
+fs.writeFileSync(STARTER_FILE, `${JSON.stringify(rows, null, 2)}\n`);
 console.log(`Wrote ${rows.length} starter ingredients to ${STARTER_FILE}.`);

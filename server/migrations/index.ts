@@ -14,6 +14,7 @@ import * as ratingShare from './0011-rating-share';
 import * as dropRecipeStatus from './0012-drop-recipe-status';
 import * as batches from './0013-batches';
 import * as displayNames from './0014-display-names-and-currency';
+import * as nutrition from './0015-nutrition';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -36,4 +37,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0012-drop-recipe-status', ...dropRecipeStatus },
   { name: '0013-batches', ...batches },
   { name: '0014-display-names-and-currency', ...displayNames },
+  { name: '0015-nutrition', ...nutrition },
 ];

@@ -8,7 +8,13 @@ import {
   type Sequelize,
 } from 'sequelize';
 
-import type { Allergen, Category, Measure } from '@/lib/ingredients';
+import {
+  type Allergen,
+  type Category,
+  LABEL_NUTRIENT_FIELDS,
+  type LabelNutrientField,
+  type Measure,
+} from '@/lib/ingredients';
 
 import { jsonColumn } from './json-column';
 import type { Organisation } from './organisation';
@@ -28,6 +34,16 @@ export class Ingredient extends Model<InferAttributes<Ingredient>, InferCreation
   declare fibreG: number | null;
   declare fatG: number | null;
   declare proteinG: number | null;
+  declare saturatedFatG: number | null;
+  declare transFatG: number | null;
+  declare cholesterolMg: number | null;
+  declare sodiumMg: number | null;
+  /** Only house ingredients carry it (from their label); dataset foods are judged by `addedSugarShare`. */
+  declare addedSugarsG: number | null;
+  declare vitaminDMcg: number | null;
+  declare calciumMg: number | null;
+  declare ironMg: number | null;
+  declare potassiumMg: number | null;
   /** Share (0–1) of the sugars that yeast can ferment. */
   declare fermentableShare: number;
   /** Default share (0–1) of the sugars that reach the liquid when steeped and strained. */
@@ -54,6 +70,9 @@ export class Ingredient extends Model<InferAttributes<Ingredient>, InferCreation
         fibreG: { type: DataTypes.FLOAT, allowNull: true },
         fatG: { type: DataTypes.FLOAT, allowNull: true },
         proteinG: { type: DataTypes.FLOAT, allowNull: true },
+        ...(Object.fromEntries(
+          LABEL_NUTRIENT_FIELDS.map((field) => [field, { type: DataTypes.FLOAT, allowNull: true }]),
+        ) as Record<LabelNutrientField, { type: typeof DataTypes.FLOAT; allowNull: true }>),
         fermentableShare: { type: DataTypes.FLOAT, allowNull: false },
         steepShare: { type: DataTypes.FLOAT, allowNull: false },
         allergens: jsonColumn<Allergen[]>('allergens', { empty: '[]' }),

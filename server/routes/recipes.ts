@@ -14,10 +14,14 @@ import {
   tastingSchema,
   versionQuerySchema,
 } from '@/lib/schemas/recipes';
+import type { NutritionAnswer } from '@/lib/nutrition/panel';
+import { labValuesSchema, nutritionFileQuerySchema, nutritionQuerySchema } from '@/lib/schemas/nutrition';
 import { approveSchema, returnSchema, submitSchema, withdrawSchema } from '@/lib/schemas/reviews';
 import { allow, authOf } from '@/server/middleware/access';
 import { validate } from '@/server/middleware/validate';
 import { cardPdf, recipeCard } from '@/server/services/cards';
+import * as nutrition from '@/server/services/nutrition';
+import { fileBasis, nutritionCsv, nutritionPdf, nutritionPng } from '@/server/services/nutrition-files';
 import * as recipes from '@/server/services/recipes';
 import * as reviews from '@/server/services/reviews';
 import type { AuthContext } from '@/server/services/sessions';
@@ -199,5 +203,59 @@ recipesRouter.get(
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Disposition', `inline; filename="card-${card.code}-${paper}.pdf"`);
     cardPdf(card, { paper, locale: req.acceptsLanguages()[0] }).pipe(res);
+  }),
+);
+
+recipesRouter.get(
+  '/:id/nutrition',
+  allow('signed-in'),
+  validate({ params: idParam, query: nutritionQuerySchema }, async ({ params, query }, res) => {
+    res.json(await nutrition.recipeNutrition(authOf(res), params.id, query));
+  }),
+);
+
+recipesRouter.put(
+  '/:id/nutrition/lab',
+  allow('recipes.label'),
+  validate({ params: idParam, body: labValuesSchema }, async ({ params, body }, res) => {
+    res.json(await nutrition.setLabValues(authOf(res), params.id, body));
+  }),
+);
+
+const panelFileName = (answer: NutritionAnswer, basis: string, ext: string) =>
+  `nutrition-${answer.recipeId}-v${answer.version}-${basis}.${ext}`;
+
+recipesRouter.get(
+  '/:id/nutrition.pdf',
+  allow('signed-in'),
+  validate({ params: idParam, query: nutritionFileQuerySchema }, async ({ params, query }, res) => {
+    const answer = await nutrition.recipeNutrition(authOf(res), params.id, query);
+    const basis = fileBasis(answer, query.basis);
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader('Content-Disposition', `attachment; filename="${panelFileName(answer, basis, 'pdf')}"`);
+    nutritionPdf(answer, basis).pipe(res);
+  }),
+);
+
+recipesRouter.get(
+  '/:id/nutrition.png',
+  allow('signed-in'),
+  validate({ params: idParam, query: nutritionFileQuerySchema }, async ({ params, query }, res) => {
+    const answer = await nutrition.recipeNutrition(authOf(res), params.id, query);
+    const basis = fileBasis(answer, query.basis);
+    res.setHeader('Content-Type', 'image/png');
+    res.setHeader('Content-Disposition', `attachment; filename="${panelFileName(answer, basis, 'png')}"`);
+    res.send(await nutritionPng(answer, basis));
+  }),
+);
+
+recipesRouter.get(
+  '/:id/nutrition.csv',
+  allow('signed-in'),
+  validate({ params: idParam, query: nutritionQuerySchema }, async ({ params, query }, res) => {
+    const answer = await nutrition.recipeNutrition(authOf(res), params.id, query);
+    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    res.setHeader('Content-Disposition', `attachment; filename="${panelFileName(answer, 'values', 'csv')}"`);
+    res.send(nutritionCsv(answer));
   }),
 );

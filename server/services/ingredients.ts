@@ -1,7 +1,8 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 
 import type { Ingredient as IngredientDtoShape, IngredientChangeEntry, IngredientPage } from '@/lib/api/types';
-import { CATEGORIES, type Measure, shortIngredientName } from '@/lib/ingredients';
+import { CATEGORIES, LABEL_NUTRIENT_FIELDS, type Measure, shortIngredientName } from '@/lib/ingredients';
+import { addedSugarShare } from '@/lib/nutrition/composition';
 import { type HouseIngredientInput, type IngredientSearch, per100g } from '@/lib/schemas/ingredients';
 import { Ingredient, IngredientChange, IngredientDisplayName, sequelize, transaction, User } from '@/server/db';
 import { conflict, forbidden, notFound } from '@/server/errors';
@@ -51,6 +52,7 @@ export function toIngredientDto(i: Ingredient, displayName?: string): Ingredient
       fatG: i.fatG,
       proteinG: i.proteinG,
     },
+    labelPer100g: Object.fromEntries(LABEL_NUTRIENT_FIELDS.map((f) => [f, i[f]])) as IngredientDtoShape['labelPer100g'],
     perGram: {
       sugarsG: div100(i.sugarsG),
       fermentableSugarsG: i.sugarsG === null ? null : (i.sugarsG / 100) * i.fermentableShare,
@@ -78,6 +80,7 @@ const COMPARED: (keyof DatasetIngredient)[] = [
   'fibreG',
   'fatG',
   'proteinG',
+  ...LABEL_NUTRIENT_FIELDS,
   'fermentableShare',
   'steepShare',
   'allergens',
@@ -132,6 +135,12 @@ export async function importDatasetIngredients(
 
 export async function datasetIngredientCount(): Promise<number> {
   return Ingredient.count({ where: { organisationId: null } });
+}
+
+/** True when dataset foods exist but none carries a label nutrient: imported before those were read. */
+export async function datasetLacksLabelNutrients(): Promise<boolean> {
+  const withSodium = await Ingredient.count({ where: { organisationId: null, sodiumMg: { [Op.not]: null } } });
+  return withSodium === 0;
 }
 
 // ---------------------------------------------------------------- search
@@ -283,6 +292,7 @@ function fromLabel(input: HouseIngredientInput) {
     fibreG: per100g(input.fibreG, grams),
     fatG: per100g(input.fatG, grams),
     proteinG: per100g(input.proteinG, grams),
+    ...Object.fromEntries(LABEL_NUTRIENT_FIELDS.map((f) => [f, per100g(input[f], grams)])),
     fermentableShare: input.fermentableSharePct / 100,
     steepShare: input.steepSharePct / 100,
     allergens: input.allergens,
@@ -382,6 +392,12 @@ export async function copyToHouse(auth: AuthContext, id: number, name: string): 
       fibreG: source.fibreG,
       fatG: source.fatG,
       proteinG: source.proteinG,
+      ...Object.fromEntries(LABEL_NUTRIENT_FIELDS.map((f) => [f, source[f]])),
+      // A copy says outright how much of its sugar is added, as a dataset food is judged (its own sugars are not).
+      addedSugarsG:
+        source.organisationId === null
+          ? (source.sugarsG ?? 0) * addedSugarShare({ ...source.get(), house: false }).share
+          : source.addedSugarsG,
       fermentableShare: source.fermentableShare,
       steepShare: source.steepShare,
       allergens: source.allergens,

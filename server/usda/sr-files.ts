@@ -27,6 +27,13 @@ export interface SrFood {
   carbohydrateG: number | null;
   fibreG: number | null;
   sugarsG: number | null;
+  saturatedFatG: number | null;
+  cholesterolMg: number | null;
+  sodiumMg: number | null;
+  vitaminDMcg: number | null;
+  calciumMg: number | null;
+  ironMg: number | null;
+  potassiumMg: number | null;
   measures: Measure[];
 }
 
@@ -96,6 +103,15 @@ export function readSrFoods(folder: string): SrFood[] {
       carbohydrateG: num(v[7]),
       fibreG: num(v[8]),
       sugarsG: num(v[9]),
+      // ABBREV.txt columns (0-based): 10 Calcium, 11 Iron, 14 Potassium, 15 Sodium (mg), 41 Vit_D_mcg, 44 FA_Sat (g),
+      // 47 Cholestrl (mg), as the SR25 documentation lists them.
+      calciumMg: num(v[10]),
+      ironMg: num(v[11]),
+      potassiumMg: num(v[14]),
+      sodiumMg: num(v[15]),
+      vitaminDMcg: num(v[41]),
+      saturatedFatG: num(v[44]),
+      cholesterolMg: num(v[47]),
       measures: measures.get(record) ?? [],
     });
   }
@@ -192,6 +208,16 @@ export function ingredientFromSr(food: SrFood) {
     fibreG: food.fibreG,
     fatG: food.fatG,
     proteinG: food.proteinG,
+    saturatedFatG: food.saturatedFatG,
+    // Trans fat is in SR25's full nutrient file only, not the abbreviated one; added sugars are not in SR25 at all.
+    transFatG: null as number | null,
+    cholesterolMg: food.cholesterolMg,
+    sodiumMg: food.sodiumMg,
+    addedSugarsG: null as number | null,
+    vitaminDMcg: food.vitaminDMcg,
+    calciumMg: food.calciumMg,
+    ironMg: food.ironMg,
+    potassiumMg: food.potassiumMg,
     fermentableShare: DEFAULT_FERMENTABLE_SHARE[category],
     steepShare: DEFAULT_STEEP_SHARE[category],
     allergens: allergensOf(food),
