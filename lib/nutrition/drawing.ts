@@ -67,7 +67,7 @@ export function panelDrawing(answer: NutritionAnswer, key: BasisKey): Drawing {
   rule(9);
 
   // Columns of a two-column panel: amount and %DV per serving, then per container.
-  const columns = dual ? [PAD + 140, PAD + 255] : [];
+  const columns = dual ? [PAD + 140, PAD + 262] : [];
   const columnRight = dual ? [PAD + 248, right] : [right];
   if (dual) {
     y += 12;
@@ -139,9 +139,9 @@ export function drawingSvg(drawing: Drawing, fontFamily: string, scale = 1): str
       if (item.kind === 'rule')
         return `<rect x="${item.x}" y="${item.y}" width="${item.width}" height="${item.thickness}" fill="#000"/>`;
       const runs = item.runs
-        .map((r) => `<tspan font-weight="${r.bold ? 700 : 400}">${escapeXml(r.text).replace(/^ /, '&#160;')}</tspan>`)
+        .map((r) => `<tspan font-weight="${r.bold ? 700 : 400}">${escapeXml(r.text)}</tspan>`)
         .join('');
-      return `<text x="${item.x}" y="${item.y}" font-size="${item.size}" text-anchor="${item.anchor}">${runs}</text>`;
+      return `<text xml:space="preserve" x="${item.x}" y="${item.y}" font-size="${item.size}" text-anchor="${item.anchor}">${runs}</text>`;
     })
     .join('');
   const w = drawing.width;
