@@ -32,6 +32,7 @@ export const palette = {
   sage: '#E6EFEC', // a chosen option's background
   hawthornDeep: '#7E1C23',
   umber: '#3D3422', // text on caution tints
+  black: '#000000', // the nutrition panel, black on white as labels print it
 } as const;
 
 export const colors = {
@@ -65,6 +66,8 @@ export const colors = {
   dangerStrong: palette.hawthornDeep,
   textOnCaution: palette.umber,
   brand: palette.focus,
+  labelInk: palette.black,
+  labelPaper: palette.white,
 } as const;
 
 /** The one look of a chosen option, everywhere: segments, option chips, lists of choices, toggled chips. */

@@ -13,12 +13,15 @@ import {
   CATEGORY_LABELS,
   DEFAULT_FERMENTABLE_SHARE,
   DEFAULT_STEEP_SHARE,
+  LABEL_NUTRIENT_FIELD_INFO,
+  LABEL_NUTRIENT_FIELDS,
+  type LabelNutrientField,
 } from '@/lib/ingredients';
 import { type HouseIngredientInput, houseIngredientSchema, per100g } from '@/lib/schemas/ingredients';
 import { colors, fonts, radius, selection, space, touchTarget } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
-interface Values {
+type Values = Record<LabelNutrientField, string> & {
   name: string;
   category: Category;
   servingSize: string;
@@ -35,7 +38,7 @@ interface Values {
   allergens: Allergen[];
   costPerKg: string;
   notes: string;
-}
+};
 
 const text = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(Number(v.toPrecision(8))));
 
@@ -54,6 +57,10 @@ function toValues(i?: Ingredient): Values {
     fibreG: text(i?.per100g.fibreG),
     fatG: text(i?.per100g.fatG),
     proteinG: text(i?.per100g.proteinG),
+    ...(Object.fromEntries(LABEL_NUTRIENT_FIELDS.map((f) => [f, text(i?.labelPer100g[f])])) as Record<
+      LabelNutrientField,
+      string
+    >),
     fermentableSharePct: text(i?.fermentableSharePct ?? DEFAULT_FERMENTABLE_SHARE[category] * 100),
     steepSharePct: text(i?.steepSharePct ?? DEFAULT_STEEP_SHARE[category] * 100),
     allergens: i?.allergens ?? [],
@@ -73,6 +80,7 @@ const toInput = (v: Values) => ({
   fibreG: orNull(v.fibreG),
   fatG: orNull(v.fatG),
   proteinG: orNull(v.proteinG),
+  ...Object.fromEntries(LABEL_NUTRIENT_FIELDS.map((f) => [f, orNull(v[f])])),
   fermentableSharePct: parseNumber(v.fermentableSharePct),
   steepSharePct: parseNumber(v.steepSharePct),
   costPerKg: orNull(v.costPerKg),
@@ -164,6 +172,20 @@ export function HouseIngredientForm({ ingredient, submitLabel, onSubmit, error }
               <View style={styles.cell}>
                 <FormNumberField name="proteinG" label="Protein per serving" unit="g" />
               </View>
+            </View>
+            <Text variant="label">
+              The rest of the label, for the nutrition panel (leave empty what it does not give)
+            </Text>
+            <View style={styles.row}>
+              {LABEL_NUTRIENT_FIELDS.map((field) => (
+                <View key={field} style={styles.cell}>
+                  <FormNumberField
+                    name={field}
+                    label={`${LABEL_NUTRIENT_FIELD_INFO[field].label} per serving`}
+                    unit={LABEL_NUTRIENT_FIELD_INFO[field].unit}
+                  />
+                </View>
+              ))}
             </View>
             {preview !== null && !errors.sugarsG ? (
               <Text variant="muted">= {formatNumber(preview, 2)} g of sugars per 100 g</Text>

@@ -4,7 +4,7 @@ import { Badge, Card, type Column, Table, Text } from '@/components/ui';
 import { type Ingredient, useIngredientChangesQuery } from '@/lib/api/ingredients';
 import { useBreweryCurrency } from '@/lib/api/session';
 import { formatDateTime, formatMoney } from '@/lib/format';
-import { ALLERGEN_LABELS, CATEGORY_LABELS } from '@/lib/ingredients';
+import { ALLERGEN_LABELS, CATEGORY_LABELS, LABEL_NUTRIENT_FIELD_INFO, LABEL_NUTRIENT_FIELDS } from '@/lib/ingredients';
 import { space } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
@@ -65,6 +65,12 @@ export function IngredientDetail({ ingredient, canEdit }: { ingredient: Ingredie
           <Text>Fibre: {value(p.fibreG, 'g', 1)}</Text>
           <Text>Fat: {value(p.fatG, 'g', 2)}</Text>
           <Text>Protein: {value(p.proteinG, 'g', 2)}</Text>
+          {LABEL_NUTRIENT_FIELDS.map((field) => (
+            <Text key={field}>
+              {LABEL_NUTRIENT_FIELD_INFO[field].label}:{' '}
+              {value(ingredient.labelPer100g[field], LABEL_NUTRIENT_FIELD_INFO[field].unit, 2)}
+            </Text>
+          ))}
         </Card>
         <Card title="Allergens and source" style={styles.card}>
           {ingredient.allergens.length > 0 ? (

@@ -240,6 +240,14 @@ function Parts({ formats, canEdit }: { formats: BottleFormat[]; canEdit: boolean
             <FormNumberField name="base.residualSugarGPerL" label="Residual sugar" unit="g/L" />
           </View>
           <View style={styles.cell}>
+            <FormNumberField
+              name="base.residualAddedSugarGPerL"
+              label="Of which added sugar"
+              unit="g/L"
+              hint="For the label. Empty: all of it counts as added sugars."
+            />
+          </View>
+          <View style={styles.cell}>
             <FormNumberField name="base.abvPercent" label="Alcohol" unit="% ABV" />
           </View>
           <View style={styles.cell}>

@@ -2,6 +2,7 @@ export { Badge, type Tone } from './Badge';
 export { Banner } from './Banner';
 export { Button } from './Button';
 export { Card } from './Card';
+export { DownloadLink } from './DownloadLink';
 export { EmptyState } from './EmptyState';
 export { FormField } from './FormField';
 export { FormNumberField } from './FormNumberField';

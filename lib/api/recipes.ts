@@ -1,9 +1,11 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import type { NutritionAnswer } from '@/lib/nutrition/panel';
 import type { RecipeCard } from '@/lib/recipes/card';
 import type { Change } from '@/lib/recipes/diff';
 import type { RecipeEvaluation } from '@/lib/recipes/evaluate';
 import type { ScaledRecipe } from '@/lib/recipes/scaling';
+import type { LabValuesInput } from '@/lib/schemas/nutrition';
 import type {
   CreateRecipeInput,
   RecipeContent,
@@ -19,7 +21,7 @@ import type { RecipeDetail, RecipeSummary, ReviewTimeline, TastingEntry, Version
 
 export type { RecipeDetail, RecipeSummary, ReviewTimeline, TastingEntry, VersionEntry };
 
-export type { Change, RecipeEvaluation, ScaledRecipe };
+export type { Change, NutritionAnswer, RecipeEvaluation, ScaledRecipe };
 
 export const recipeKeys = {
   all: ['recipes'] as const,
@@ -32,6 +34,7 @@ export const recipeKeys = {
   evaluate: (content: RecipeContent | undefined) => ['recipes', 'evaluate', content] as const,
   scale: (id: number, request: ScaleRequest | undefined) => ['recipes', 'scale', id, request] as const,
   card: (id: number, query: string) => ['recipes', 'card', id, query] as const,
+  nutrition: (id: number, query: string) => ['recipes', 'nutrition', id, query] as const,
 };
 
 /** The query string of a card: version, batch and units, as the card and card.pdf routes read it. */
@@ -160,3 +163,31 @@ export const useReturnMutation = (id: number) =>
   useRecipeMutation((input: ReturnInput) => api.post<ReviewTimeline>(`/recipes/${id}/return`, input));
 export const useWithdrawMutation = (id: number) =>
   useRecipeMutation((input: WithdrawInput) => api.post<ReviewTimeline>(`/recipes/${id}/withdraw`, input));
+
+/** The query string of a nutrition panel: a version (the newest when left out) and a serving other than the rule's. */
+export function nutritionQuery(input: { version?: number | null; servingMl?: number | null; basis?: string }): string {
+  return new URLSearchParams({
+    ...(input.version ? { version: String(input.version) } : {}),
+    ...(input.servingMl ? { servingMl: String(input.servingMl) } : {}),
+    ...(input.basis ? { basis: input.basis } : {}),
+  }).toString();
+}
+
+/** Where a panel file downloads from: `pdf`, `png` or `csv`. */
+export const nutritionFileUrl = (id: number, ext: 'pdf' | 'png' | 'csv', query: string) =>
+  `/api/recipes/${id}/nutrition.${ext}${query ? `?${query}` : ''}`;
+
+/** The nutrition panel and allergen statement of a version. */
+export function useNutritionQuery(id: number, version?: number | null, servingMl?: number | null) {
+  const query = nutritionQuery({ version, servingMl });
+  return useQuery({
+    queryKey: recipeKeys.nutrition(id, query),
+    staleTime: staleTimes.list,
+    placeholderData: keepPreviousData,
+    queryFn: ({ signal }) => api.get<NutritionAnswer>(`/recipes/${id}/nutrition${query ? `?${query}` : ''}`, signal),
+  });
+}
+
+/** An owner's lab values for a version; the panel follows. */
+export const useSaveLabValuesMutation = (id: number) =>
+  useRecipeMutation((input: LabValuesInput) => api.put<NutritionAnswer>(`/recipes/${id}/nutrition/lab`, input));

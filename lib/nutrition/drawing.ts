@@ -1,4 +1,4 @@
-import { basisOf, type BasisKey, DV_FOOTNOTE, type NutritionAnswer, panelLines } from './panel';
+import { type BasisKey, basisOf, DV_FOOTNOTE, type NutritionAnswer, panelLines } from './panel';
 
 /** A run of text inside one line: runs flow one after another, bold or not. */
 export interface Run {

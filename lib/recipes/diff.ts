@@ -21,6 +21,7 @@ const PROCESS_FIELDS = {
 const BASE_FIELDS = {
   name: 'Base',
   residualSugarGPerL: 'Residual sugar (g/L)',
+  residualAddedSugarGPerL: 'Of which added sugar (g/L)',
   ph: 'pH',
   abvPercent: 'Alcohol of the base (% ABV)',
   residualCo2Volumes: 'Residual CO2 (volumes)',
@@ -104,7 +105,8 @@ export function diffRecipes(
       });
   }
   for (const [field, what] of Object.entries(BASE_FIELDS) as [keyof typeof BASE_FIELDS, string][]) {
-    if (a.content.baseBrew[field] !== b.content.baseBrew[field])
+    // A field older versions lack reads as null, so saving them again is not a change.
+    if ((a.content.baseBrew[field] ?? null) !== (b.content.baseBrew[field] ?? null))
       changes.push({
         area: 'base',
         what,

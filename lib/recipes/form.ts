@@ -12,6 +12,8 @@ export interface RecipeFormValues {
   base: {
     name: string;
     residualSugarGPerL: string;
+    /** Of the residual sugar, what was added in processing; empty: all of it. */
+    residualAddedSugarGPerL: string;
     ph: string;
     abvPercent: string;
     residualMode: 'volumes' | 'last-open';
@@ -55,6 +57,7 @@ export function toFormValues(
     base: {
       name: c.baseBrew.name,
       residualSugarGPerL: t(c.baseBrew.residualSugarGPerL),
+      residualAddedSugarGPerL: t(c.baseBrew.residualAddedSugarGPerL),
       ph: t(c.baseBrew.ph),
       abvPercent: t(c.baseBrew.abvPercent),
       residualMode:
@@ -90,6 +93,7 @@ function candidate(v: RecipeFormValues) {
     baseBrew: {
       name: v.base.name,
       residualSugarGPerL: n(v.base.residualSugarGPerL),
+      residualAddedSugarGPerL: nOrNull(v.base.residualAddedSugarGPerL),
       ph: nOrNull(v.base.ph),
       abvPercent: n(v.base.abvPercent),
       residualCo2Volumes: v.base.residualMode === 'volumes' ? n(v.base.residualCo2Volumes) : null,

@@ -9,4 +9,9 @@ declare module 'react-native' {
   interface ScrollViewProps {
     dataSet?: Record<string, string>;
   }
+  // React Native Web renders a Text with `href` as an anchor; `hrefAttrs` sets its download, rel and target.
+  interface TextProps {
+    href?: string;
+    hrefAttrs?: { download?: string | boolean; rel?: string; target?: string };
+  }
 }

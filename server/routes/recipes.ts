@@ -1,6 +1,8 @@
 import { Router } from 'express';
 
+import type { NutritionAnswer } from '@/lib/nutrition/panel';
 import { idParam } from '@/lib/schemas/common';
+import { labValuesSchema, nutritionFileQuerySchema, nutritionQuerySchema } from '@/lib/schemas/nutrition';
 import {
   type CardQuery,
   cardQuerySchema,
@@ -14,8 +16,6 @@ import {
   tastingSchema,
   versionQuerySchema,
 } from '@/lib/schemas/recipes';
-import type { NutritionAnswer } from '@/lib/nutrition/panel';
-import { labValuesSchema, nutritionFileQuerySchema, nutritionQuerySchema } from '@/lib/schemas/nutrition';
 import { approveSchema, returnSchema, submitSchema, withdrawSchema } from '@/lib/schemas/reviews';
 import { allow, authOf } from '@/server/middleware/access';
 import { validate } from '@/server/middleware/validate';

@@ -1,13 +1,13 @@
 import PDFDocument from 'pdfkit';
 import sharp from 'sharp';
 
-import { type DrawItem, drawingSvg, panelDrawing } from '@/lib/nutrition/drawing';
+import { drawingSvg, type DrawItem, panelDrawing } from '@/lib/nutrition/drawing';
 import {
   ALLERGEN_CAUTION,
   BASIS_NAMES,
   type BasisKey,
-  nutritionCsv,
   type NutritionAnswer,
+  nutritionCsv,
 } from '@/lib/nutrition/panel';
 
 export { nutritionCsv };

@@ -2,6 +2,7 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { HistoryView } from '@/components/recipes/HistoryView';
+import { LabelView } from '@/components/recipes/LabelView';
 import { RecipeEditor } from '@/components/recipes/RecipeEditor';
 import { ReviewPanel } from '@/components/recipes/ReviewPanel';
 import { ScaleView } from '@/components/recipes/ScaleView';
@@ -17,7 +18,7 @@ import {
 import { useSessionQuery } from '@/lib/api/session';
 import { can } from '@/lib/roles';
 
-type Tab = 'design' | 'review' | 'tastings' | 'scale' | 'history';
+type Tab = 'design' | 'review' | 'tastings' | 'scale' | 'label' | 'history';
 
 export default function RecipeScreen() {
   const { id, tab: asked } = useLocalSearchParams<{ id: string; tab?: string }>();
@@ -31,7 +32,7 @@ export default function RecipeScreen() {
   const archive = useArchiveRecipeMutation(recipeId);
   const brewer = !can(session?.user.role, 'recipes.develop');
   // A link may ask for a tab (Home opens a submitted recipe on Review); brewers always start on the batch view.
-  const TABS: Tab[] = ['design', 'review', 'tastings', 'scale', 'history'];
+  const TABS: Tab[] = ['design', 'review', 'tastings', 'scale', 'label', 'history'];
   const [tab, setTab] = useState<Tab>(brewer ? 'scale' : TABS.includes(asked as Tab) ? (asked as Tab) : 'design');
   if (recipe.isError)
     return (
@@ -79,6 +80,7 @@ export default function RecipeScreen() {
           { value: 'review', label: 'Review' },
           { value: 'tastings', label: 'Tastings' },
           { value: 'scale', label: brewer ? 'Batch' : 'Scale' },
+          { value: 'label', label: 'Label' },
           { value: 'history', label: 'History' },
         ]}
       />
@@ -108,6 +110,13 @@ export default function RecipeScreen() {
       {tab === 'review' ? <ReviewPanel recipeId={recipeId} session={session} /> : null}
       {tab === 'scale' ? (
         <ScaleView recipe={recipe.data} units={session.user.unitSystem} productionOnly={brewer} />
+      ) : null}
+      {tab === 'label' ? (
+        <LabelView
+          recipeId={recipeId}
+          current={recipe.data.currentVersion}
+          canEnterLab={can(session.user.role, 'recipes.label')}
+        />
       ) : null}
       {tab === 'history' ? (
         <HistoryView recipeId={recipeId} current={recipe.data.currentVersion} canEdit={canEdit} />
