@@ -82,8 +82,9 @@ export function LabelView({ recipeId, current, canEnterLab }: Props) {
         </Text>
         {answer.lab ? null : (
           <Banner tone="caution">
-            Estimates only. Values on a package must come from lab analysis of the finished drink
-            {canEnterLab ? ': enter them below and they replace the estimate.' : ': an owner enters them here.'}
+            {`Estimates only. Values on a package must come from lab analysis of the finished drink${
+              canEnterLab ? ': enter them below and they replace the estimate.' : ': an owner enters them here.'
+            }`}
           </Banner>
         )}
       </Card>

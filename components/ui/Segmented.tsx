@@ -13,7 +13,7 @@ interface Props<T extends string> {
   showLabel?: boolean;
 }
 
-/** Two to four short choices side by side, one tap each. */
+/** A few short choices side by side, one tap each; on a narrow screen they wrap. */
 export function Segmented<T extends string>({ label, value, options, onChange, showLabel = true }: Props<T>) {
   return (
     <View style={styles.field}>
@@ -51,8 +51,12 @@ const styles = StyleSheet.create({
     borderRadius: radius.md,
     overflow: 'hidden',
     alignSelf: 'flex-start',
+    // More choices than a phone's width holds wrap to a second row rather than running off the screen.
+    flexWrap: 'wrap',
   },
   option: {
+    flexGrow: 1,
+    alignItems: 'center',
     minHeight: touchTarget,
     paddingHorizontal: space.md,
     justifyContent: 'center',
