@@ -2,7 +2,11 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 
+import { Op } from 'sequelize';
+
+import { LABEL_NUTRIENT_FIELDS } from '@/lib/ingredients';
 import { Ingredient, prepareDatabase, sequelize } from '@/server/db';
+import { seedIngredientsIfEmpty } from '@/server/seed/ingredients';
 import { loadStarterIngredients, STARTER_RECORDS } from '@/server/seed/starter-ingredients';
 import { datasetIngredientCount, importDatasetIngredients } from '@/server/services/ingredients';
 import { assertSrFolder, ingredientFromSr, NotSrFolderError, readSrFoods } from '@/server/usda/sr-files';
@@ -70,6 +74,16 @@ describe('reading the SR25 format', () => {
       { label: '1 medium (1-1/4" dia)', grams: 12 },
     ]);
     expect(foods[2].branded).toBe(true);
+    // Calcium and iron are the 11th and 12th fields of ABBREV.txt; the fixture stops there, so the label nutrients
+    // after them were not measured: null, never zero. Trans fat and added sugars are not in the abbreviated file.
+    expect(ingredientFromSr(foods[0])).toMatchObject({
+      calciumMg: 16,
+      ironMg: 0.41,
+      sodiumMg: null,
+      potassiumMg: null,
+      transFatG: null,
+      addedSugarsG: null,
+    });
     expect(ingredientFromSr(foods[1])).toMatchObject({
       category: 'spice',
       sourceDataset: 'USDA SR25',
@@ -102,6 +116,24 @@ describe('importDatasetIngredients', () => {
     expect(await importDatasetIngredients(rows())).toEqual({ created: 0, updated: 1, unchanged: 1 });
     expect((await Ingredient.findOne({ where: { sourceRecord: '09316' } }))?.sugarsG).toBe(5.1);
     expect(await datasetIngredientCount()).toBe(2);
+  });
+});
+
+describe('a library imported before the label nutrients', () => {
+  it('is filled in again once at start, and left alone after that', async () => {
+    await Ingredient.destroy({ where: {} });
+    const old = loadStarterIngredients().map((row) => ({
+      ...row,
+      ...Object.fromEntries(LABEL_NUTRIENT_FIELDS.map((f) => [f, null])),
+    }));
+    await importDatasetIngredients(old);
+    expect(await Ingredient.count({ where: { sodiumMg: { [Op.not]: null } } })).toBe(0);
+    const said = await seedIngredientsIfEmpty(path.join(dir, 'no-such-folder'));
+    expect(said).toMatch(/starter ingredients were loaded/);
+    // USDA SR25 NDB 09316 (strawberries, raw): sodium 1 mg, potassium 153 mg per 100 g.
+    const strawberry = await Ingredient.findOne({ where: { sourceRecord: '09316' } });
+    expect(strawberry).toMatchObject({ sodiumMg: 1, potassiumMg: 153 });
+    expect(await seedIngredientsIfEmpty(path.join(dir, 'no-such-folder'))).toBeNull();
   });
 });
 
