@@ -1,5 +1,6 @@
 import { AuthFrame } from '@/components/auth/AuthFrame';
-import { Text, TextLink } from '@/components/ui';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 
 export default function NotFoundScreen() {
   return (

@@ -2,7 +2,10 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
 
 import { NewPasswordForm } from '@/components/auth/NewPasswordForm';
-import { Banner, Loading, Text, TextLink } from '@/components/ui';
+import { Banner } from '@/components/ui/Banner';
+import { Loading } from '@/components/ui/Loading';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import { useAcceptInvitationMutation, useInvitationQuery } from '@/lib/api/session';
 import { ROLE_DESCRIPTIONS, ROLE_LABELS } from '@/lib/roles';
 

@@ -1,7 +1,11 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
 
-import { Banner, Button, FormStatus, Text, TextLink } from '@/components/ui';
+import { Banner } from '@/components/ui/Banner';
+import { Button } from '@/components/ui/Button';
+import { FormStatus } from '@/components/ui/FormStatus';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import { useConfirmSignUpMutation } from '@/lib/api/session';
 
 /** The page the sign-up e-mail links to. A press, not the page load, creates the account, so a mail scanner opening the link does nothing. */

@@ -3,7 +3,9 @@ import { View } from 'react-native';
 
 import { ForgotPasswordForm } from '@/components/auth/EmailForm';
 import { NoMailNotice } from '@/components/auth/NoMailNotice';
-import { Banner, Text, TextLink } from '@/components/ui';
+import { Banner } from '@/components/ui/Banner';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import { useForgotPasswordMutation, useServerInfoQuery } from '@/lib/api/session';
 
 export default function ForgotPasswordScreen() {

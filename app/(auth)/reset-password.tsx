@@ -2,7 +2,9 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
 
 import { NewPasswordForm } from '@/components/auth/NewPasswordForm';
-import { Banner, Text, TextLink } from '@/components/ui';
+import { Banner } from '@/components/ui/Banner';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import { useResetPasswordMutation } from '@/lib/api/session';
 
 export default function ResetPasswordScreen() {

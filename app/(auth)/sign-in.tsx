@@ -3,7 +3,8 @@ import { View } from 'react-native';
 
 import { formStyles } from '@/components/auth/form-styles';
 import { SignInForm } from '@/components/auth/SignInForm';
-import { Text, TextLink } from '@/components/ui';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import { useSignInMutation } from '@/lib/api/session';
 
 export default function SignInScreen() {

@@ -4,7 +4,9 @@ import { View } from 'react-native';
 import { formStyles } from '@/components/auth/form-styles';
 import { NoMailNotice } from '@/components/auth/NoMailNotice';
 import { SignUpForm } from '@/components/auth/SignUpForm';
-import { Banner, Text, TextLink } from '@/components/ui';
+import { Banner } from '@/components/ui/Banner';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import { useServerInfoQuery, useSignUpMutation } from '@/lib/api/session';
 
 export default function SignUpScreen() {

@@ -1,7 +1,10 @@
 import { Formik } from 'formik';
 import { View } from 'react-native';
 
-import { Button, FormField, FormStatus, submitTo } from '@/components/ui';
+import { Button } from '@/components/ui/Button';
+import { FormField } from '@/components/ui/FormField';
+import { submitTo } from '@/components/ui/forms';
+import { FormStatus } from '@/components/ui/FormStatus';
 import { type ForgotPasswordInput, forgotPasswordSchema } from '@/lib/schemas/auth';
 
 import { formStyles } from './form-styles';

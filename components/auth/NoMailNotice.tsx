@@ -1,6 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 
-import { Banner, Text, TextLink } from '@/components/ui';
+import { Banner } from '@/components/ui/Banner';
+import { Text } from '@/components/ui/Text';
+import { TextLink } from '@/components/ui/TextLink';
 import type { ServerInfo } from '@/lib/api/types';
 import { space } from '@/lib/theme';
 

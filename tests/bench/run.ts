@@ -3,14 +3,13 @@
  * the same run against references behind the same middleware. The server runs in its own process (as in
  * production, NODE_ENV=production, logs at warn) on a temporary database; autocannon drives it from this process.
  */
-import { type ChildProcess, spawn } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
-import path from 'node:path';
 
 import autocannon from 'autocannon';
 
-const ROOT = path.resolve(__dirname, '../..');
+import { median, signIn, startServer } from './server';
+
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 32);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 6);
 /** The calculation and its reference are measured in alternating rounds and the medians kept, so drift and order do not decide. */
@@ -25,46 +24,6 @@ interface Measure {
   non2xx: number;
 }
 
-async function startServer(): Promise<{ child: ChildProcess; url: string; dir: string }> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'fizzwright-bench-'));
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    cwd: ROOT,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      PORT: '0',
-      HOST: '127.0.0.1',
-      DATABASE_PATH: path.join(dir, 'bench.sqlite'),
-      BENCH_ROUTES: 'true',
-      AUTH_RATE_LIMIT: '100000',
-      AUTH_ACCOUNT_RATE_LIMIT: '100000',
-      LOG_LEVEL: 'warn',
-      SEED_DEMO: 'true',
-    },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
-  const url = await new Promise<string>((resolve, reject) => {
-    let out = '';
-    child.stdout!.on('data', (chunk: Buffer) => {
-      out += chunk.toString();
-      const match = /listening on (http:\/\/localhost:\d+)/.exec(out);
-      if (match) resolve(match[1].replace('localhost', '127.0.0.1'));
-    });
-    child.on('exit', (code) => reject(new Error(`server exited with ${code}\n${out}`)));
-  });
-  return { child, url, dir };
-}
-
-async function signIn(url: string): Promise<string> {
-  const res = await fetch(`${url}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email: 'imogen@wrenfield.example', password: 'wrenfield-owner' }),
-  });
-  if (!res.ok) throw new Error(`sign-in failed: ${res.status}`);
-  return res.headers.get('set-cookie')!.split(';')[0];
-}
-
 async function once(name: string, options: autocannon.Options): Promise<Measure> {
   const result = await autocannon({ ...options, connections: CONNECTIONS, duration: SECONDS });
   return {
@@ -76,8 +35,6 @@ async function once(name: string, options: autocannon.Options): Promise<Measure>
     non2xx: result.non2xx,
   };
 }
-
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
 /** Several endpoints measured round-robin, ROUNDS times each after a warm-up; the median of each figure is kept. */
 async function measure(targets: [string, autocannon.Options][]): Promise<Measure[]> {
@@ -366,7 +323,7 @@ Writers: each saves its own recipe (a new version per save), ${WRITER_SECONDS} s
 }
 
 async function main(): Promise<void> {
-  const { child, url, dir } = await startServer();
+  const { child, url, dir } = await startServer({ BENCH_ROUTES: 'true' });
   try {
     const cookie = await signIn(url);
     const json = { 'content-type': 'application/json', cookie };

@@ -1,13 +1,3 @@
-import { BatchList } from '@/components/batches/BatchList';
-import { Screen } from '@/components/ui';
+import { lazyScreen } from '@/components/screens/routes';
 
-export default function BatchesScreen() {
-  return (
-    <Screen
-      title="Batches"
-      subtitle="Production and trial batches: lot codes, readings, ingredient lots and decisions."
-    >
-      <BatchList />
-    </Screen>
-  );
-}
+export default lazyScreen('BatchesScreen');
