@@ -16,7 +16,8 @@ export function LogoMark({ size = 36, inverse = false }: { size?: number; invers
   });
   return (
     <Image
-      source={{ uri: `data:image/svg+xml;utf8,${encodeURIComponent(xml)}` }}
+      // React Native Web escapes the markup of an `svg+xml;utf8` data address itself: give it as it is.
+      source={{ uri: `data:image/svg+xml;utf8,${xml}` }}
       style={{ width: size, height: size }}
       aria-hidden
     />
