@@ -1,48 +1,14 @@
 import { LabValuesForm } from '@/components/recipes/LabValuesForm';
 import { NutritionFactsPanel } from '@/components/recipes/NutritionFactsPanel';
 import { ApiError } from '@/lib/api/client';
-import { composeRecipe, type LabelIngredientFacts } from '@/lib/nutrition/composition';
+import { composeRecipe } from '@/lib/nutrition/composition';
 import { servingFor } from '@/lib/nutrition/label-rules';
 import { buildNutrition } from '@/lib/nutrition/panel';
-import type { RecipeContent } from '@/lib/schemas/recipes';
+import { recipe, STRAWBERRY } from '@/tests/fixtures/nutrition';
 import { fireEvent, render, screen, waitFor, within } from '@/tests/test-utils';
 
-// USDA SR25 strawberries, raw (NDB 09316), per 100 g: carbohydrate 7.68 g, fiber 2.0 g, sugars 4.89 g, protein 0.67 g,
-// fat 0.30 g, saturated fat 0.015 g, calcium 16 mg, iron 0.41 mg, potassium 153 mg, sodium 1 mg, cholesterol 0.
-const strawberry: LabelIngredientFacts = {
-  name: 'Strawberries',
-  category: 'fruit',
-  house: false,
-  allergens: [],
-  sugarsG: 4.89,
-  carbohydrateG: 7.68,
-  fibreG: 2,
-  fatG: 0.3,
-  proteinG: 0.67,
-  fermentableShare: 1,
-  saturatedFatG: 0.015,
-  transFatG: null,
-  cholesterolMg: 0,
-  sodiumMg: 1,
-  addedSugarsG: null,
-  vitaminDMcg: 0,
-  calciumMg: 16,
-  ironMg: 0.41,
-  potassiumMg: 153,
-};
-const content = {
-  baseBrew: {
-    name: 'Base',
-    residualSugarGPerL: 2,
-    ph: 3.2,
-    abvPercent: 0.2,
-    residualCo2Volumes: 0.9,
-    lastOpenTempC: null,
-  },
-  lines: [{ ingredientId: 1, amount: 60, unit: 'g-per-l', extractionPct: 100 }],
-  sugars: [{ type: 'sucrose', gPerL: 10 }],
-  process: { method: 'in-bottle' },
-} as unknown as RecipeContent;
+// The case worked by hand in tests/lib/nutrition.test.ts (USDA SR25 NDB 09316 strawberries, 19335 sugar).
+const content = recipe({ lines: [{ ingredientId: 1, amount: 60, unit: 'g-per-l', extractionPct: 100 }] });
 
 const answerFor = (ml: number) =>
   buildNutrition({
@@ -53,7 +19,7 @@ const answerFor = (ml: number) =>
     containerMl: ml,
     serving: servingFor(ml),
     servingAskedMl: null,
-    composition: composeRecipe(content, ml, new Map([[1, strawberry]])),
+    composition: composeRecipe(content, ml, new Map([[1, STRAWBERRY]])),
     steeped: false,
     allergens: [],
     lab: null,

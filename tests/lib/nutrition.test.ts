@@ -15,7 +15,7 @@ import {
   servingsPerContainer,
 } from '@/lib/nutrition/label-rules';
 import { allergenStatement, buildNutrition, nutritionCsv, withLabValues } from '@/lib/nutrition/panel';
-import type { RecipeContent } from '@/lib/schemas/recipes';
+import { recipe, STRAWBERRY } from '@/tests/fixtures/nutrition';
 
 const text = (d: { text: string }) => d.text;
 
@@ -198,59 +198,6 @@ describe('allergen statement', () => {
     expect(allergenStatement(['tree-nuts', 'sesame'])).toBe('Contains: Tree nuts, Sesame');
     expect(allergenStatement([])).toBeNull();
   });
-});
-
-// USDA SR25, per 100 g (ABBREV.txt): strawberries, raw (NDB 09316): carbohydrate 7.68 g, fiber 2.0 g, sugars 4.89 g,
-// protein 0.67 g, fat 0.30 g, saturated fat 0.015 g, calcium 16 mg, iron 0.41 mg, potassium 153 mg, sodium 1 mg,
-// vitamin D 0.0 mcg, cholesterol 0 mg; trans fat is not in the abbreviated file. Sugars, granulated (NDB 19335):
-// carbohydrate 99.98 g, sodium 1 mg, potassium 2 mg, calcium 1 mg, iron 0.05 mg.
-const STRAWBERRY: LabelIngredientFacts = {
-  name: 'Strawberries',
-  category: 'fruit',
-  house: false,
-  allergens: [],
-  sugarsG: 4.89,
-  carbohydrateG: 7.68,
-  fibreG: 2,
-  fatG: 0.3,
-  proteinG: 0.67,
-  fermentableShare: 1,
-  saturatedFatG: 0.015,
-  transFatG: null,
-  cholesterolMg: 0,
-  sodiumMg: 1,
-  addedSugarsG: null,
-  vitaminDMcg: 0,
-  calciumMg: 16,
-  ironMg: 0.41,
-  potassiumMg: 153,
-};
-
-const recipe = (over: Partial<RecipeContent> = {}): RecipeContent => ({
-  baseBrew: {
-    name: 'Base',
-    residualSugarGPerL: 2,
-    ph: 3.2,
-    abvPercent: 0.2,
-    residualCo2Volumes: 0.9,
-    lastOpenTempC: null,
-  },
-  lines: [{ ingredientId: 1, amount: 60, unit: 'g-per-l', extractionPct: 50 }],
-  sugars: [{ type: 'sucrose', gPerL: 10 }],
-  process: {
-    method: 'in-bottle',
-    steepHours: 0,
-    steepTempC: 4,
-    strainLossPct: 0,
-    carbonateHours: 48,
-    carbonateTempC: 20,
-    coldStoreTempC: 4,
-  },
-  bottleFormatId: 1,
-  targetVolumes: 2.5,
-  sweetnessNote: '',
-  highestTempC: 25,
-  ...over,
 });
 
 describe('a recipe’s panel, worked by hand from SR25 values', () => {
