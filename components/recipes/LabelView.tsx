@@ -10,8 +10,9 @@ import {
   useSaveLabValuesMutation,
 } from '@/lib/api/recipes';
 import { formatDateTime } from '@/lib/format';
-import { parseNumber } from '@/lib/forms';
+import { check, parseNumber } from '@/lib/forms';
 import { ALLERGEN_CAUTION, BASIS_NAMES, type BasisKey } from '@/lib/nutrition/panel';
+import { nutritionQuerySchema } from '@/lib/schemas/nutrition';
 import { space } from '@/lib/theme';
 
 import { LabValuesForm } from './LabValuesForm';
@@ -32,8 +33,9 @@ export function LabelView({ recipeId, current, canEnterLab }: Props) {
   const versions = useRecipeVersionsQuery(recipeId);
   const [version, setVersion] = useState(current);
   const [servingText, setServingText] = useState('');
-  const serving = parseNumber(servingText);
-  const servingMl = serving !== undefined && serving >= 10 && serving <= 5000 ? serving : null;
+  // The serving is checked by the API's own query schema: a bad one says why and the rule's serving stays.
+  const servingCheck = check(nutritionQuerySchema, { servingMl: parseNumber(servingText) });
+  const servingMl = servingCheck.value?.servingMl ?? null;
   const nutrition = useNutritionQuery(recipeId, version, servingMl);
   const saveLab = useSaveLabValuesMutation(recipeId);
   if (nutrition.isError) return <Banner tone="danger">{nutrition.error.message}</Banner>;
@@ -71,6 +73,7 @@ export function LabelView({ recipeId, current, canEnterLab }: Props) {
               unit="mL"
               value={servingText}
               onChangeText={setServingText}
+              error={servingCheck.errors.servingMl}
               hint="Empty: the rule's serving (360 mL, or the whole bottle when it holds under 720 mL)."
             />
           </View>

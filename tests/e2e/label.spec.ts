@@ -22,6 +22,11 @@ test('a developer reads both bases of the panel on a phone; the owner enters lab
   // Shortbread brings wheat and milk.
   await expect(developer.getByText(/^Contains: .*Wheat/)).toBeVisible();
   await expect(developer.getByText(/Estimates only/)).toBeVisible();
+  // A serving the rule does not know is said so, and the panel keeps the rule's serving.
+  await developer.getByLabel('Serving').fill('lots');
+  await expect(developer.getByText('The serving must be a number of mL.')).toBeVisible();
+  await expect(formulated.getByText('1 bottle (473 mL)')).toBeVisible();
+  await developer.getByLabel('Serving').fill('');
   // Developers read the lab values; they do not enter them.
   await expect(developer.getByRole('button', { name: 'Save lab values' })).toHaveCount(0);
   await shot(developer, 'phone-developer-label');
