@@ -7,7 +7,7 @@ import { ingredientContribution, type IngredientNutrients } from '@/lib/recipes/
 import { gramsPerLitre } from '@/lib/recipes/scaling';
 import type { RecipeContent } from '@/lib/schemas/recipes';
 
-import { LABEL_NUTRIENTS, type LabelNutrient, NUTRIENT_NAMES, type NutrientAmounts } from './label-rules';
+import { LABEL_NUTRIENTS, type LabelNutrient, type NutrientAmounts } from './label-rules';
 
 /** What the panel needs to know of an ingredient, per 100 g (null: not measured). */
 export interface LabelIngredientFacts extends IngredientNutrients, LabelNutrientValues {
@@ -243,6 +243,3 @@ export function composeRecipe(
     addedSugarsAssumed,
   };
 }
-
-/** A nutrient list for notes: "Sodium", with the panel's names. */
-export const nutrientName = (n: LabelNutrient) => NUTRIENT_NAMES[n];

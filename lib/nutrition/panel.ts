@@ -214,7 +214,7 @@ export function nutritionCsv(answer: NutritionAnswer): string {
 }
 
 /** Everything the composition says that a reader of the panel must know, in plain words. */
-export function compositionNotes(composition: RecipeComposition, names: { steeped: boolean }): string[] {
+export function compositionNotes(composition: RecipeComposition, options: { steeped: boolean }): string[] {
   const notes: string[] = [];
   for (const [nutrient, list] of Object.entries(composition.missing) as [LabelNutrient, string[]][]) {
     notes.push(
@@ -236,7 +236,7 @@ export function compositionNotes(composition: RecipeComposition, names: { steepe
             : 'sugars, syrups, honey and sweet baked goods are added sugars';
     notes.push(`All the sugars of ${name} count as added sugars: ${why}.`);
   }
-  if (names.steeped)
+  if (options.steeped)
     notes.push(
       'Steeped and strained: every nutrient of an ingredient counts at the share of its sugar the recipe says reaches the liquid.',
     );

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 
-import type { NutritionAnswer } from '@/lib/nutrition/panel';
+import { type NutritionAnswer, nutritionCsv } from '@/lib/nutrition/panel';
 import { idParam } from '@/lib/schemas/common';
 import { labValuesSchema, nutritionFileQuerySchema, nutritionQuerySchema } from '@/lib/schemas/nutrition';
 import {
@@ -21,7 +21,7 @@ import { allow, authOf } from '@/server/middleware/access';
 import { validate } from '@/server/middleware/validate';
 import { cardPdf, recipeCard } from '@/server/services/cards';
 import * as nutrition from '@/server/services/nutrition';
-import { fileBasis, nutritionCsv, nutritionPdf, nutritionPng } from '@/server/services/nutrition-files';
+import { fileBasis, nutritionPdf, nutritionPng } from '@/server/services/nutrition-files';
 import * as recipes from '@/server/services/recipes';
 import * as reviews from '@/server/services/reviews';
 import type { AuthContext } from '@/server/services/sessions';

@@ -137,6 +137,24 @@ export async function datasetIngredientCount(): Promise<number> {
   return Ingredient.count({ where: { organisationId: null } });
 }
 
+/**
+ * The ingredients of `ids` that this brewery may use (dataset foods and its own house ones; another brewery's are
+ * left out, as if they did not exist), each under the name the brewery reads.
+ */
+export async function usableIngredients(
+  auth: AuthContext,
+  ids: number[],
+): Promise<{ ingredient: Ingredient; name: string }[]> {
+  const unique = [...new Set(ids)];
+  const rows = unique.length
+    ? await Ingredient.findAll({
+        where: { id: unique, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
+      })
+    : [];
+  const names = await displayNames(auth.organisationId, rows);
+  return rows.map((ingredient) => ({ ingredient, name: names.get(ingredient.id) ?? ingredient.name }));
+}
+
 /** True when dataset foods exist but none carries a label nutrient: imported before those were read. */
 export async function datasetLacksLabelNutrients(): Promise<boolean> {
   const withSodium = await Ingredient.count({ where: { organisationId: null, sodiumMg: { [Op.not]: null } } });

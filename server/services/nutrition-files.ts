@@ -2,15 +2,7 @@ import PDFDocument from 'pdfkit';
 import sharp from 'sharp';
 
 import { drawingSvg, type DrawItem, panelDrawing } from '@/lib/nutrition/drawing';
-import {
-  ALLERGEN_CAUTION,
-  BASIS_NAMES,
-  type BasisKey,
-  type NutritionAnswer,
-  nutritionCsv,
-} from '@/lib/nutrition/panel';
-
-export { nutritionCsv };
+import { ALLERGEN_CAUTION, BASIS_NAMES, type BasisKey, type NutritionAnswer } from '@/lib/nutrition/panel';
 
 /** The basis a file shows: the one asked for, else the lab's when there is one, else after conditioning. */
 export const fileBasis = (answer: NutritionAnswer, asked?: BasisKey): BasisKey =>

@@ -1,32 +1,25 @@
-import { Op } from 'sequelize';
-
 import type { Allergen } from '@/lib/ingredients';
 import { composeRecipe, type LabelIngredientFacts } from '@/lib/nutrition/composition';
 import { servingFor } from '@/lib/nutrition/label-rules';
 import { buildNutrition, type LabEntry, type NutritionAnswer } from '@/lib/nutrition/panel';
 import type { LabValuesInput, NutritionQuery } from '@/lib/schemas/nutrition';
-import { Ingredient, NutritionLabValue, RecipeVersion, transaction, User } from '@/server/db';
+import { NutritionLabValue, RecipeVersion, transaction, User } from '@/server/db';
 import { badRequest, notFound } from '@/server/errors';
 
 import { cachedAbvLimit, cachedBottleFormat } from './brewery-cache';
-import { displayNames } from './ingredients';
+import { usableIngredients } from './ingredients';
 import { getRecipe } from './recipes';
 import type { AuthContext } from './sessions';
 
 /** The label facts of the ingredients a version uses, under the names the brewery reads. */
 async function labelFacts(auth: AuthContext, ids: number[]): Promise<Map<number, LabelIngredientFacts>> {
-  const rows = ids.length
-    ? await Ingredient.findAll({
-        where: { id: ids, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
-      })
-    : [];
-  const names = await displayNames(auth.organisationId, rows);
+  const usable = await usableIngredients(auth, ids);
   return new Map(
-    rows.map((r) => [
+    usable.map(({ ingredient: r, name }) => [
       r.id,
       {
         ...r.get({ plain: true }),
-        name: names.get(r.id) ?? r.name,
+        name,
         allergens: r.allergens,
         house: r.organisationId !== null,
       },

@@ -18,7 +18,7 @@ import { Ingredient, Recipe, RecipeReview, RecipeVersion, Tasting, transaction, 
 import { badRequest, HttpError, notFound } from '@/server/errors';
 
 import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
-import { displayNames } from './ingredients';
+import { displayNames, usableIngredients } from './ingredients';
 import { findOwnRecipe } from './own-recipe';
 import { reviewState } from './review-state';
 import type { AuthContext } from './sessions';
@@ -43,20 +43,16 @@ async function ingredientFacts(
   content: RecipeContent,
   strict: boolean,
 ): Promise<Map<number, IngredientFacts>> {
-  const ids = [...new Set(content.lines.map((l) => l.ingredientId))];
-  const rows =
-    ids.length === 0
-      ? []
-      : await Ingredient.findAll({
-          where: { id: ids, [Op.or]: [{ organisationId: null }, { organisationId: auth.organisationId }] },
-        });
-  const names = await displayNames(auth.organisationId, rows);
+  const usable = await usableIngredients(
+    auth,
+    content.lines.map((l) => l.ingredientId),
+  );
   const facts = new Map(
-    rows.map((r) => [
+    usable.map(({ ingredient: r, name }) => [
       r.id,
       {
         id: r.id,
-        name: names.get(r.id) ?? r.name,
+        name,
         sugarsG: r.sugarsG,
         carbohydrateG: r.carbohydrateG,
         fibreG: r.fibreG,

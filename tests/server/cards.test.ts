@@ -6,7 +6,7 @@ import { cardCode, parseCardCode } from '@/lib/recipes/card';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
 
-import { addMember, type Agent, signUpOwner, startApp, stopApp } from './helpers';
+import { addMember, type Agent, asBuffer, signUpOwner, startApp, stopApp } from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -26,13 +26,6 @@ function pdfText(pdf: Buffer): string {
   }
   return texts.join('\n');
 }
-
-/** Reads a response body whole, as bytes (supertest parses only text types by itself). */
-const asBuffer = (r: import('superagent').Response, cb: (err: Error | null, body: unknown) => void) => {
-  const chunks: Buffer[] = [];
-  r.on('data', (c: Buffer) => chunks.push(c));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   app = await startApp();

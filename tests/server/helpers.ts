@@ -62,3 +62,10 @@ export async function addMember(app: Express, owner: Agent, role: Role, name = `
     .expect(201);
   return { agent, session: res.body as Session, email, password: 'member-pass-1' };
 }
+
+/** Reads a response body whole, as bytes (supertest parses only text types by itself): `.buffer(true).parse(asBuffer)`. */
+export const asBuffer = (r: import('superagent').Response, cb: (err: Error | null, body: unknown) => void) => {
+  const chunks: Buffer[] = [];
+  r.on('data', (c: Buffer) => chunks.push(c));
+  r.on('end', () => cb(null, Buffer.concat(chunks)));
+};

@@ -1,10 +1,12 @@
 import type { Express } from 'express';
 
+import type { RecipeContent } from '@/lib/schemas/recipes';
 import { NutritionLabValue } from '@/server/db';
 import { loadStarterIngredients } from '@/server/seed/starter-ingredients';
 import { importDatasetIngredients } from '@/server/services/ingredients';
+import { recipe } from '@/tests/fixtures/nutrition';
 
-import { addMember, type Agent, signUpOwner, startApp, stopApp } from './helpers';
+import { addMember, type Agent, asBuffer, signUpOwner, startApp, stopApp } from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -14,13 +16,6 @@ let stranger: Agent;
 let recipeId: number;
 let bottle355: number;
 let bottle750: number;
-
-/** Reads a response body whole, as bytes (supertest parses only text types by itself). */
-const asBuffer = (r: import('superagent').Response, cb: (err: Error | null, body: unknown) => void) => {
-  const chunks: Buffer[] = [];
-  r.on('data', (c: Buffer) => chunks.push(c));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 
 const bottle = (name: string, liquidMl: number) => ({
   name,
@@ -32,31 +27,8 @@ const bottle = (name: string, liquidMl: number) => ({
   pressureSource: 'Supplier sheet',
 });
 
-const content = (bottleFormatId: number, lines: unknown[]) => ({
-  baseBrew: {
-    name: 'Base',
-    residualSugarGPerL: 2,
-    ph: 3.2,
-    abvPercent: 0.2,
-    residualCo2Volumes: 0.9,
-    lastOpenTempC: null,
-  },
-  lines,
-  sugars: [{ type: 'sucrose', gPerL: 10 }],
-  process: {
-    method: 'in-bottle',
-    steepHours: 0,
-    steepTempC: 4,
-    strainLossPct: 0,
-    carbonateHours: 48,
-    carbonateTempC: 20,
-    coldStoreTempC: 4,
-  },
-  bottleFormatId,
-  targetVolumes: 2.5,
-  sweetnessNote: '',
-  highestTempC: 25,
-});
+/** The hand-worked recipe of tests/fixtures/nutrition.ts, in a bottle format and with lines of this brewery. */
+const content = (bottleFormatId: number, lines: RecipeContent['lines']) => recipe({ bottleFormatId, lines });
 
 beforeAll(async () => {
   app = await startApp();
