@@ -2,7 +2,8 @@ import { AsyncLocalStorage } from 'node:async_hooks';
 import fs from 'node:fs';
 import path from 'node:path';
 
-import { Sequelize, Transaction } from 'sequelize';
+import pg from 'pg';
+import { Op, Sequelize, Transaction } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 
 import { config } from './config';
@@ -68,9 +69,12 @@ interface SqliteHandle {
   run(sql: string): void;
 }
 
-function createSequelize(databasePath: string): Sequelize {
+/** The database in use: PostgreSQL when DATABASE_URL is set, the SQLite file otherwise. */
+export type Dialect = 'sqlite' | 'postgres';
+
+function createSqlite(databasePath: string): Sequelize {
   if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(databasePath), { recursive: true });
-  return new Sequelize({
+  const db = new Sequelize({
     dialect: 'sqlite',
     storage: databasePath,
     logging: false,
@@ -78,30 +82,60 @@ function createSequelize(databasePath: string): Sequelize {
     pool: { max: 1, min: 1, idle: 60_000 },
     transactionType: Transaction.TYPES.IMMEDIATE,
   });
+  /*
+   * Sequelize's SQLite dialect opens a new connection for every transaction and sets nothing on it but foreign keys.
+   * Every connection it opens gets the busy timeout and the same journal settings here, so a write that meets another
+   * one's lock waits for its turn instead of failing at once with SQLITE_BUSY.
+   */
+  const connections = db.connectionManager as unknown as {
+    getConnection(options?: object): Promise<SqliteHandle>;
+  };
+  const openConnection = connections.getConnection.bind(connections);
+  const configured = new WeakSet<SqliteHandle>();
+  connections.getConnection = async (options?: object) => {
+    const connection = await openConnection(options);
+    if (!configured.has(connection)) {
+      connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+      connection.run('PRAGMA foreign_keys = ON');
+      connection.run('PRAGMA synchronous = NORMAL');
+      configured.add(connection);
+    }
+    return connection;
+  };
+  return db;
 }
 
-export const sequelize = createSequelize(config.databasePath);
+/** Counts (`count(*)`, bigint) come back from node-postgres as text; every count here fits a JavaScript number. */
+pg.types.setTypeParser(pg.types.builtins.INT8, (value: string) => Number(value));
+
+/** The address each PostgreSQL Sequelize was made from (its own connections for locks and listeners use it). */
+const postgresUrls = new WeakMap<Sequelize, string>();
+
+/** A Sequelize for a PostgreSQL address. Also used by `db:copy` for its target. */
+export function createPostgres(url: string, poolMax = config.databasePoolMax): Sequelize {
+  const db = new Sequelize(url, {
+    dialect: 'postgres',
+    dialectModule: pg,
+    logging: false,
+    pool: { max: poolMax, min: 0, idle: 10_000, acquire: 30_000 },
+  });
+  postgresUrls.set(db, url);
+  return db;
+}
+
+export const sequelize = config.databaseUrl ? createPostgres(config.databaseUrl) : createSqlite(config.databasePath);
+
+export const dialect = (): Dialect => (sequelize.getDialect() === 'postgres' ? 'postgres' : 'sqlite');
+
+/** LIKE that ignores case on both databases (SQLite's LIKE already does for ASCII; PostgreSQL's needs ILIKE). */
+export const likeOp = (): typeof Op.like | typeof Op.iLike => (dialect() === 'postgres' ? Op.iLike : Op.like);
 
 /**
- * Sequelize's SQLite dialect opens a new connection for every transaction and sets nothing on it but foreign keys.
- * Every connection it opens gets the busy timeout and the same journal settings here, so a write that meets another
- * one's lock waits for its turn instead of failing at once with SQLITE_BUSY.
+ * The key of PostgreSQL's transaction-level advisory lock every write transaction takes first: across all instances
+ * sharing the database, one write transaction at a time, as SQLite's IMMEDIATE transactions give on one machine.
+ * Checks made inside a transaction (stale versions, quotas, lot codes) therefore hold across instances.
  */
-const connections = sequelize.connectionManager as unknown as {
-  getConnection(options?: object): Promise<SqliteHandle>;
-};
-const openConnection = connections.getConnection.bind(connections);
-const configured = new WeakSet<SqliteHandle>();
-connections.getConnection = async (options?: object) => {
-  const connection = await openConnection(options);
-  if (!configured.has(connection)) {
-    connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
-    connection.run('PRAGMA foreign_keys = ON');
-    connection.run('PRAGMA synchronous = NORMAL');
-    configured.add(connection);
-  }
-  return connection;
-};
+const WRITE_LOCK_KEY = 0x46697a7a; // "Fizz"
 
 const inTurn = new AsyncLocalStorage<true>();
 let lastTurn: Promise<unknown> = Promise.resolve();
@@ -109,13 +143,24 @@ let lastTurn: Promise<unknown> = Promise.resolve();
 /**
  * Runs a write transaction when its turn comes: one at a time in this process, in the order asked. SQLite lets one
  * writer in at a time anyway; queueing here means twenty people saving at once wait a few milliseconds each rather
- * than race for the lock. Use this, never `sequelize.transaction`, for every write transaction. Not re-entrant:
+ * than race for the lock. On PostgreSQL the transaction also takes a shared advisory lock, so the same holds across
+ * instances. Use this, never `sequelize.transaction`, for every write transaction. Not re-entrant:
  * a transaction that starts another inside itself is a programming error and throws.
  */
 export function transaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
   if (inTurn.getStore())
     return Promise.reject(new Error('A write transaction cannot start another one inside itself.'));
-  const run = () => inTurn.run(true, () => sequelize.transaction(work));
+  const locked =
+    dialect() === 'postgres'
+      ? async (t: Transaction) => {
+          await sequelize.query('SELECT pg_advisory_xact_lock(:key)', {
+            replacements: { key: WRITE_LOCK_KEY },
+            transaction: t,
+          });
+          return work(t);
+        }
+      : work;
+  const run = () => inTurn.run(true, () => sequelize.transaction(locked));
   const result = lastTurn.then(run, run);
   lastTurn = result.catch(() => undefined);
   return result;
@@ -203,20 +248,41 @@ BottleFormat.addHook('afterSave', (format: BottleFormat) => forgetBrewery(format
 BottleFormat.addHook('afterBulkCreate', () => forgetBrewery());
 BottleFormat.addHook('afterBulkUpdate', () => forgetBrewery());
 
-/** Opens the database, sets SQLite's safety and concurrency settings, and applies pending migrations. */
-export async function prepareDatabase(): Promise<void> {
-  await sequelize.query('PRAGMA foreign_keys = ON');
-  await sequelize.query('PRAGMA journal_mode = WAL');
-  await sequelize.query(`PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`);
-  await sequelize.query('PRAGMA synchronous = NORMAL');
+/** Key of the advisory lock held while migrating, so instances starting together migrate one after the other. */
+const MIGRATION_LOCK_KEY = 0x46697a6d; // "Fizm"
+
+/**
+ * Applies pending migrations to a database (this server's, or `db:copy`'s target). On PostgreSQL one instance
+ * migrates at a time, holding an advisory lock on one connection of its own.
+ */
+export async function migrate(db: Sequelize): Promise<string[]> {
   const umzug = new Umzug({
     migrations,
-    context: sequelize.getQueryInterface(),
-    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    context: db.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize: db, tableName: 'schema_migrations' }),
     logger: undefined,
   });
-  const applied = await umzug.up();
-  if (applied.length > 0) logger.info({ migrations: applied.map((m) => m.name) }, 'database migrated');
+  if (db.getDialect() !== 'postgres') return (await umzug.up()).map((m) => m.name);
+  const client = new pg.Client({ connectionString: postgresUrls.get(db) });
+  await client.connect();
+  try {
+    await client.query('SELECT pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
+    return (await umzug.up()).map((m) => m.name);
+  } finally {
+    await client.end();
+  }
+}
+
+/** Opens the database, sets SQLite's safety and concurrency settings, and applies pending migrations. */
+export async function prepareDatabase(): Promise<void> {
+  if (dialect() === 'sqlite') {
+    await sequelize.query('PRAGMA foreign_keys = ON');
+    await sequelize.query('PRAGMA journal_mode = WAL');
+    await sequelize.query(`PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`);
+    await sequelize.query('PRAGMA synchronous = NORMAL');
+  }
+  const applied = await migrate(sequelize);
+  if (applied.length > 0) logger.info({ migrations: applied }, 'database migrated');
 }
 
 /** Answers whether the database responds; used by the health check. */

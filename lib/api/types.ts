@@ -88,6 +88,10 @@ export interface OutboxMessage {
 export interface ServerInfo {
   status: 'ok';
   db: 'ok';
+  /** The database this instance uses: one SQLite file, or PostgreSQL shared by several instances. */
+  dialect: 'sqlite' | 'postgres';
+  /** Where attached files are kept: a configured S3 bucket, or the local S3-compatible fake on loopback. */
+  storage: { kind: 's3' | 'local'; bucket: string };
   version: string;
   /** True when e-mail goes to the local Mail outbox instead of a real mail server. */
   outbox: boolean;

@@ -1,7 +1,14 @@
 import type { Request, Response } from 'express';
-import { rateLimit, type RateLimitRequestHandler } from 'express-rate-limit';
+import {
+  type IncrementResponse,
+  type Options,
+  rateLimit,
+  type RateLimitRequestHandler,
+  type Store,
+} from 'express-rate-limit';
 
 import { config } from '@/server/config';
+import { sequelize } from '@/server/db';
 import { HttpError } from '@/server/errors';
 import { hashToken } from '@/server/services/tokens';
 
@@ -9,11 +16,59 @@ const tooMany = (next: (error: unknown) => void) =>
   next(new HttpError(429, 'too_many_requests', 'Too many attempts. Wait a few minutes and try again.'));
 
 /**
+ * The counter of one limit when instances share PostgreSQL: a row per key in `rate_limit_hits`, counted up in one
+ * statement (a window that has ended starts again at 1), so every instance sees the same count. Runs on the app's
+ * own connection pool; rows of ended windows are removed now and then.
+ */
+class SharedCounter implements Store {
+  readonly prefix: string;
+  private windowMs = 60_000;
+  private increments = 0;
+
+  constructor(name: string) {
+    this.prefix = `${name}:`;
+  }
+
+  init(options: Options): void {
+    this.windowMs = options.windowMs;
+  }
+
+  async increment(key: string): Promise<IncrementResponse> {
+    if (++this.increments % 500 === 0)
+      await sequelize.query('DELETE FROM rate_limit_hits WHERE reset_at < now()').catch(() => undefined);
+    const [rows] = (await sequelize.query(
+      `INSERT INTO rate_limit_hits (key, hits, reset_at)
+       VALUES (:key, 1, now() + :windowMs * interval '1 millisecond')
+       ON CONFLICT (key) DO UPDATE SET
+         hits = CASE WHEN rate_limit_hits.reset_at <= now() THEN 1 ELSE rate_limit_hits.hits + 1 END,
+         reset_at = CASE WHEN rate_limit_hits.reset_at <= now() THEN EXCLUDED.reset_at ELSE rate_limit_hits.reset_at END
+       RETURNING hits, reset_at`,
+      { replacements: { key: this.prefix + key, windowMs: this.windowMs } },
+    )) as [{ hits: number; reset_at: Date }[], unknown];
+    return { totalHits: rows[0].hits, resetTime: new Date(rows[0].reset_at) };
+  }
+
+  async decrement(key: string): Promise<void> {
+    await sequelize.query('UPDATE rate_limit_hits SET hits = greatest(hits - 1, 0) WHERE key = :key', {
+      replacements: { key: this.prefix + key },
+    });
+  }
+
+  async resetKey(key: string): Promise<void> {
+    await sequelize.query('DELETE FROM rate_limit_hits WHERE key = :key', { replacements: { key: this.prefix + key } });
+  }
+}
+
+/** Where a limit counts: in this process (one machine), or in PostgreSQL, shared by every instance. */
+const counterFor = (name: string): { store?: Store } => (config.databaseUrl ? { store: new SharedCounter(name) } : {});
+
+/**
  * Per client address: sign-in, sign-up and the one-time links, AUTH_RATE_LIMIT a minute. The address is the
  * connection's unless TRUST_PROXY says which proxy to believe (Express's `trust proxy`, set in app.ts).
  */
-export function perAddressLimit(): RateLimitRequestHandler {
+export function perAddressLimit(name: string): RateLimitRequestHandler {
   return rateLimit({
+    ...counterFor(`address-${name}`),
     windowMs: 60_000,
     limit: config.authRateLimitPerMinute,
     standardHeaders: 'draft-8',
@@ -48,6 +103,7 @@ export function perAccountLimit(
   options: { countSuccess?: boolean } = {},
 ): RateLimitRequestHandler {
   return rateLimit({
+    ...counterFor(`account-${name}`),
     windowMs: 15 * 60_000,
     limit: config.authAccountRateLimit,
     standardHeaders: false,

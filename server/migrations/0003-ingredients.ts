@@ -38,16 +38,8 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     unique: true,
     where: { organisation_id: null },
   });
-  await qi.sequelize.query(
-    `CREATE VIRTUAL TABLE ingredient_search USING fts5(name, content='ingredients', content_rowid='id', tokenize='unicode61 remove_diacritics 2')`,
-  );
-  await qi.sequelize.query(`CREATE TRIGGER ingredients_ai AFTER INSERT ON ingredients BEGIN
-    INSERT INTO ingredient_search(rowid, name) VALUES (new.id, new.name); END`);
-  await qi.sequelize.query(`CREATE TRIGGER ingredients_ad AFTER DELETE ON ingredients BEGIN
-    INSERT INTO ingredient_search(ingredient_search, rowid, name) VALUES ('delete', old.id, old.name); END`);
-  await qi.sequelize.query(`CREATE TRIGGER ingredients_au AFTER UPDATE OF name ON ingredients BEGIN
-    INSERT INTO ingredient_search(ingredient_search, rowid, name) VALUES ('delete', old.id, old.name);
-    INSERT INTO ingredient_search(rowid, name) VALUES (new.id, new.name); END`);
+  if (qi.sequelize.getDialect() === 'postgres') await postgresSearch(qi);
+  else await sqliteSearch(qi);
   await qi.createTable('ingredient_changes', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
     ingredient_id: {
@@ -70,8 +62,39 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   await qi.addIndex('ingredient_changes', ['ingredient_id']);
 }
 
+/** SQLite: an FTS5 table over the names (diacritics folded), kept in step by triggers. */
+async function sqliteSearch(qi: QueryInterface): Promise<void> {
+  await qi.sequelize.query(
+    `CREATE VIRTUAL TABLE ingredient_search USING fts5(name, content='ingredients', content_rowid='id', tokenize='unicode61 remove_diacritics 2')`,
+  );
+  await qi.sequelize.query(`CREATE TRIGGER ingredients_ai AFTER INSERT ON ingredients BEGIN
+    INSERT INTO ingredient_search(rowid, name) VALUES (new.id, new.name); END`);
+  await qi.sequelize.query(`CREATE TRIGGER ingredients_ad AFTER DELETE ON ingredients BEGIN
+    INSERT INTO ingredient_search(ingredient_search, rowid, name) VALUES ('delete', old.id, old.name); END`);
+  await qi.sequelize.query(`CREATE TRIGGER ingredients_au AFTER UPDATE OF name ON ingredients BEGIN
+    INSERT INTO ingredient_search(ingredient_search, rowid, name) VALUES ('delete', old.id, old.name);
+    INSERT INTO ingredient_search(rowid, name) VALUES (new.id, new.name); END`);
+}
+
+/**
+ * PostgreSQL: a tsvector column of the name (the 'simple' configuration, diacritics folded by unaccent, as FTS5's
+ * unicode61 tokenizer does on SQLite), kept by a trigger, under a GIN index.
+ */
+async function postgresSearch(qi: QueryInterface): Promise<void> {
+  await qi.sequelize.query('CREATE EXTENSION IF NOT EXISTS unaccent');
+  await qi.sequelize.query('ALTER TABLE ingredients ADD COLUMN search_vector tsvector');
+  await qi.sequelize.query(`CREATE FUNCTION ingredients_search_vector() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN NEW.search_vector := to_tsvector('simple', unaccent(NEW.name)); RETURN NEW; END $$`);
+  await qi.sequelize.query(`CREATE TRIGGER ingredients_search BEFORE INSERT OR UPDATE OF name ON ingredients
+    FOR EACH ROW EXECUTE FUNCTION ingredients_search_vector()`);
+  await qi.sequelize.query('CREATE INDEX ingredients_search_vector ON ingredients USING GIN (search_vector)');
+}
+
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.dropTable('ingredient_changes');
-  await qi.sequelize.query('DROP TABLE ingredient_search');
+  if (qi.sequelize.getDialect() === 'postgres') {
+    await qi.sequelize.query('DROP TRIGGER ingredients_search ON ingredients');
+    await qi.sequelize.query('DROP FUNCTION ingredients_search_vector()');
+  } else await qi.sequelize.query('DROP TABLE ingredient_search');
   await qi.dropTable('ingredients');
 }

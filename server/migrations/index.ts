@@ -15,6 +15,8 @@ import * as dropRecipeStatus from './0012-drop-recipe-status';
 import * as batches from './0013-batches';
 import * as displayNames from './0014-display-names-and-currency';
 import * as nutrition from './0015-nutrition';
+import * as jsonb from './0016-jsonb';
+import * as rateLimitHits from './0017-rate-limit-hits';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -38,4 +40,6 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '0013-batches', ...batches },
   { name: '0014-display-names-and-currency', ...displayNames },
   { name: '0015-nutrition', ...nutrition },
+  { name: '0016-jsonb', ...jsonb },
+  { name: '0017-rate-limit-hits', ...rateLimitHits },
 ];

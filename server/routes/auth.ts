@@ -21,7 +21,7 @@ import { revokeToken, SESSION_COOKIE, sessionCookieOptions, signSessionToken } f
 
 export const authRouter = Router();
 
-const byAddress = perAddressLimit();
+const byAddress = perAddressLimit('auth');
 const limits = {
   signIn: perAccountLimit('sign-in', accountKeys.email, { countSuccess: false }),
   signUp: perAccountLimit('sign-up', accountKeys.email),

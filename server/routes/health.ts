@@ -2,10 +2,11 @@ import { Router } from 'express';
 
 import type { ServerInfo } from '@/lib/api/types';
 import { config } from '@/server/config';
-import { databaseIsUp } from '@/server/db';
+import { databaseIsUp, dialect } from '@/server/db';
 import { HttpError } from '@/server/errors';
 import { mailer } from '@/server/mail/mailer';
 import { allow } from '@/server/middleware/access';
+import { storageInfo } from '@/server/services/object-store';
 
 export const healthRouter = Router();
 
@@ -14,6 +15,8 @@ healthRouter.get('/', allow('public'), async (_req, res) => {
   const body: ServerInfo = {
     status: 'ok',
     db: 'ok',
+    dialect: dialect(),
+    storage: await storageInfo(),
     version: config.version,
     outbox: mailer.usesOutbox,
     outboxOpen: config.outboxOpen,

@@ -1,3 +1,5 @@
+import { pipeline } from 'node:stream/promises';
+
 import { Router } from 'express';
 
 import { idParam } from '@/lib/schemas/common';
@@ -114,7 +116,8 @@ attachmentsRouter.get(
     const file = await attachments.attachmentFile(authOf(res), params.id);
     res.setHeader('Content-Type', file.mimeType);
     res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/"/g, '')}"`);
-    res.sendFile(file.path);
+    res.setHeader('Content-Length', String(file.sizeBytes));
+    await pipeline(file.body, res);
   }),
 );
 

@@ -38,7 +38,7 @@ organisationRouter.patch(
   }),
 );
 
-const passwordChanges = [perAddressLimit(), perAccountLimit('password-change', accountKeys.signedIn)];
+const passwordChanges = [perAddressLimit('password-change'), perAccountLimit('password-change', accountKeys.signedIn)];
 
 profileRouter.post(
   '/password',

@@ -1,6 +1,6 @@
 import crypto from 'node:crypto';
-import fs from 'node:fs';
 import path from 'node:path';
+import type { Readable } from 'node:stream';
 
 import type { Attachment } from '@/lib/api/types';
 import { config } from '@/server/config';
@@ -9,6 +9,7 @@ import { badRequest, forbidden, HttpError, notFound } from '@/server/errors';
 import { logger } from '@/server/logger';
 
 import { visibleIngredient } from './ingredients';
+import { deleteObject, getObject, listObjects, putObject, STORED_NAME } from './object-store';
 import type { AuthContext } from './sessions';
 
 /** What a file really is, read from its first bytes (its name and the browser's claim are not trusted). */
@@ -66,15 +67,15 @@ export async function storeFile(
       .basename(file.originalname)
       .replace(/[^\w .()-]+/g, '_')
       .slice(0, 200) || `file.${type.ext}`;
-  const filePath = path.join(config.uploadsDir, storedName);
+  let stored = false;
   try {
     // The quota is checked and the row written in one write transaction, so two uploads at once cannot both pass.
     const created = await transaction(async (t) => {
       const used =
         (await AttachmentRow.sum('sizeBytes', { where: { organisationId: auth.organisationId }, transaction: t })) ?? 0;
       if (used + file.buffer.length > config.uploadQuotaBytes) throw quotaFull(used);
-      fs.mkdirSync(config.uploadsDir, { recursive: true });
-      await fs.promises.writeFile(filePath, file.buffer, { flag: 'wx' });
+      await putObject(storedName, file.buffer, type.mime);
+      stored = true;
       return AttachmentRow.create(
         {
           organisationId: auth.organisationId,
@@ -93,7 +94,7 @@ export async function storeFile(
       await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }),
     );
   } catch (error) {
-    await fs.promises.rm(filePath, { force: true });
+    if (stored) await deleteObject(storedName).catch(() => undefined);
     throw error;
   }
 }
@@ -147,23 +148,25 @@ export async function deleteAttachment(auth: AuthContext, id: number): Promise<v
     await attachment.destroy({ transaction: t });
     return attachment.storedName;
   });
-  await fs.promises.rm(path.join(config.uploadsDir, storedName), { force: true });
+  await deleteObject(storedName);
 }
 
+/** A stored file younger than this may belong to an upload still being written (on any instance): left alone. */
+const ORPHAN_AGE_MS = 60 * 60_000;
+
 /**
- * Removes files in the uploads folder that no row points at (left by a crash between writing the file and its
- * row). Run at start, before any upload can be in flight. Answers how many it removed.
+ * Removes stored files that no row points at (left by a crash between storing the file and committing its row).
+ * Run at start; several instances may share the store, so only files older than an hour count. Answers how many it
+ * removed.
  */
-export async function removeOrphanUploads(): Promise<number> {
-  let names: string[];
-  try {
-    names = await fs.promises.readdir(config.uploadsDir);
-  } catch {
-    return 0;
-  }
+export async function removeOrphanUploads(now = Date.now()): Promise<number> {
   const known = new Set((await AttachmentRow.findAll({ attributes: ['storedName'] })).map((a) => a.storedName));
-  const orphans = names.filter((name) => /^[0-9a-f]{32}\.(pdf|png|jpg)$/.test(name) && !known.has(name));
-  for (const name of orphans) await fs.promises.rm(path.join(config.uploadsDir, name), { force: true });
+  const orphans: string[] = [];
+  for await (const object of listObjects()) {
+    const age = object.lastModified ? now - object.lastModified.getTime() : Infinity;
+    if (STORED_NAME.test(object.key) && !known.has(object.key) && age > ORPHAN_AGE_MS) orphans.push(object.key);
+  }
+  for (const key of orphans) await deleteObject(key);
   if (orphans.length > 0) logger.info({ removed: orphans.length }, 'uploads without a record removed');
   return orphans.length;
 }
@@ -182,12 +185,13 @@ export async function listAttachments(auth: AuthContext, ingredientId: number): 
 export async function attachmentFile(
   auth: AuthContext,
   id: number,
-): Promise<{ path: string; mimeType: string; name: string }> {
+): Promise<{ body: Readable; mimeType: string; name: string; sizeBytes: number }> {
   const attachment = await AttachmentRow.findOne({ where: { id, organisationId: auth.organisationId } });
   if (!attachment) throw notFound('No such file.');
-  return {
-    path: path.join(config.uploadsDir, attachment.storedName),
-    mimeType: attachment.mimeType,
-    name: attachment.originalName,
-  };
+  const body = await getObject(attachment.storedName);
+  if (!body) {
+    logger.error({ attachment: attachment.id }, 'attached file missing from the object store');
+    throw new HttpError(410, 'file_missing', 'This file’s record is kept but the file itself is missing from storage.');
+  }
+  return { body, mimeType: attachment.mimeType, name: attachment.originalName, sizeBytes: attachment.sizeBytes };
 }

@@ -31,6 +31,7 @@ import {
   BatchIngredientLot,
   BatchReading,
   BatchStepSignoff,
+  likeOp,
   Organisation,
   Recipe,
   transaction,
@@ -105,7 +106,7 @@ async function nextLotCode(organisationId: number, t: Transaction): Promise<stri
   const day = `${String(now.getUTCFullYear()).slice(2)}${String(now.getUTCMonth() + 1).padStart(2, '0')}${String(now.getUTCDate()).padStart(2, '0')}`;
   const stem = `${organisation?.lotPrefix ?? 'LOT'}-${day}-`;
   const today = await Batch.findAll({
-    where: { organisationId, lotCode: { [Op.like]: `${stem}%` } },
+    where: { organisationId, lotCode: { [likeOp()]: `${stem}%` } },
     attributes: ['lotCode'],
     transaction: t,
   });
@@ -280,7 +281,7 @@ export async function listBatches(auth: AuthContext, query: BatchListQuery): Pro
     organisationId: auth.organisationId,
     ...(query.state !== 'all' ? { state: query.state } : {}),
     ...(query.recipeId ? { recipeId: query.recipeId } : {}),
-    ...(query.lot ? { lotCode: { [Op.like]: `%${query.lot.replace(/[%_\\]/g, '')}%` } } : {}),
+    ...(query.lot ? { lotCode: { [likeOp()]: `%${query.lot.replace(/[%_\\]/g, '')}%` } } : {}),
   };
   const { rows, count } = await Batch.findAndCountAll({
     where,

@@ -1,10 +1,14 @@
+import { LRUCache } from 'lru-cache';
+
 import { DEFAULT_RATING_SHARE, DEFAULT_WARMEST_TEMP_C } from '@/lib/chemistry/carbonation';
+import { config } from '@/server/config';
 import { BottleFormat } from '@/server/models/bottle-format';
 import { Organisation } from '@/server/models/organisation';
 
 /**
  * Per-brewery facts that every calculation reads (the alcohol limit, the bottle formats), kept in memory so that a
- * calculation costs no query. Hooks in db.ts clear a brewery's entry whenever its rows change.
+ * calculation costs no query. Hooks in db.ts clear a brewery's entry on this instance whenever its rows change;
+ * other instances sharing the database read them again within `config.cacheTtlMs`.
  */
 interface Entry {
   abvLimitPercent?: number;
@@ -13,7 +17,7 @@ interface Entry {
   formats?: Map<number, BottleFormat>;
 }
 
-const cache = new Map<number, Entry>();
+const cache = new LRUCache<number, Entry>({ max: 10_000, ttl: Math.max(config.cacheTtlMs, 1) });
 
 export function forgetBrewery(organisationId?: number): void {
   if (organisationId === undefined) cache.clear();

@@ -14,7 +14,7 @@ import type {
   ScaleRequest,
   TastingInput,
 } from '@/lib/schemas/recipes';
-import { Ingredient, Recipe, RecipeReview, RecipeVersion, Tasting, transaction, User } from '@/server/db';
+import { Ingredient, likeOp, Recipe, RecipeReview, RecipeVersion, Tasting, transaction, User } from '@/server/db';
 import { badRequest, HttpError, notFound } from '@/server/errors';
 
 import { cachedAbvLimit, cachedBottleFormat, cachedWarmestTemp } from './brewery-cache';
@@ -93,7 +93,7 @@ export async function listRecipes(auth: AuthContext, q: string, status: RecipeLi
   const where: Record<string | symbol, unknown> = { organisationId: auth.organisationId };
   if (q) {
     const like = `%${q.replace(/[%_]/g, '')}%`;
-    where[Op.or] = [{ name: { [Op.like]: like } }, { flavourNotes: { [Op.like]: like } }];
+    where[Op.or] = [{ name: { [likeOp()]: like } }, { flavourNotes: { [likeOp()]: like } }];
   }
   if (status === 'draft') where.archivedAt = { [Op.is]: null };
   if (status === 'archived') where.archivedAt = { [Op.not]: null };

@@ -4,6 +4,7 @@ import path from 'node:path';
 
 import type { CookieOptions } from 'express';
 import jwt from 'jsonwebtoken';
+import { LRUCache } from 'lru-cache';
 import { Op } from 'sequelize';
 
 import type { Role } from '@/lib/roles';
@@ -34,9 +35,10 @@ interface CachedUser extends AuthContext {
 
 /**
  * Users looked up by the sign-in check, kept in memory so that a signed-in request costs no query. Any change
- * to a user row clears its entry (hooks in db.ts), so a deactivation or role change takes effect at once.
+ * to a user row clears its entry here (hooks in db.ts), so a deactivation or role change takes effect at once on
+ * this instance; other instances sharing the database see it within `config.cacheTtlMs`.
  */
-const userCache = new Map<number, CachedUser>();
+const userCache = new LRUCache<number, CachedUser>({ max: 10_000, ttl: Math.max(config.cacheTtlMs, 1) });
 
 export function forgetCachedUser(userId?: number): void {
   if (userId === undefined) userCache.clear();
@@ -139,8 +141,12 @@ function verifyToken(token: string): (TokenClaims & { exp: number }) | null {
  * restart does not bring them back, and in memory (loaded once) so the check costs no query.
  */
 let revoked: Promise<Map<string, number>> | null = null;
+let revokedLoadedAt = 0;
 
 function revokedSessions(): Promise<Map<string, number>> {
+  // Another instance may have ended a session: read the list again once it is older than the cache lifetime.
+  if (revoked && Date.now() - revokedLoadedAt > config.cacheTtlMs) revoked = null;
+  if (!revoked) revokedLoadedAt = Date.now();
   revoked ??= (async () => {
     await RevokedSession.destroy({ where: { expiresAt: { [Op.lt]: new Date() } } });
     const rows = await RevokedSession.findAll();

@@ -18,6 +18,8 @@ const session = (role: Role): Session => ({
 const info = (outbox: boolean, outboxOpen: boolean): ServerInfo => ({
   status: 'ok',
   db: 'ok',
+  dialect: 'sqlite',
+  storage: { kind: 'local', bucket: 'fizzwright-uploads' },
   version: '0',
   outbox,
   outboxOpen,

@@ -1,11 +1,17 @@
 import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 
+import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import type { Express } from 'express';
+import S3rver from 's3rver';
+import request from 'supertest';
 
 import { config } from '@/server/config';
+import { Attachment } from '@/server/db';
+import { closeObjectStore, getObject } from '@/server/services/object-store';
 
-import { addMember, type Agent, signUpOwner, startApp, stopApp } from './helpers';
+import { addMember, type Agent, asBuffer, signUpOwner, startApp, stopApp, storedKeys } from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -51,18 +57,10 @@ describe('POST /api/ingredients/:id/attachments', () => {
       sizeBytes: PDF.length,
       url: `/api/attachments/${res.body.id}`,
     });
-    const stored = fs.readdirSync(config.uploadsDir);
+    const stored = await storedKeys();
     expect(stored.some((name) => /^[0-9a-f]{32}\.pdf$/.test(name))).toBe(true);
     expect(stored).not.toContain('spec sheet.pdf');
-    const download = await brewer
-      .get(res.body.url)
-      .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
-      .expect(200);
+    const download = await brewer.get(res.body.url).buffer(true).parse(asBuffer).expect(200);
     expect(download.headers['content-type']).toBe('application/pdf');
     expect(Buffer.compare(download.body as Buffer, PDF)).toBe(0);
     const list = await brewer.get(`/api/ingredients/${ingredientId}/attachments`).expect(200);
@@ -79,7 +77,7 @@ describe('POST /api/ingredients/:id/attachments', () => {
   });
 
   it('refuses a file over the size limit, a missing file and a brewer, storing nothing', async () => {
-    const before = fs.readdirSync(config.uploadsDir).length;
+    const before = (await storedKeys()).length;
     const big = Buffer.concat([PDF, Buffer.alloc(config.uploadMaxBytes + 1)]);
     const tooBig = await developer
       .post(`/api/ingredients/${ingredientId}/attachments`)
@@ -88,7 +86,7 @@ describe('POST /api/ingredients/:id/attachments', () => {
     expect(tooBig.body.error.message).toMatch(/too large/);
     await developer.post(`/api/ingredients/${ingredientId}/attachments`).field('note', 'no file').expect(400);
     await brewer.post(`/api/ingredients/${ingredientId}/attachments`).attach('file', PDF, 'x.pdf').expect(403);
-    expect(fs.readdirSync(config.uploadsDir)).toHaveLength(before);
+    expect(await storedKeys()).toHaveLength(before);
   });
 
   it('never serves a file to another brewery', async () => {
@@ -100,5 +98,75 @@ describe('POST /api/ingredients/:id/attachments', () => {
     await stranger.agent.get(res.body.url).expect(404);
     await stranger.agent.get(`/api/ingredients/${ingredientId}/attachments`).expect(404);
     expect(path.isAbsolute(config.uploadsDir)).toBe(true);
+  });
+});
+
+describe('the object store', () => {
+  it('moves files kept as plain files in the uploads folder (before the object store) into it when it opens', async () => {
+    await closeObjectStore();
+    const legacy = `${'cd'.repeat(16)}.png`;
+    fs.mkdirSync(config.uploadsDir, { recursive: true });
+    fs.writeFileSync(path.join(config.uploadsDir, legacy), PNG);
+    expect(await storedKeys()).toContain(legacy);
+    expect(fs.existsSync(path.join(config.uploadsDir, legacy))).toBe(false);
+    const body = await getObject(legacy);
+    const chunks: Buffer[] = [];
+    for await (const chunk of body!) chunks.push(chunk as Buffer);
+    expect(Buffer.compare(Buffer.concat(chunks), PNG)).toBe(0);
+  });
+
+  it('uses the bucket S3_BUCKET names at S3_ENDPOINT, with the SDK’s usual credentials, and reports it', async () => {
+    // Another S3-compatible server standing in for the brewery's object store.
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'fizzwright-remote-s3-'));
+    const remote = new S3rver({
+      address: '127.0.0.1',
+      port: 0,
+      silent: true,
+      directory: dir,
+      configureBuckets: [{ name: 'brewery-files' }],
+    });
+    const { port } = await remote.run();
+    const saved = { s3: config.s3, key: process.env.AWS_ACCESS_KEY_ID, secret: process.env.AWS_SECRET_ACCESS_KEY };
+    process.env.AWS_ACCESS_KEY_ID = 'S3RVER';
+    process.env.AWS_SECRET_ACCESS_KEY = 'S3RVER';
+    config.s3 = {
+      bucket: 'brewery-files',
+      endpoint: `http://127.0.0.1:${port}`,
+      region: 'eu-west-1',
+      forcePathStyle: true,
+    };
+    await closeObjectStore();
+    try {
+      const health = await request(app).get('/api/health').expect(200);
+      expect(health.body.storage).toEqual({ kind: 's3', bucket: 'brewery-files' });
+      const res = await developer
+        .post(`/api/ingredients/${ingredientId}/attachments`)
+        .attach('file', PDF, 'remote.pdf')
+        .expect(201);
+      const row = await Attachment.findByPk(res.body.id);
+      const client = new S3Client({
+        region: 'eu-west-1',
+        endpoint: `http://127.0.0.1:${port}`,
+        forcePathStyle: true,
+        credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' },
+      });
+      const listed = await client.send(new ListObjectsV2Command({ Bucket: 'brewery-files' }));
+      expect(listed.Contents?.map((o) => o.Key)).toEqual([row!.storedName]);
+      client.destroy();
+      const download = await brewer.get(res.body.url).buffer(true).parse(asBuffer).expect(200);
+      expect(Buffer.compare(download.body as Buffer, PDF)).toBe(0);
+      // Another brewery still gets nothing, whatever the store.
+      const stranger = await signUpOwner(app);
+      await stranger.agent.get(res.body.url).expect(404);
+    } finally {
+      await closeObjectStore();
+      config.s3 = saved.s3;
+      process.env.AWS_ACCESS_KEY_ID = saved.key;
+      process.env.AWS_SECRET_ACCESS_KEY = saved.secret;
+      await remote.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    }
+    const health = await request(app).get('/api/health').expect(200);
+    expect(health.body.storage).toEqual({ kind: 'local', bucket: 'fizzwright-uploads' });
   });
 });

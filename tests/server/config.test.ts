@@ -31,6 +31,38 @@ describe('loadConfig', () => {
     expect(() => loadConfig({ JWT_SECRET: 'too-short' })).toThrow(/at least 32 characters/);
   });
 
+  it('uses PostgreSQL only when DATABASE_URL is set, and then requires JWT_SECRET shared by every instance', () => {
+    expect(loadConfig({}).databaseUrl).toBeNull();
+    expect(() => loadConfig({ DATABASE_URL: 'postgres://fizz:pw@db.internal:5432/fizz' })).toThrow(
+      /JWT_SECRET is required with DATABASE_URL/,
+    );
+    const config = loadConfig({ DATABASE_URL: 'postgres://fizz:pw@db.internal:5432/fizz', JWT_SECRET: 'x'.repeat(32) });
+    expect(config.databaseUrl).toBe('postgres://fizz:pw@db.internal:5432/fizz');
+    expect(() => loadConfig({ DATABASE_URL: 'mysql://db/fizz' })).toThrow(/DATABASE_URL must be a PostgreSQL address/);
+  });
+
+  it('keeps caches long on one machine and short when instances share PostgreSQL, unless told', () => {
+    expect(loadConfig({}).cacheTtlMs).toBe(600_000);
+    expect(loadConfig({ DATABASE_URL: 'postgres://h/db', JWT_SECRET: 'x'.repeat(32) }).cacheTtlMs).toBe(5_000);
+    expect(loadConfig({ CACHE_TTL_MS: '1000' }).cacheTtlMs).toBe(1_000);
+  });
+
+  it('keeps files in the local fake unless S3_BUCKET names a bucket', () => {
+    expect(loadConfig({}).s3.bucket).toBeNull();
+    const s3 = loadConfig({
+      S3_BUCKET: 'brewery-files',
+      S3_ENDPOINT: 'https://objects.example.com',
+      S3_REGION: 'eu-west-1',
+    }).s3;
+    expect(s3).toEqual({
+      bucket: 'brewery-files',
+      endpoint: 'https://objects.example.com',
+      region: 'eu-west-1',
+      forcePathStyle: false,
+    });
+    expect(() => loadConfig({ S3_BUCKET: 'Not A Bucket' })).toThrow(/S3_BUCKET must be a bucket name/);
+  });
+
   it('lists every bad variable at once', () => {
     expect(() => loadConfig({ PORT: 'eighty', BCRYPT_COST: '99' })).toThrow(
       /PORT[\s\S]*BCRYPT_COST|BCRYPT_COST[\s\S]*PORT/,

@@ -15,6 +15,9 @@ describe('GET /api/health', () => {
     expect(res.body).toMatchObject({
       status: 'ok',
       db: 'ok',
+      // Which database and store depend on how the tests run: `npm test` (SQLite) or `npm run test:pg`.
+      dialect: process.env.DATABASE_URL ? 'postgres' : 'sqlite',
+      storage: { kind: 'local', bucket: 'fizzwright-uploads' },
       version: expect.stringMatching(/^\d+\.\d+\.\d+/),
       outbox: true,
     });

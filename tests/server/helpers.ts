@@ -5,6 +5,7 @@ import type { Session } from '@/lib/api/types';
 import type { Role } from '@/lib/roles';
 import { createApp } from '@/server/app';
 import { OutboxMessage, prepareDatabase, sequelize } from '@/server/db';
+import { closeObjectStore, listObjects } from '@/server/services/object-store';
 
 export type Agent = ReturnType<typeof request.agent>;
 
@@ -15,7 +16,15 @@ export async function startApp(): Promise<Express> {
 }
 
 export async function stopApp(): Promise<void> {
+  await closeObjectStore();
   await sequelize.close();
+}
+
+/** The keys of every file in the object store (the local fake in tests), through the same SDK calls the app makes. */
+export async function storedKeys(): Promise<string[]> {
+  const keys: string[] = [];
+  for await (const object of listObjects()) keys.push(object.key);
+  return keys;
 }
 
 let counter = 0;

@@ -1,5 +1,4 @@
 import fs from 'node:fs';
-import path from 'node:path';
 
 import type { Express } from 'express';
 import request from 'supertest';
@@ -164,11 +163,10 @@ describe('attachments: quota, deletion and files without a row', () => {
     expect(full.body.error.code).toBe('quota_full');
     expect(full.body.error.message).toMatch(/storage is full: 0\.0 MB of 0\.0 MB|storage is full/);
     const stored = await db.Attachment.findByPk(first.body.id);
-    const file = path.join(config.uploadsDir, stored!.storedName);
-    expect(fs.existsSync(file)).toBe(true);
+    expect(await helpers.storedKeys()).toContain(stored!.storedName);
     await brewer.delete(`/api/attachments/${first.body.id}`).send({}).expect(403);
     await developer.delete(`/api/attachments/${first.body.id}`).send({}).expect(204);
-    expect(fs.existsSync(file)).toBe(false);
+    expect(await helpers.storedKeys()).not.toContain(stored!.storedName);
     await owner.get(`/api/attachments/${first.body.id}`).expect(404);
     // Room again.
     const again = await owner.post(url).attach('file', PDF(2000), 'three.pdf').expect(201);
@@ -176,15 +174,21 @@ describe('attachments: quota, deletion and files without a row', () => {
     await stranger.agent.delete(`/api/attachments/${again.body.id}`).send({}).expect(404);
   });
 
-  it('removes files that no row points at when the server starts', async () => {
+  it('removes stored files that no row points at when the server starts, once they are over an hour old', async () => {
     const { removeOrphanUploads } =
       require('@/server/services/attachments') as typeof import('@/server/services/attachments');
-    fs.mkdirSync(config.uploadsDir, { recursive: true });
-    const orphan = path.join(config.uploadsDir, `${'ab'.repeat(16)}.pdf`);
-    fs.writeFileSync(orphan, PDF(50));
+    const { putObject } = require('@/server/services/object-store') as typeof import('@/server/services/object-store');
+    const orphan = `${'ab'.repeat(16)}.pdf`;
+    await putObject(orphan, PDF(50), 'application/pdf');
     const kept = await db.Attachment.findAll();
-    expect(await removeOrphanUploads()).toBe(1);
-    expect(fs.existsSync(orphan)).toBe(false);
-    for (const row of kept) expect(fs.existsSync(path.join(config.uploadsDir, row.storedName))).toBe(true);
+    expect(kept.length).toBeGreaterThan(0);
+    // Just stored: it may be an upload another instance is still committing.
+    expect(await removeOrphanUploads()).toBe(0);
+    expect(await helpers.storedKeys()).toContain(orphan);
+    const twoHoursOn = Date.now() + 2 * 60 * 60_000;
+    expect(await removeOrphanUploads(twoHoursOn)).toBe(1);
+    const left = await helpers.storedKeys();
+    expect(left).not.toContain(orphan);
+    for (const row of kept) expect(left).toContain(row.storedName);
   });
 });

@@ -1,6 +1,9 @@
-// Runs before each server test file: a fresh SQLite file of its own, fast hashing, quiet logs, no demo data.
+// Runs before each server test file: a fresh database of its own, fast hashing, quiet logs, no demo data.
+import { execFileSync } from 'node:child_process';
 import os from 'node:os';
 import path from 'node:path';
+
+import { PG_TEST_PREFIX } from './pg-names';
 
 process.env.NODE_ENV = 'test';
 process.env.DATABASE_PATH = path.join(
@@ -19,3 +22,24 @@ process.env.UPLOADS_DIR = path.join(
   `fizzwright-uploads-${process.pid}-${Math.random().toString(36).slice(2)}`,
 );
 process.env.UPLOAD_MAX_MB = '1';
+
+/*
+ * `npm run test:pg`: the same tests against PostgreSQL. TEST_DATABASE_URL names a database the test role may connect
+ * to with CREATEDB; each test file gets a fresh database of its own (dropped by pg-teardown.ts), as each gets its own
+ * SQLite file otherwise. Made synchronously here because Jest's setup files cannot wait.
+ */
+if (process.env.TEST_DATABASE_URL) {
+  const admin = new URL(process.env.TEST_DATABASE_URL);
+  const name = `${PG_TEST_PREFIX}${process.pid}_${Date.now()}_${Math.random().toString(36).slice(2, 8)}`;
+  execFileSync(process.execPath, [
+    '-e',
+    `const { Client } = require('pg');
+     const client = new Client({ connectionString: process.argv[1] });
+     client.connect().then(() => client.query('CREATE DATABASE ${name}')).then(() => client.end(), (e) => { console.error(e.message); process.exit(1); });`,
+    admin.toString(),
+  ]);
+  const url = new URL(admin);
+  url.pathname = `/${name}`;
+  process.env.DATABASE_URL = url.toString();
+  process.env.JWT_SECRET = 'test-secret-for-postgres-runs-only-0123456789';
+}
