@@ -8,8 +8,16 @@ import { demoAccountsText, seedDemoIfEmpty } from './seed/demo';
 import { seedDemoRecipesIfEmpty } from './seed/demo-recipes';
 import { seedIngredientsIfEmpty } from './seed/ingredients';
 import { removeOrphanUploads } from './services/attachments';
+import { closeObjectStore } from './services/object-store';
 import { redactExpiredLinks } from './services/outbox';
 import { sessionSigningKey } from './services/sessions';
+
+/** Which database this instance uses, for the start-up line: never the password. */
+function databaseDescription(): string {
+  if (!config.databaseUrl) return config.databasePath;
+  const url = new URL(config.databaseUrl);
+  return `PostgreSQL ${url.hostname}:${url.port || 5432}${url.pathname}`;
+}
 
 /** Prepares the database (migrations, demo data on first start) and listens. Resolves with the bound port. */
 export async function main(): Promise<number> {
@@ -28,10 +36,13 @@ export async function main(): Promise<number> {
     const server = app.listen(config.port, config.host, () => {
       const { port } = server.address() as AddressInfo;
       if (!config.appUrlConfigured) config.appUrl = `http://localhost:${port}`;
-      console.log(`Fizzwright is listening on http://localhost:${port} (database ${config.databasePath})`);
+      console.log(`Fizzwright is listening on http://localhost:${port} (database ${databaseDescription()})`);
       resolve(port);
     });
-    const stop = () => server.close(() => process.exit(0));
+    const stop = () =>
+      server.close(() => {
+        void closeObjectStore().finally(() => process.exit(0));
+      });
     process.once('SIGINT', stop);
     process.once('SIGTERM', stop);
   });

@@ -3,12 +3,11 @@
  * the same run against references behind the same middleware. The server runs in its own process (as in
  * production, NODE_ENV=production, logs at warn) on a temporary database; autocannon drives it from this process.
  */
-import fs from 'node:fs';
 import os from 'node:os';
 
 import autocannon from 'autocannon';
 
-import { median, signIn, startServer } from './server';
+import { median, postgresFromArgs, signIn, startServer } from './server';
 
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 32);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 6);
@@ -323,7 +322,11 @@ Writers: each saves its own recipe (a new version per save), ${WRITER_SECONDS} s
 }
 
 async function main(): Promise<void> {
-  const { child, url, dir } = await startServer({ BENCH_ROUTES: 'true' });
+  const postgres = postgresFromArgs();
+  const { url, stop } = await startServer({ BENCH_ROUTES: 'true' }, postgres);
+  console.log(
+    `Database: ${postgres ? 'PostgreSQL (a fresh database, dropped afterwards)' : 'SQLite (a temporary file)'}`,
+  );
   try {
     const cookie = await signIn(url);
     const json = { 'content-type': 'application/json', cookie };
@@ -398,8 +401,7 @@ async function main(): Promise<void> {
     if (results.some((r) => r.errors + r.non2xx > 0))
       console.log('\nSome requests failed: the figures above are not valid.');
   } finally {
-    child.kill('SIGTERM');
-    fs.rmSync(dir, { recursive: true, force: true });
+    await stop();
   }
 }
 

@@ -222,8 +222,7 @@ async function main(): Promise<void> {
   } finally {
     await browser.close();
     empty.close();
-    ours.child.kill('SIGTERM');
-    fs.rmSync(ours.dir, { recursive: true, force: true });
+    await ours.stop();
   }
 }
 

@@ -4,7 +4,7 @@ import { Client } from 'pg';
 import { PG_TEST_PREFIX } from './pg-names';
 
 export default async function dropTestDatabases(): Promise<void> {
-  if (!process.env.TEST_DATABASE_URL) return;
+  if (process.env.TEST_PG !== 'true' || !process.env.TEST_DATABASE_URL) return;
   const client = new Client({ connectionString: process.env.TEST_DATABASE_URL });
   await client.connect();
   try {

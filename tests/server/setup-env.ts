@@ -24,11 +24,11 @@ process.env.UPLOADS_DIR = path.join(
 process.env.UPLOAD_MAX_MB = '1';
 
 /*
- * `npm run test:pg`: the same tests against PostgreSQL. TEST_DATABASE_URL names a database the test role may connect
- * to with CREATEDB; each test file gets a fresh database of its own (dropped by pg-teardown.ts), as each gets its own
+ * `npm run test:pg` (TEST_PG=true): the same tests against PostgreSQL. TEST_DATABASE_URL names a database the test
+ * role may connect to with CREATEDB; each test file gets a fresh database of its own (dropped by pg-teardown.ts), as each gets its own
  * SQLite file otherwise. Made synchronously here because Jest's setup files cannot wait.
  */
-if (process.env.TEST_DATABASE_URL) {
+if (process.env.TEST_PG === 'true' && process.env.TEST_DATABASE_URL) {
   const admin = new URL(process.env.TEST_DATABASE_URL);
   const name = `${PG_TEST_PREFIX}${process.pid}_${Date.now()}_${Math.random().toString(36).slice(2, 8)}`;
   execFileSync(process.execPath, [

@@ -8,8 +8,12 @@ import { LABEL_NUTRIENT_FIELDS } from '@/lib/ingredients';
 import { Ingredient, prepareDatabase, sequelize } from '@/server/db';
 import { seedIngredientsIfEmpty } from '@/server/seed/ingredients';
 import { loadStarterIngredients, STARTER_RECORDS } from '@/server/seed/starter-ingredients';
-import { datasetIngredientCount, importDatasetIngredients } from '@/server/services/ingredients';
+import { datasetIngredientCount, importDatasetIngredients, searchIngredients } from '@/server/services/ingredients';
+import type { AuthContext } from '@/server/services/sessions';
 import { assertSrFolder, ingredientFromSr, NotSrFolderError, readSrFoods } from '@/server/usda/sr-files';
+
+/** A signed-in person of no brewery: sees the dataset only. */
+const nobody: AuthContext = { userId: 0, organisationId: 0, role: 'owner' };
 
 const SHARED = path.resolve(__dirname, '../../../shared/data/usda-sr25');
 const sharedPresent = fs.existsSync(path.join(SHARED, 'FOOD_DES.txt'));
@@ -181,6 +185,15 @@ describe('the full USDA SR25 import', () => {
         updated: 0,
         unchanged: generic.length,
       });
+      // Each database's own full-text search (FTS5 on SQLite, tsvector on PostgreSQL) puts the plain food first for
+      // word beginnings as people type them. Record numbers from SR25's FOOD_DES.txt.
+      const first = async (q: string) =>
+        (await searchIngredients(nobody, { q, page: 1, pageSize: 5, archived: false, category: '' })).items[0]?.source;
+      expect(await first('straw rasp')).toBe('USDA SR25 record 09316'); // Strawberries, raw
+      expect(await first('honey')).toBe('USDA SR25 record 19296'); // Honey
+      expect(await first('lemon juice')).toBe('USDA SR25 record 09152'); // Lemon juice, raw
+      expect(await first('blueb')).toBe('USDA SR25 record 09050'); // Blueberries, raw
+      expect(await first('maple syrup')).toBe('USDA SR25 record 19353'); // Syrups, maple
     },
     60_000,
   );
