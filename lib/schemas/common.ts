@@ -37,8 +37,16 @@ export const token = () =>
     .max(200, 'This link is not valid.')
     .required('This link is incomplete.');
 
+/** The largest id a row can have: ids are 32-bit integers on PostgreSQL. */
+export const MAX_ID = 2_147_483_647;
+
 export const idParam = yup.object({
-  id: yup.number().integer('Not a valid id.').positive('Not a valid id.').required('An id is required.'),
+  id: yup
+    .number()
+    .integer('Not a valid id.')
+    .positive('Not a valid id.')
+    .max(MAX_ID, 'Not a valid id.')
+    .required('An id is required.'),
 });
 
 /** The brewery's prefix for lot codes: letters and digits, as printed on labels. */

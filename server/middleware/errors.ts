@@ -1,5 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
+import { DatabaseError, UniqueConstraintError, ValidationError as SequelizeValidationError } from 'sequelize';
 
 import type { ErrorBody } from '@/lib/api/types';
 import { HttpError, notFound } from '@/server/errors';
@@ -17,6 +17,10 @@ function convert(error: unknown): HttpError {
     const fields = Object.fromEntries(error.errors.map((e) => [e.path ?? '_', 'This value is already used.']));
     return new HttpError(409, 'conflict', 'This value is already used.', fields);
   }
+  // PostgreSQL's data exceptions (class 22: a number past its column's range, text too long for it) are the sender's
+  // values, wherever a schema let them through.
+  if (error instanceof DatabaseError && /^22/.test(String((error.parent as { code?: unknown }).code ?? '')))
+    return new HttpError(400, 'invalid_input', 'A value is out of range or too long.');
   if (error instanceof SequelizeValidationError) {
     const fields = Object.fromEntries(error.errors.map((e) => [e.path ?? '_', e.message]));
     return new HttpError(400, 'invalid_input', 'Some values are not valid.', fields);

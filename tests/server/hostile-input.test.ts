@@ -154,7 +154,17 @@ function pathsFor(template: string): string[] {
     : template.includes('/ingredients')
       ? ownIds.ingredient
       : ownIds.format;
-  return [...new Set([fill(String(ownId)), fill(String(strangerRecipeId)), fill('abc'), fill('1e309'), fill('%00')])];
+  // 3000000000: past a 32-bit integer, which PostgreSQL's id columns are.
+  return [
+    ...new Set([
+      fill(String(ownId)),
+      fill(String(strangerRecipeId)),
+      fill('abc'),
+      fill('1e309'),
+      fill('3000000000'),
+      fill('%00'),
+    ]),
+  ];
 }
 
 // Routes that would end the session the walk runs under.
