@@ -2,6 +2,8 @@ import crypto from 'node:crypto';
 import path from 'node:path';
 import type { Readable } from 'node:stream';
 
+import type { Transaction } from 'sequelize';
+
 import type { Attachment } from '@/lib/api/types';
 import { config } from '@/server/config';
 import { Attachment as AttachmentRow, transaction, User } from '@/server/db';
@@ -67,15 +69,21 @@ export async function storeFile(
       .basename(file.originalname)
       .replace(/[^\w .()-]+/g, '_')
       .slice(0, 200) || `file.${type.ext}`;
-  let stored = false;
+  const usedBy = (t?: Transaction) =>
+    AttachmentRow.sum('sizeBytes', { where: { organisationId: auth.organisationId }, transaction: t }).then(
+      (n) => n ?? 0,
+    );
+  // A first look without the write lock refuses a full store before any bytes are sent to it.
+  const usedBefore = await usedBy();
+  if (usedBefore + file.buffer.length > config.uploadQuotaBytes) throw quotaFull(usedBefore);
+  // The file is stored before the write transaction, so the lock every instance shares is not held during the
+  // transfer; a crash between the two leaves a file without a row, which removeOrphanUploads takes away.
+  await putObject(storedName, file.buffer, type.mime);
   try {
-    // The quota is checked and the row written in one write transaction, so two uploads at once cannot both pass.
+    // The quota is checked again and the row written in one write transaction, so two uploads at once cannot both pass.
     const created = await transaction(async (t) => {
-      const used =
-        (await AttachmentRow.sum('sizeBytes', { where: { organisationId: auth.organisationId }, transaction: t })) ?? 0;
+      const used = await usedBy(t);
       if (used + file.buffer.length > config.uploadQuotaBytes) throw quotaFull(used);
-      await putObject(storedName, file.buffer, type.mime);
-      stored = true;
       return AttachmentRow.create(
         {
           organisationId: auth.organisationId,
@@ -94,7 +102,7 @@ export async function storeFile(
       await created.reload({ include: [{ model: User, as: 'uploadedBy', attributes: ['name'] }] }),
     );
   } catch (error) {
-    if (stored) await deleteObject(storedName).catch(() => undefined);
+    await deleteObject(storedName).catch(() => undefined);
     throw error;
   }
 }
