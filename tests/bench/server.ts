@@ -5,6 +5,8 @@ import path from 'node:path';
 
 import { Client } from 'pg';
 
+import { dropDatabase } from '../server/pg-teardown';
+
 export const ROOT = path.resolve(__dirname, '../..');
 
 /** The PostgreSQL server `--pg` runs against (a database the role may CREATE DATABASE from), or null for SQLite. */
@@ -35,7 +37,7 @@ export async function startServer(
 ): Promise<{ child: ChildProcess; url: string; dir: string; stop: () => Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'fizzwright-bench-'));
   const database: Record<string, string> = {};
-  let dropDatabase = async () => undefined as void;
+  let dropBenchDatabase = async () => undefined as void;
   if (postgres) {
     const name = `fizzwright_bench_${Date.now()}`;
     await onServer(postgres, (client) => client.query(`CREATE DATABASE ${name}`));
@@ -43,8 +45,8 @@ export async function startServer(
     url.pathname = `/${name}`;
     database.DATABASE_URL = url.toString();
     database.JWT_SECRET = 'bench-only-secret-0123456789abcdef0123456789';
-    dropDatabase = async () => {
-      await onServer(postgres, (client) => client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`));
+    dropBenchDatabase = async () => {
+      await onServer(postgres, (client) => dropDatabase(client, name));
     };
   }
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
@@ -78,7 +80,7 @@ export async function startServer(
     const exited = new Promise((resolve) => child.once('exit', resolve));
     child.kill('SIGTERM');
     await exited;
-    await dropDatabase();
+    await dropBenchDatabase();
     fs.rmSync(dir, { recursive: true, force: true });
   };
   return { child, url, dir, stop };
