@@ -108,7 +108,7 @@ function createSqlite(databasePath: string): Sequelize {
 /** Counts (`count(*)`, bigint) come back from node-postgres as text; every count here fits a JavaScript number. */
 pg.types.setTypeParser(pg.types.builtins.INT8, (value: string) => Number(value));
 
-/** The address each PostgreSQL Sequelize was made from (its own connections for locks and listeners use it). */
+/** The address each PostgreSQL Sequelize was made from: the migration lock takes a connection of its own. */
 const postgresUrls = new WeakMap<Sequelize, string>();
 
 /** A Sequelize for a PostgreSQL address. Also used by `db:copy` for its target. */
