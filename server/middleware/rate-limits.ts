@@ -33,6 +33,11 @@ class SharedCounter implements Store {
     this.windowMs = options.windowMs;
   }
 
+  /** The row's key: the limit's name and the client's key, hashed when long (an e-mail field can hold anything). */
+  private rowKey(key: string): string {
+    return this.prefix + (key.length > 200 ? hashToken(key) : key);
+  }
+
   async increment(key: string): Promise<IncrementResponse> {
     if (++this.increments % 500 === 0)
       await sequelize.query('DELETE FROM rate_limit_hits WHERE reset_at < now()').catch(() => undefined);
@@ -43,19 +48,19 @@ class SharedCounter implements Store {
          hits = CASE WHEN rate_limit_hits.reset_at <= now() THEN 1 ELSE rate_limit_hits.hits + 1 END,
          reset_at = CASE WHEN rate_limit_hits.reset_at <= now() THEN EXCLUDED.reset_at ELSE rate_limit_hits.reset_at END
        RETURNING hits, reset_at`,
-      { replacements: { key: this.prefix + key, windowMs: this.windowMs } },
+      { replacements: { key: this.rowKey(key), windowMs: this.windowMs } },
     )) as [{ hits: number; reset_at: Date }[], unknown];
     return { totalHits: rows[0].hits, resetTime: new Date(rows[0].reset_at) };
   }
 
   async decrement(key: string): Promise<void> {
     await sequelize.query('UPDATE rate_limit_hits SET hits = greatest(hits - 1, 0) WHERE key = :key', {
-      replacements: { key: this.prefix + key },
+      replacements: { key: this.rowKey(key) },
     });
   }
 
   async resetKey(key: string): Promise<void> {
-    await sequelize.query('DELETE FROM rate_limit_hits WHERE key = :key', { replacements: { key: this.prefix + key } });
+    await sequelize.query('DELETE FROM rate_limit_hits WHERE key = :key', { replacements: { key: this.rowKey(key) } });
   }
 }
 

@@ -84,6 +84,15 @@ shared('instances sharing PostgreSQL', () => {
     expect(await helpers.storedKeys()).toEqual([kept[0].storedName]);
   });
 
+  it('count an attempt at any account name, however long, without a 5xx', async () => {
+    const res = await request(second)
+      .post('/api/auth/sign-in')
+      .send({ email: `${'x'.repeat(5000)}@brewery.test`, password: 'whatever-1' });
+    expect(res.status).toBe(400);
+    // The form's own answer about the field (the limit counted the attempt first, under a hash of the name).
+    expect(res.body.error.fields.email).toEqual(expect.any(String));
+  });
+
   it('count one sign-in limit together: failed attempts at an account spent on one are refused on the other', async () => {
     for (let i = 0; i < 3; i++) {
       await request(i % 2 ? second : first)
