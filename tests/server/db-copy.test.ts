@@ -62,8 +62,7 @@ beforeAll(async () => {
   remotePort = (await remote.run()).port;
 });
 afterAll(async () => {
-  if (process.env.TEST_PG !== 'true') return;
-  await remote.close();
+  await remote?.close();
   fs.rmSync(work, { recursive: true, force: true });
 });
 
