@@ -1,7 +1,7 @@
 // After `npm run test:pg`: drops the databases each test file made (see setup-env.ts).
 import { Client } from 'pg';
 
-import { PG_TEST_PREFIX } from './pg-names';
+import { pgTestPrefix } from './pg-names';
 
 /**
  * Drops a database, ending its sessions first. PostgreSQL refuses to end a session of another role (an autovacuum
@@ -26,7 +26,7 @@ export default async function dropTestDatabases(): Promise<void> {
   try {
     const { rows } = await client.query<{ datname: string }>(
       'SELECT datname FROM pg_database WHERE starts_with(datname, $1)',
-      [PG_TEST_PREFIX],
+      [pgTestPrefix()],
     );
     for (const { datname } of rows) await dropDatabase(client, datname);
   } finally {

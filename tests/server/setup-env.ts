@@ -3,7 +3,7 @@ import { execFileSync } from 'node:child_process';
 import os from 'node:os';
 import path from 'node:path';
 
-import { PG_TEST_PREFIX } from './pg-names';
+import { pgTestPrefix } from './pg-names';
 
 process.env.NODE_ENV = 'test';
 process.env.DATABASE_PATH = path.join(
@@ -30,7 +30,7 @@ process.env.UPLOAD_MAX_MB = '1';
  */
 if (process.env.TEST_PG === 'true' && process.env.TEST_DATABASE_URL) {
   const admin = new URL(process.env.TEST_DATABASE_URL);
-  const name = `${PG_TEST_PREFIX}${process.pid}_${Date.now()}_${Math.random().toString(36).slice(2, 8)}`;
+  const name = `${pgTestPrefix()}${process.pid}_${Date.now()}_${Math.random().toString(36).slice(2, 8)}`;
   execFileSync(process.execPath, [
     '-e',
     `const { Client } = require('pg');
