@@ -43,3 +43,6 @@ if (process.env.TEST_PG === 'true' && process.env.TEST_DATABASE_URL) {
   process.env.DATABASE_URL = url.toString();
   process.env.JWT_SECRET = 'test-secret-for-postgres-runs-only-0123456789';
 }
+
+// The AWS SDK's notice about Node 22 (see server/services/object-store.ts), once per test file otherwise.
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = 'true';
