@@ -1,17 +1,23 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 
-import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import type { Express } from 'express';
-import S3rver from 's3rver';
 import request from 'supertest';
 
 import { config } from '@/server/config';
 import { Attachment } from '@/server/db';
 import { closeObjectStore, getObject } from '@/server/services/object-store';
 
-import { addMember, type Agent, asBuffer, signUpOwner, startApp, stopApp, storedKeys } from './helpers';
+import {
+  addMember,
+  type Agent,
+  asBuffer,
+  signUpOwner,
+  startApp,
+  startRemoteStore,
+  stopApp,
+  storedKeys,
+} from './helpers';
 
 let app: Express;
 let owner: Agent;
@@ -116,22 +122,13 @@ describe('the object store', () => {
   });
 
   it('uses the bucket S3_BUCKET names at S3_ENDPOINT, with the SDK’s usual credentials, and reports it', async () => {
-    // Another S3-compatible server standing in for the brewery's object store.
-    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'fizzwright-remote-s3-'));
-    const remote = new S3rver({
-      address: '127.0.0.1',
-      port: 0,
-      silent: true,
-      directory: dir,
-      configureBuckets: [{ name: 'brewery-files' }],
-    });
-    const { port } = await remote.run();
+    const remote = await startRemoteStore('brewery-files');
     const saved = { s3: config.s3, key: process.env.AWS_ACCESS_KEY_ID, secret: process.env.AWS_SECRET_ACCESS_KEY };
     process.env.AWS_ACCESS_KEY_ID = 'S3RVER';
     process.env.AWS_SECRET_ACCESS_KEY = 'S3RVER';
     config.s3 = {
       bucket: 'brewery-files',
-      endpoint: `http://127.0.0.1:${port}`,
+      endpoint: remote.endpoint,
       region: 'eu-west-1',
       forcePathStyle: true,
     };
@@ -144,15 +141,7 @@ describe('the object store', () => {
         .attach('file', PDF, 'remote.pdf')
         .expect(201);
       const row = await Attachment.findByPk(res.body.id);
-      const client = new S3Client({
-        region: 'eu-west-1',
-        endpoint: `http://127.0.0.1:${port}`,
-        forcePathStyle: true,
-        credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' },
-      });
-      const listed = await client.send(new ListObjectsV2Command({ Bucket: 'brewery-files' }));
-      expect(listed.Contents?.map((o) => o.Key)).toEqual([row!.storedName]);
-      client.destroy();
+      expect(await remote.keys()).toEqual([row!.storedName]);
       const download = await brewer.get(res.body.url).buffer(true).parse(asBuffer).expect(200);
       expect(Buffer.compare(download.body as Buffer, PDF)).toBe(0);
       // Another brewery still gets nothing, whatever the store.
@@ -164,7 +153,6 @@ describe('the object store', () => {
       process.env.AWS_ACCESS_KEY_ID = saved.key;
       process.env.AWS_SECRET_ACCESS_KEY = saved.secret;
       await remote.close();
-      fs.rmSync(dir, { recursive: true, force: true });
     }
     const health = await request(app).get('/api/health').expect(200);
     expect(health.body.storage).toEqual({ kind: 'local', bucket: 'fizzwright-uploads' });

@@ -9,10 +9,10 @@ import os from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
 
-import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import type { Express } from 'express';
-import S3rver from 's3rver';
 import request from 'supertest';
+
+import { startRemoteStore } from './helpers';
 
 const withPostgres = process.env.TEST_PG === 'true' ? describe : describe.skip;
 const ROOT = path.resolve(__dirname, '../..');
@@ -47,19 +47,11 @@ const sourceEnv = {
   DATABASE_PATH: path.join(work, 'brewery.sqlite'),
   UPLOADS_DIR: path.join(work, 'uploads'),
 };
-let remote: S3rver;
-let remotePort: number;
+let remote: Awaited<ReturnType<typeof startRemoteStore>> | undefined;
 
 beforeAll(async () => {
   if (process.env.TEST_PG !== 'true') return;
-  remote = new S3rver({
-    address: '127.0.0.1',
-    port: 0,
-    silent: true,
-    directory: path.join(work, 'remote'),
-    configureBuckets: [{ name: 'hosted-files' }],
-  });
-  remotePort = (await remote.run()).port;
+  remote = await startRemoteStore('hosted-files');
 });
 afterAll(async () => {
   await remote?.close();
@@ -80,7 +72,7 @@ async function dbCopy(to: string): Promise<{ code: number; out: string }> {
           DATABASE_URL: '',
           JWT_SECRET: '',
           S3_BUCKET: 'hosted-files',
-          S3_ENDPOINT: `http://127.0.0.1:${remotePort}`,
+          S3_ENDPOINT: remote!.endpoint,
           S3_FORCE_PATH_STYLE: 'true',
           AWS_ACCESS_KEY_ID: 'S3RVER',
           AWS_SECRET_ACCESS_KEY: 'S3RVER',
@@ -133,7 +125,7 @@ withPostgres('npm run db:copy', () => {
     // The hosted instance on the copy: PostgreSQL and the bucket.
     const hosted = loadServer({
       S3_BUCKET: 'hosted-files',
-      S3_ENDPOINT: `http://127.0.0.1:${remotePort}`,
+      S3_ENDPOINT: remote!.endpoint,
       S3_FORCE_PATH_STYLE: 'true',
     });
     // The SDK reads its credentials when it first sends, from the environment.
@@ -169,17 +161,7 @@ withPostgres('npm run db:copy', () => {
     const archived = await hosted.db.Ingredient.findByPk(ingredient.body.id);
     expect(archived!.archivedAt).not.toBeNull();
     expect(await hosted.db.Ingredient.findByPk(made.body.id)).toBeNull();
-    const client = new S3Client({
-      region: 'us-east-1',
-      endpoint: `http://127.0.0.1:${remotePort}`,
-      forcePathStyle: true,
-      credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' },
-    });
-    const objects = await client.send(new ListObjectsV2Command({ Bucket: 'hosted-files' }));
-    expect(objects.Contents?.map((o) => o.Key)).toEqual([
-      (await source.db.Attachment.findByPk(file.body.id))!.storedName,
-    ]);
-    client.destroy();
+    expect(await remote!.keys()).toEqual([(await source.db.Attachment.findByPk(file.body.id))!.storedName]);
 
     // Another installation's SQLite file may not be poured into this database.
     await hosted.db.Organisation.create({ name: 'Someone Else Brewing' });

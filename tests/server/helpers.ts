@@ -1,11 +1,17 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+
+import { S3Client } from '@aws-sdk/client-s3';
 import type { Express } from 'express';
+import S3rver from 's3rver';
 import request from 'supertest';
 
 import type { Session } from '@/lib/api/types';
 import type { Role } from '@/lib/roles';
 import { createApp } from '@/server/app';
 import { OutboxMessage, prepareDatabase, sequelize } from '@/server/db';
-import { closeObjectStore, listObjects } from '@/server/services/object-store';
+import { closeObjectStore, listBucket, listObjects } from '@/server/services/object-store';
 
 export type Agent = ReturnType<typeof request.agent>;
 
@@ -78,3 +84,38 @@ export const asBuffer = (r: import('superagent').Response, cb: (err: Error | nul
   r.on('data', (c: Buffer) => chunks.push(c));
   r.on('end', () => cb(null, Buffer.concat(chunks)));
 };
+
+/**
+ * Another S3-compatible server on loopback, standing in for a brewery's object store (S3_BUCKET at S3_ENDPOINT),
+ * reached with the credentials `S3RVER`/`S3RVER`: its address, the keys in its bucket, and a way to stop it.
+ */
+export async function startRemoteStore(bucket: string) {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'fizzwright-remote-s3-'));
+  const server = new S3rver({
+    address: '127.0.0.1',
+    port: 0,
+    silent: true,
+    directory: dir,
+    configureBuckets: [{ name: bucket }],
+  });
+  const endpoint = `http://127.0.0.1:${(await server.run()).port}`;
+  const client = new S3Client({
+    region: 'us-east-1',
+    endpoint,
+    forcePathStyle: true,
+    credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' },
+  });
+  return {
+    endpoint,
+    async keys(): Promise<string[]> {
+      const keys: string[] = [];
+      for await (const object of listBucket(client, bucket)) keys.push(object.key);
+      return keys;
+    },
+    async close(): Promise<void> {
+      client.destroy();
+      await server.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
