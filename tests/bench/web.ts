@@ -4,7 +4,8 @@
  * SDK served the same way, in alternating rounds; then a repeat visit, and the recipe designer signed in. Prints
  * medians, the ratio to the empty app, and the bytes on the wire by resource type.
  *
- * BENCH_WEB_ROUNDS (default 5) sets the rounds; CHROMIUM_PATH the browser (default /usr/bin/chromium).
+ * BENCH_WEB_ROUNDS (default 5) sets the rounds; CHROMIUM_PATH the browser (default /usr/bin/chromium);
+ * BENCH_WEB_TRACE=1 also prints when each response of the last round's first visits finished.
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
@@ -34,6 +35,11 @@ interface Visit {
   bytesBeforeUsable: number;
   bytesByType: Record<string, number>;
   totalBytes: number;
+  /** Main-thread time spent running script, and on all tasks, by the time the network went quiet (CDP metrics). */
+  scriptMs: number;
+  taskMs: number;
+  /** Each response: when it finished (ms from the first request) and its bytes on the wire. */
+  timeline: { url: string; at: number; bytes: number }[];
 }
 
 /** The empty app, exported once, with the same precompressed copies the product's build writes. */
@@ -84,14 +90,22 @@ async function visit(context: BrowserContext, page: Page, url: string): Promise<
   });
   await cdp.send('Emulation.setCPUThrottlingRate', { rate: PROFILE.cpuSlowdown });
   const types = new Map<string, string>();
-  const finished: { type: string; bytes: number; at: number }[] = [];
+  const finished: { type: string; bytes: number; at: number; url: string }[] = [];
+  const urls = new Map<string, string>();
   let startedAt: number | null = null;
   cdp.on('Network.requestWillBeSent', (e) => {
     if (startedAt === null) startedAt = e.timestamp;
+    urls.set(e.requestId, e.request.url);
   });
+  await cdp.send('Performance.enable');
   cdp.on('Network.responseReceived', (e) => types.set(e.requestId, e.type));
   cdp.on('Network.loadingFinished', (e) =>
-    finished.push({ type: types.get(e.requestId) ?? 'Other', bytes: e.encodedDataLength, at: e.timestamp }),
+    finished.push({
+      type: types.get(e.requestId) ?? 'Other',
+      bytes: e.encodedDataLength,
+      at: e.timestamp,
+      url: urls.get(e.requestId) ?? '',
+    }),
   );
   await page.goto(url, { waitUntil: 'commit' });
   await page.waitForFunction(() => (window as unknown as { __usableAt?: number }).__usableAt !== undefined, null, {
@@ -101,6 +115,8 @@ async function visit(context: BrowserContext, page: Page, url: string): Promise<
   const usableMs = await page.evaluate(() => (window as unknown as { __usableAt: number }).__usableAt);
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(500);
+  const { metrics } = await cdp.send('Performance.getMetrics');
+  const metric = (name: string) => (metrics.find((m) => m.name === name)?.value ?? 0) * 1000;
   await cdp.detach();
   const bytesByType: Record<string, number> = {};
   for (const f of finished) bytesByType[f.type] = (bytesByType[f.type] ?? 0) + f.bytes;
@@ -115,6 +131,9 @@ async function visit(context: BrowserContext, page: Page, url: string): Promise<
     bytesBeforeUsable: finished.filter((f) => (f.at - start) * 1000 <= usableMs).reduce((s, f) => s + f.bytes, 0),
     bytesByType,
     totalBytes: finished.reduce((s, f) => s + f.bytes, 0),
+    scriptMs: metric('ScriptDuration'),
+    taskMs: metric('TaskDuration'),
+    timeline: finished.map((f) => ({ url: new URL(f.url).pathname, at: (f.at - start) * 1000, bytes: f.bytes })),
   };
 }
 
@@ -174,7 +193,7 @@ async function main(): Promise<void> {
       await context.close();
       process.stdout.write(`round ${round + 1}/${ROUNDS} done\n`);
     }
-    const med = (list: Visit[], key: keyof Omit<Visit, 'bytesByType'>) => median(list.map((v) => v[key]));
+    const med = (list: Visit[], key: keyof Omit<Visit, 'bytesByType' | 'timeline'>) => median(list.map((v) => v[key]));
     const oursMs = med(results.ours, 'usableMs');
     const emptyMs = med(results.empty, 'usableMs');
     console.log(
@@ -184,6 +203,7 @@ async function main(): Promise<void> {
       'page'.padEnd(44),
       'usable ms'.padStart(10),
       'scripts in'.padStart(11),
+      'script ms'.padStart(10),
       'first visit'.padStart(12),
       'repeat (before usable)'.padStart(24),
     );
@@ -191,6 +211,7 @@ async function main(): Promise<void> {
       'sign-in (Fizzwright)'.padEnd(44),
       oursMs.toFixed(0).padStart(10),
       med(results.ours, 'scriptsDoneMs').toFixed(0).padStart(11),
+      med(results.ours, 'scriptMs').toFixed(0).padStart(10),
       kb(med(results.ours, 'totalBytes')).padStart(12),
       kb(med(results.oursRepeat, 'bytesBeforeUsable')).padStart(24),
     );
@@ -198,6 +219,7 @@ async function main(): Promise<void> {
       'empty Expo Router app'.padEnd(44),
       emptyMs.toFixed(0).padStart(10),
       med(results.empty, 'scriptsDoneMs').toFixed(0).padStart(11),
+      med(results.empty, 'scriptMs').toFixed(0).padStart(10),
       kb(med(results.empty, 'totalBytes')).padStart(12),
     );
     console.log(
@@ -208,6 +230,17 @@ async function main(): Promise<void> {
     const types = [...new Set(results.ours.flatMap((v) => Object.keys(v.bytesByType)))];
     for (const type of types)
       console.log(`  ${type.padEnd(12)} ${kb(median(results.ours.map((v) => v.bytesByType[type] ?? 0))).padStart(10)}`);
+    if (process.env.BENCH_WEB_TRACE) {
+      for (const [label, list] of [
+        ['sign-in', results.ours],
+        ['empty app', results.empty],
+      ] as const) {
+        const last = list[list.length - 1];
+        console.log(`\nLast ${label} first visit: usable at ${last.usableMs.toFixed(0)} ms`);
+        for (const t of last.timeline)
+          console.log(`  ${t.at.toFixed(0).padStart(6)} ms  ${kb(t.bytes).padStart(9)}  ${t.url}`);
+      }
+    }
     const ratio = oursMs / emptyMs;
     const firstBytes = med(results.ours, 'totalBytes');
     const repeatBytes = med(results.oursRepeat, 'bytesBeforeUsable');
