@@ -35,9 +35,8 @@ interface Visit {
   bytesBeforeUsable: number;
   bytesByType: Record<string, number>;
   totalBytes: number;
-  /** Main-thread time spent running script, and on all tasks, by the time the network went quiet (CDP metrics). */
+  /** Main-thread time spent running script by the time the network went quiet (CDP metrics). */
   scriptMs: number;
-  taskMs: number;
   /** Each response: when it finished (ms from the first request) and its bytes on the wire. */
   timeline: { url: string; at: number; bytes: number }[];
 }
@@ -82,6 +81,7 @@ const usableDetector = (selector: string) => `
 async function visit(context: BrowserContext, page: Page, url: string): Promise<Visit> {
   const cdp = await context.newCDPSession(page);
   await cdp.send('Network.enable');
+  await cdp.send('Performance.enable');
   await cdp.send('Network.emulateNetworkConditions', {
     offline: false,
     latency: PROFILE.latency,
@@ -97,7 +97,6 @@ async function visit(context: BrowserContext, page: Page, url: string): Promise<
     if (startedAt === null) startedAt = e.timestamp;
     urls.set(e.requestId, e.request.url);
   });
-  await cdp.send('Performance.enable');
   cdp.on('Network.responseReceived', (e) => types.set(e.requestId, e.type));
   cdp.on('Network.loadingFinished', (e) =>
     finished.push({
@@ -116,7 +115,6 @@ async function visit(context: BrowserContext, page: Page, url: string): Promise<
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(500);
   const { metrics } = await cdp.send('Performance.getMetrics');
-  const metric = (name: string) => (metrics.find((m) => m.name === name)?.value ?? 0) * 1000;
   await cdp.detach();
   const bytesByType: Record<string, number> = {};
   for (const f of finished) bytesByType[f.type] = (bytesByType[f.type] ?? 0) + f.bytes;
@@ -131,9 +129,12 @@ async function visit(context: BrowserContext, page: Page, url: string): Promise<
     bytesBeforeUsable: finished.filter((f) => (f.at - start) * 1000 <= usableMs).reduce((s, f) => s + f.bytes, 0),
     bytesByType,
     totalBytes: finished.reduce((s, f) => s + f.bytes, 0),
-    scriptMs: metric('ScriptDuration'),
-    taskMs: metric('TaskDuration'),
-    timeline: finished.map((f) => ({ url: new URL(f.url).pathname, at: (f.at - start) * 1000, bytes: f.bytes })),
+    scriptMs: (metrics.find((m) => m.name === 'ScriptDuration')?.value ?? 0) * 1000,
+    timeline: finished.map((f) => ({
+      url: f.url.startsWith('data:') ? f.url.slice(0, f.url.indexOf(';')) : new URL(f.url).pathname,
+      at: (f.at - start) * 1000,
+      bytes: f.bytes,
+    })),
   };
 }
 
